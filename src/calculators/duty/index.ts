@@ -1,0 +1,3 @@
+import type { CalculatorDefinition } from '../types.ts';
+
+export const dutyCalculators: readonly CalculatorDefinition[] = [];

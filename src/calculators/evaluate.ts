@@ -1,0 +1,106 @@
+/**
+ * Validation and evaluation shared by the widget, the CLI, the record import and the tests.
+ * Untrusted values come in (strings, numbers, anything); either SI outputs come out, all finite,
+ * or an InputRangeError naming the input.
+ */
+import { ComputationError, InputRangeError, type Range } from '../core/errors.ts';
+import { parseQuantity, siSymbol, UnitError } from '../core/units/index.ts';
+import type { CalculatorDefinition, InputDef, Result, Values } from './types.ts';
+
+export interface EvaluateOptions {
+  /** Fill missing non-required inputs with their defaults (the page does; the CLI does for non-required). */
+  readonly fillDefaults?: boolean;
+}
+
+function rangeOf(def: Extract<InputDef, { min: number }>): Range {
+  return { min: def.min, max: def.max, minExclusive: def.minExclusive, maxExclusive: def.maxExclusive };
+}
+
+/** True when an input applies under the current choices (see `when`). */
+export function isActive(def: InputDef, values: Values): boolean {
+  if (!def.when) return true;
+  const v = values[def.when.key];
+  return typeof v === 'string' && def.when.is.includes(v);
+}
+
+/** Converts and checks raw values (SI numbers or strings such as "25 lb") into typed SI values. */
+export function validateInputs(calc: CalculatorDefinition, raw: Readonly<Record<string, unknown>>, opts: EvaluateOptions = {}): Values {
+  const fill = opts.fillDefaults ?? true;
+  const values: Record<string, number | string | undefined> = {};
+  // choices first: `when` clauses of number inputs depend on them
+  const ordered = [...calc.inputs].sort((a, b) => Number(a.kind !== 'choice') - Number(b.kind !== 'choice'));
+  for (const def of ordered) {
+    const has = Object.prototype.hasOwnProperty.call(raw, def.key);
+    let v = has ? raw[def.key] : undefined;
+    if (def.kind === 'choice') {
+      if (v === undefined || v === '') {
+        if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', `choose one of ${def.options.map((o) => o.value).join(', ')}`);
+        v = def.default;
+      }
+      if (typeof v !== 'string' || !def.options.some((o) => o.value === v)) {
+        throw new InputRangeError(def.key, v, undefined, '', `choose one of ${def.options.map((o) => o.value).join(', ')}`);
+      }
+      values[def.key] = v;
+      continue;
+    }
+    if (!isActive(def, values)) continue;
+    if (def.kind === 'text') {
+      if (v === undefined || v === null) {
+        if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', 'required');
+        v = def.default;
+      }
+      if (typeof v !== 'string') throw new InputRangeError(def.key, typeof v, undefined, '', 'must be text');
+      if (v.length > def.maxLength) throw new InputRangeError(def.key, `${v.length} characters`, undefined, '', `longer than ${def.maxLength} characters`);
+      values[def.key] = v;
+      continue;
+    }
+    const unit = siSymbol(def.kind);
+    if (v === undefined || v === null || (typeof v === 'string' && v.trim() === '')) {
+      if (def.optional) { values[def.key] = undefined; continue; }
+      if (def.required && !fill) throw new InputRangeError(def.key, undefined, rangeOf(def), unit, 'required');
+      v = def.default;
+    }
+    let n: number;
+    if (typeof v === 'number') n = v;
+    else if (typeof v === 'string') {
+      try {
+        n = parseQuantity(v, def.kind);
+      } catch (e) {
+        if (e instanceof UnitError) throw new InputRangeError(def.key, v, rangeOf(def), unit, e.message);
+        throw e;
+      }
+    } else throw new InputRangeError(def.key, v, rangeOf(def), unit, 'not a number');
+    const r = rangeOf(def);
+    if (!Number.isFinite(n)) throw new InputRangeError(def.key, n, r, unit, 'not a finite number');
+    const low = r.minExclusive ? n <= r.min : n < r.min;
+    const high = r.maxExclusive ? n >= r.max : n > r.max;
+    if (low || high) throw new InputRangeError(def.key, n, r, unit);
+    values[def.key] = n;
+  }
+  return values;
+}
+
+/**
+ * Validates, computes and checks the outputs: every numeric output is finite. A non-finite
+ * output is a bug or an unguarded corner, so it fails loudly rather than reaching a page.
+ */
+export function evaluate(calc: CalculatorDefinition, raw: Readonly<Record<string, unknown>>, opts: EvaluateOptions = {}): Result & { values: Values } {
+  const values = validateInputs(calc, raw, opts);
+  const result = calc.compute(values);
+  for (const def of calc.outputs) {
+    const v = result.outputs[def.key];
+    if (v === undefined) {
+      if (!def.optional) throw new ComputationError(`${calc.id}: output '${def.key}' is missing`);
+      continue;
+    }
+    if (typeof v === 'number' && !Number.isFinite(v)) {
+      throw new ComputationError(`${calc.id}: output '${def.key}' is not finite for these inputs`);
+    }
+  }
+  return { ...result, values };
+}
+
+/** Default values of every input (SI), as the page pre-fills them. */
+export function defaults(calc: CalculatorDefinition): Values {
+  return Object.fromEntries(calc.inputs.map((d) => [d.key, d.default]));
+}

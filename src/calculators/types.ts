@@ -1,0 +1,176 @@
+/**
+ * The calculator definition: one object per calculator drives the page widget, the CLI, the
+ * verification cases, the print sheet and the tests. Defaults are written once, here.
+ */
+import type { Provenance, SourceRef } from '../core/sources/index.ts';
+import type { QuantityKind } from '../core/units/index.ts';
+
+export interface NumberInput {
+  readonly key: string;
+  readonly label: string;
+  readonly kind: QuantityKind;
+  /** Default in SI; the page pre-fills it. */
+  readonly default: number;
+  readonly min: number;
+  readonly max: number;
+  readonly minExclusive?: boolean;
+  readonly maxExclusive?: boolean;
+  readonly help: string;
+  /** When true the CLI and evaluate() refuse to fill the default (it is a design quantity). */
+  readonly required?: boolean;
+  /** When true the input may be left empty: compute receives undefined. */
+  readonly optional?: boolean;
+  /** Only shown when another (choice) input has one of these values. */
+  readonly when?: { readonly key: string; readonly is: readonly string[] };
+}
+
+export interface ChoiceOption<V extends string = string> {
+  readonly value: V;
+  readonly label: string;
+}
+
+export interface ChoiceInput<V extends string = string> {
+  readonly key: string;
+  readonly label: string;
+  readonly kind: 'choice';
+  readonly options: readonly ChoiceOption<V>[];
+  readonly default: V;
+  readonly help: string;
+  readonly required?: boolean;
+  readonly when?: { readonly key: string; readonly is: readonly string[] };
+}
+
+/**
+ * Free text such as a pasted CSV record. The page shows a text area with a file picker; the CLI
+ * takes `--in key=@file.csv`. The value is untrusted: compute must parse it defensively and throw
+ * an InputRangeError (naming the row) for malformed data.
+ */
+export interface TextInput {
+  readonly key: string;
+  readonly label: string;
+  readonly kind: 'text';
+  readonly default: string;
+  /** Largest accepted length in characters (protects the page from huge pastes). */
+  readonly maxLength: number;
+  readonly help: string;
+  readonly rows?: number;
+  readonly required?: boolean;
+  readonly when?: { readonly key: string; readonly is: readonly string[] };
+}
+
+export type InputDef = NumberInput | ChoiceInput | TextInput;
+
+export interface OutputDef {
+  readonly key: string;
+  readonly label: string;
+  /** A quantity kind, or 'text' for category outputs such as the damping regime. */
+  readonly kind: QuantityKind | 'text';
+  readonly help?: string;
+  /** Significant digits shown (default 4). */
+  readonly digits?: number;
+  /** True when the output is absent for some inputs (e.g. log decrement above critical damping). */
+  readonly optional?: boolean;
+  /**
+   * Pages whose calculator takes this output as an input: the widget shows a link that opens
+   * that page with the value filled in (e.g. a duty page's mean power → the thermal pages).
+   */
+  readonly feeds?: readonly { readonly page: string; readonly input: string; readonly label: string }[];
+}
+
+/** Values handed to compute: SI numbers, or the chosen option of a choice input. */
+export type Values = Readonly<Record<string, number | string | undefined>>;
+export type Outputs = Record<string, number | string | undefined>;
+
+/** A chart as data: drawn by the chart element, summarised as text for print and screen readers. */
+export interface ChartSpec {
+  readonly id: string;
+  readonly title: string;
+  readonly x: ChartAxis;
+  readonly y: ChartAxis;
+  readonly series: readonly ChartSeries[];
+  /** Vertical reference lines (e.g. r = √2). */
+  readonly markers?: readonly { readonly x: number; readonly label: string }[];
+  /** One or two sentences that state what the chart shows, with the key numbers. */
+  readonly summary: string;
+}
+
+export interface ChartAxis {
+  readonly label: string;
+  /** Data are SI; the renderer converts to the reader's unit system. */
+  readonly kind: QuantityKind;
+  readonly scale?: 'linear' | 'log';
+  readonly min?: number;
+  readonly max?: number;
+}
+
+export interface ChartSeries {
+  readonly label: string;
+  readonly x: readonly number[];
+  readonly y: readonly number[];
+  readonly style?: 'line' | 'dash' | 'points' | 'thin';
+  /** Palette slot 0..5 (colours live in CSS, not here). */
+  readonly tone?: number;
+}
+
+export interface Result {
+  readonly outputs: Outputs;
+  /** Validity warnings (e.g. a correlation used outside its range). Shown beside the results. */
+  readonly warnings: readonly string[];
+}
+
+export interface VerificationCase {
+  readonly name: string;
+  readonly inputs: Values;
+  readonly expected: Readonly<Record<string, number | string>>;
+  /** Relative tolerance for numbers (absolute when the expected value is 0). */
+  readonly tolerance: number;
+  readonly why: string;
+  readonly source: SourceRef;
+  readonly provenance: Provenance;
+}
+
+export interface CalculatorDefinition {
+  readonly id: string;
+  readonly title: string;
+  readonly summary: string;
+  readonly inputs: readonly InputDef[];
+  readonly outputs: readonly OutputDef[];
+  /** Pure: validated SI values in, SI outputs out. */
+  compute(values: Values): Result;
+  /** Pure: chart data from the same values (called only where charts are drawn). */
+  charts?(values: Values, result: Result): ChartSpec[];
+  readonly verification: readonly VerificationCase[];
+  readonly sources: readonly SourceRef[];
+}
+
+/** Identity with checking: keeps the literal types and catches typos in keys at compile time. */
+export function defineCalculator<const D extends CalculatorDefinition>(def: D): D {
+  return def;
+}
+
+/** Reads a number input the definition guarantees is present. */
+export function num(values: Values, key: string): number {
+  const v = values[key];
+  if (typeof v !== 'number') throw new TypeError(`calculator bug: '${key}' is not a number`);
+  return v;
+}
+
+/** Reads an optional number input. */
+export function optNum(values: Values, key: string): number | undefined {
+  const v = values[key];
+  return typeof v === 'number' ? v : undefined;
+}
+
+/** Reads a text input. */
+export function text(values: Values, key: string): string {
+  const v = values[key];
+  if (typeof v !== 'string') throw new TypeError(`calculator bug: '${key}' is not text`);
+  return v;
+}
+
+/** Reads a choice input. */
+export function choice<V extends string>(values: Values, key: string): V {
+  const v = values[key];
+  if (typeof v !== 'string') throw new TypeError(`calculator bug: '${key}' is not a choice`);
+  return v as V;
+}

@@ -1,0 +1,2 @@
+/** Numerical building blocks shared by every domain. */
+export { adaptiveSimpson } from './adaptiveSimpson.ts';

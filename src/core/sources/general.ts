@@ -1,0 +1,7 @@
+import type { Source } from './source.ts';
+
+export const general = {
+  nist811: { kind: 'standard', citation: 'A. Thompson and B. N. Taylor, Guide for the Use of the International System of Units (SI), NIST Special Publication 811, 2008 ed., Appendix B.' },
+  codata2018: { kind: 'data', citation: 'E. Tiesinga et al., CODATA Recommended Values of the Fundamental Physical Constants: 2018, Rev. Mod. Phys. 93, 025010 (2021).' },
+  lyness1969: { kind: 'paper', citation: 'J. N. Lyness, Notes on the adaptive Simpson quadrature routine, J. ACM 16(3), 483–495, 1969.' },
+} as const satisfies Record<string, Source>;
