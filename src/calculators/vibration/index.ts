@@ -1,4 +1,5 @@
 import type { CalculatorDefinition } from '../types.ts';
 import { sdof } from './sdof.ts';
+import { energyPerCycle } from './energyPerCycle.ts';
 
-export const vibrationCalculators: readonly CalculatorDefinition[] = [sdof];
+export const vibrationCalculators: readonly CalculatorDefinition[] = [sdof, energyPerCycle];
