@@ -68,7 +68,7 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
   const stats: OdeStats = { accepted: 0, rejected: 0, evaluations: 0 };
   const w = stepWork(tab, n);
   const s = tab.c.length;
-  let y = Float64Array.from(y0);
+  const y = Float64Array.from(y0);
   const yPrev = new Float64Array(n);
   const yEv = new Float64Array(n);
   let t = t0;
@@ -108,9 +108,14 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
     t = last ? tEnd : t + h;
     hStep = t - tPrev;
     if (opts.event && opts.event(t, y) < 0) {
-      const tEv = locate(opts.event, tPrev, hStep, (th, out) => denseOutput(tab, yPrev, y, w.k, hStep, th, out), yEv);
-      y = Float64Array.from(yEv);
-      return { t: tEv, y, stoppedByEvent: true, stats };
+      const thEv = locate(opts.event, tPrev, hStep, (th, out) => denseOutput(tab, yPrev, y, w.k, hStep, th, out), yEv);
+      const tEv = tPrev + thEv * hStep;
+      // report the part of the step up to the event, re-parametrised so θ = 1 is the event
+      opts.onStep?.({
+        t0: tPrev, t1: tEv, y0: yPrev, y1: yEv,
+        interpolate: (theta, out) => denseOutput(tab, yPrev, y, w.k, hStep, theta * thEv, out),
+      });
+      return { t: tEv, y: Float64Array.from(yEv), stoppedByEvent: true, stats };
     }
     opts.onStep?.(step);
     if (tab.fsal) w.k[0]!.set(w.k[s - 1]!);
@@ -122,7 +127,7 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
   return { t, y, stoppedByEvent: false, stats };
 }
 
-/** Bisection on θ for the first sign change of g from ≥ 0 to < 0 inside the last step. */
+/** Bisection on θ for the first sign change of g from ≥ 0 to < 0 inside the last step; returns θ. */
 function locate(g: (t: number, y: Float64Array) => number, t0: number, h: number, interp: (th: number, out: Float64Array) => void, out: Float64Array): number {
   let lo = 0;
   let hi = 1;
@@ -133,5 +138,5 @@ function locate(g: (t: number, y: Float64Array) => number, t0: number, h: number
     else lo = mid;
   }
   interp(hi, out);
-  return t0 + hi * h;
+  return hi;
 }
