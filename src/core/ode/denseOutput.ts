@@ -20,17 +20,37 @@ import type { EmbeddedTableau } from './tableau.ts';
 export function denseOutput(
   tab: EmbeddedTableau, y0: Float64Array, y1: Float64Array, k: readonly Float64Array[], h: number, theta: number, out: Float64Array,
 ): void {
+  const r = new Float64Array(5 * y0.length);
+  denseCoefficients(tab, y0, y1, k, h, r);
+  evalDense(r, theta, out);
+}
+
+/** The five coefficient vectors r₁…r₅ of one step, packed [r1 | r2 | r3 | r4 | r5] (length 5n). */
+export function denseCoefficients(
+  tab: EmbeddedTableau, y0: Float64Array, y1: Float64Array, k: readonly Float64Array[], h: number, r: Float64Array,
+): void {
   const d = tab.dense;
   if (!d) throw new Error(`${tab.name} has no dense output`);
+  const n = y0.length;
   const s = k.length;
-  const th1 = 1 - theta;
-  for (let i = 0; i < y0.length; i++) {
+  for (let i = 0; i < n; i++) {
     const r2 = y1[i]! - y0[i]!;
     const r3 = h * k[0]![i]! - r2;
-    const r4 = r2 - h * k[s - 1]![i]! - r3;
     let acc = 0;
     for (let j = 0; j < s; j++) acc += d[j]! * k[j]![i]!;
-    const r5 = h * acc;
-    out[i] = y0[i]! + theta * (r2 + th1 * (r3 + theta * (r4 + th1 * r5)));
+    r[i] = y0[i]!;
+    r[n + i] = r2;
+    r[2 * n + i] = r3;
+    r[3 * n + i] = r2 - h * k[s - 1]![i]! - r3;
+    r[4 * n + i] = h * acc;
+  }
+}
+
+/** Evaluates the dense-output polynomial from packed coefficients at θ ∈ [0, 1]. */
+export function evalDense(r: Float64Array, theta: number, out: Float64Array): void {
+  const n = out.length;
+  const th1 = 1 - theta;
+  for (let i = 0; i < n; i++) {
+    out[i] = r[i]! + theta * (r[n + i]! + th1 * (r[2 * n + i]! + theta * (r[3 * n + i]! + th1 * r[4 * n + i]!)));
   }
 }

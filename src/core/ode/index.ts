@@ -4,7 +4,7 @@ export type { OdeStats, OdeSystem } from './system.ts';
 export { DORMAND_PRINCE_54 } from './dormandPrince.ts';
 export { rkStep, stepWork, type StepWork } from './rkStep.ts';
 export { errorNorm } from './errorNorm.ts';
-export { denseOutput } from './denseOutput.ts';
+export { denseOutput, denseCoefficients, evalDense } from './denseOutput.ts';
 export { initialStep } from './initialStep.ts';
 export { integrateAdaptive, type AcceptedStep, type AdaptiveOptions, type AdaptiveSolution } from './integrate.ts';
 export { integrateFixed } from './integrateFixed.ts';

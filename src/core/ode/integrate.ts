@@ -1,5 +1,5 @@
 import { ComputationError, InputRangeError, POSITIVE, requireInRange } from '../errors.ts';
-import { denseOutput } from './denseOutput.ts';
+import { denseCoefficients, evalDense } from './denseOutput.ts';
 import { DORMAND_PRINCE_54 } from './dormandPrince.ts';
 import { errorNorm } from './errorNorm.ts';
 import { initialStep } from './initialStep.ts';
@@ -27,7 +27,8 @@ export interface AdaptiveOptions {
   readonly tableau?: EmbeddedTableau;
   /**
    * Terminal event: integration stops at the first point where g(t, y) turns negative (g ≥ 0 at
-   * the start). The point is located on the continuous extension by bisection to round-off.
+   * the start). The point is located on the continuous extension by bisection to round-off, and
+   * the state there is recomputed by one step of the method from the start of the step.
    */
   readonly event?: (t: number, y: Float64Array) => number;
   readonly onStep?: (step: AcceptedStep) => void;
@@ -79,12 +80,19 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
   const expo = 1 / (tab.embeddedOrder + 1);
   let rejectedLast = false;
   let hStep = 0;
+  // dense-output coefficients of the last accepted step, computed on first use
+  const dense = new Float64Array(5 * n);
+  let denseReady = false;
+  const interp = (theta: number, out: Float64Array): void => {
+    if (!denseReady) { denseCoefficients(tab, yPrev, y, w.k, hStep, dense); denseReady = true; }
+    evalDense(dense, theta, out);
+  };
   const step: AcceptedStep = {
     get t0() { return t - hStep; },
     get t1() { return t; },
     y0: yPrev,
     get y1() { return y; },
-    interpolate: (theta, out) => denseOutput(tab, yPrev, y, w.k, hStep, theta, out),
+    interpolate: interp,
   };
 
   while (t < tEnd) {
@@ -107,15 +115,25 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
     y.set(w.yNew);
     t = last ? tEnd : t + h;
     hStep = t - tPrev;
+    denseReady = false;
     if (opts.event && opts.event(t, y) < 0) {
-      const thEv = locate(opts.event, tPrev, hStep, (th, out) => denseOutput(tab, yPrev, y, w.k, hStep, th, out), yEv);
+      const thEv = locate(opts.event, tPrev, hStep, interp, yEv);
       const tEv = tPrev + thEv * hStep;
       // report the part of the step up to the event, re-parametrised so θ = 1 is the event
+      // the state at the event: one fresh step of size θh from the step start (order 5, where the
+      // interpolant is order 4); the interpolant still serves points inside the partial step
+      const yAt = Float64Array.from(yEv);
+      if (thEv > 0) {
+        const w2 = stepWork(tab, n);
+        sys.f(tPrev, yPrev, w2.k[0]!);
+        stats.evaluations += 1 + rkStep(tab, sys, tPrev, yPrev, thEv * hStep, w2);
+        yAt.set(w2.yNew);
+      }
       opts.onStep?.({
-        t0: tPrev, t1: tEv, y0: yPrev, y1: yEv,
-        interpolate: (theta, out) => denseOutput(tab, yPrev, y, w.k, hStep, theta * thEv, out),
+        t0: tPrev, t1: tEv, y0: yPrev, y1: yAt,
+        interpolate: (theta, out) => interp(theta * thEv, out),
       });
-      return { t: tEv, y: Float64Array.from(yEv), stoppedByEvent: true, stats };
+      return { t: tEv, y: yAt, stoppedByEvent: true, stats };
     }
     opts.onStep?.(step);
     if (tab.fsal) w.k[0]!.set(w.k[s - 1]!);

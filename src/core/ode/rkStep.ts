@@ -1,7 +1,7 @@
 import type { EmbeddedTableau } from './tableau.ts';
 import type { OdeSystem } from './system.ts';
 
-/** Scratch space for one embedded step: the stage derivatives and two work vectors. */
+/** Scratch space for one embedded step: the stage derivatives, work vectors and the tableau packed flat. */
 export interface StepWork {
   readonly k: Float64Array[];
   readonly yStage: Float64Array;
@@ -9,6 +9,10 @@ export interface StepWork {
   readonly yNew: Float64Array;
   /** Local error estimate h·Σ(b_i − b̂_i)k_i. */
   readonly err: Float64Array;
+  /** a_ij row by row (row i at offset i(i−1)/2), b_i and b_i − b̂_i as typed arrays (fast inner loops). */
+  readonly aFlat: Float64Array;
+  readonly b: Float64Array;
+  readonly e: Float64Array;
 }
 
 export function stepWork(tableau: EmbeddedTableau, dim: number): StepWork {
@@ -17,6 +21,9 @@ export function stepWork(tableau: EmbeddedTableau, dim: number): StepWork {
     yStage: new Float64Array(dim),
     yNew: new Float64Array(dim),
     err: new Float64Array(dim),
+    aFlat: Float64Array.from(tableau.a.flat()),
+    b: Float64Array.from(tableau.b),
+    e: Float64Array.from(tableau.b.map((bi, i) => bi - tableau.bHat[i]!)),
   };
 }
 
@@ -34,25 +41,27 @@ export function stepWork(tableau: EmbeddedTableau, dim: number): StepWork {
 export function rkStep(tab: EmbeddedTableau, sys: OdeSystem, t: number, y: Float64Array, h: number, w: StepWork): number {
   const n = sys.dim;
   const s = tab.c.length;
+  const { k, yStage, aFlat, b, e } = w;
+  let off = 0;
   for (let i = 1; i < s; i++) {
-    const row = tab.a[i]!;
     for (let d = 0; d < n; d++) {
       let acc = 0;
-      for (let j = 0; j < i; j++) acc += row[j]! * w.k[j]![d]!;
-      w.yStage[d] = y[d]! + h * acc;
+      for (let j = 0; j < i; j++) acc += aFlat[off + j]! * k[j]![d]!;
+      yStage[d] = y[d]! + h * acc;
     }
-    sys.f(t + tab.c[i]! * h, w.yStage, w.k[i]!);
+    off += i;
+    sys.f(t + tab.c[i]! * h, yStage, k[i]!);
   }
   for (let d = 0; d < n; d++) {
     let acc = 0;
-    let e = 0;
+    let err = 0;
     for (let i = 0; i < s; i++) {
-      const kd = w.k[i]![d]!;
-      acc += tab.b[i]! * kd;
-      e += (tab.b[i]! - tab.bHat[i]!) * kd;
+      const kd = k[i]![d]!;
+      acc += b[i]! * kd;
+      err += e[i]! * kd;
     }
     w.yNew[d] = y[d]! + h * acc;
-    w.err[d] = h * e;
+    w.err[d] = h * err;
   }
   // For an FSAL tableau the last stage point equals yNew, so k[s−1] is already f(t+h, yNew).
   return s - 1;

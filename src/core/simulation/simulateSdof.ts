@@ -1,10 +1,13 @@
-import { damperForce, type DamperLaw } from '../dampers/index.ts';
+import type { DamperLaw } from '../dampers/index.ts';
 import { ComputationError, requireInRange } from '../errors.ts';
 import { integrateAdaptive, type OdeStats, type OdeSystem } from '../ode/index.ts';
 import { effectiveLoad, validateModel, type SdofModel } from './model.ts';
 import { ED, RunRecorder, V, W, Z, type SimulationHistory } from './recorder.ts';
 import { stickRelease } from './stickRelease.ts';
-import { timeDomainLaw } from './viscousForm.ts';
+import { timeDomainLaw } from './timeDomainLaw.ts';
+
+/** Work limit: a run needing more steps is stiff or chattering and is refused, not left to hang a page. */
+const MAX_STEPS = 300_000;
 
 export interface SimulationOptions {
   /** Simulated time, s, (0, 1e5]. */
@@ -41,6 +44,10 @@ export interface SimulationResult {
   readonly stats: OdeStats & { segments: number };
   /** The law integrated (hysteretic replaced by its viscous equivalent). */
   readonly law: DamperLaw;
+  /** Power law with α < 1: speed below which the force was taken linear, m/s (0 = not used). */
+  readonly vLinear: number;
+  /** Velocity scale the tolerances and v_ε refer to, m/s. */
+  readonly vScale: number;
   readonly omegaRef: number; // rad/s
 }
 
@@ -54,10 +61,12 @@ export interface SimulationResult {
  * measures the integration error, not an identity. Coulomb friction is not smoothed: the motion is
  * split at every velocity reversal (located on the dense output); there the mass sticks while
  * |p − kz| ≤ F_f and slides again, in the direction of p − kz, when that force exceeds F_f.
- * Hysteretic damping is replaced by c = ηk/ω_ref (see timeDomainLaw). For base excitation z is
+ * Hysteretic damping is replaced by c = ηk/ω_ref, and a power law with α < 1 is made linear below
+ * a small speed v_ε (see timeDomainLaw). For base excitation z is
  * the relative motion, E_k = ½mż² its kinetic energy and W the work of the inertia load −mÿ.
  *
- * @throws InputRangeError for a bad model or duration; ComputationError if the integrator fails
+ * @throws InputRangeError for a bad model or duration; ComputationError if the run needs more than
+ *   300 000 steps (stiff) or 200 000 stick–slip segments (chattering)
  * @source hairer1993 §II.4–II.6 (integrator, dense output; from memory); chopra2017 §3.6, §3.8 (energy of an SDOF; from memory)
  */
 export function simulateSdof(model: SdofModel, opts: SimulationOptions): SimulationResult {
@@ -68,21 +77,25 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
   const wn = Math.sqrt(k / m);
   const ex = model.excitation;
   const omegaRef = ex.kind === 'none' ? wn : ex.omega;
-  const law = timeDomainLaw(model.law, omegaRef);
   const p = effectiveLoad(model);
   const pAmp = ex.kind === 'force' ? ex.F0 : ex.kind === 'base' ? m * ex.Y * ex.omega * ex.omega : 0;
-  const coulomb = law.kind === 'coulomb' ? law.Ff : 0;
 
   // scales for the absolute tolerances: a length, its velocity and its energy
-  const L = Math.max(Math.abs(model.x0), Math.abs(model.v0) / wn, pAmp / k, 1e-300);
+  // floor of 1 nm: below it the motion is of no engineering interest and tolerances would underflow
+  const L = Math.max(Math.abs(model.x0), Math.abs(model.v0) / wn, pAmp / k, 1e-9);
+  const vScale = L * Math.max(wn, omegaRef);
   const Escale0 = 0.5 * k * L * L;
-  const atol = [rtol * L, rtol * L * Math.max(wn, omegaRef), rtol * Escale0, rtol * Escale0];
+  const atol = [rtol * L, rtol * vScale, rtol * Escale0, rtol * Escale0];
+  const td = timeDomainLaw(model.law, omegaRef, vScale, m, Math.max(wn, omegaRef));
+  const law = td.law;
+  const damper = td.force;
+  const coulomb = law.kind === 'coulomb' ? law.Ff : 0;
   const periodRef = (2 * Math.PI) / omegaRef;
   const hMax = Math.min((2 * Math.PI) / wn, periodRef) / 8;
 
   let slip = 0; // Coulomb: +1/−1 sliding direction, 0 stuck
   const forceAt = (t: number, y: ArrayLike<number>): number => {
-    if (!coulomb) return damperForce(law, y[V]!);
+    if (!coulomb) return damper(y[V]!);
     return slip !== 0 ? slip * coulomb : p(t) - k * y[Z]!; // while stuck the friction holds p − kz
   };
   const E0 = 0.5 * m * model.v0 ** 2 + 0.5 * k * model.x0 ** 2;
@@ -91,7 +104,7 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
     dim: 4,
     f(t, y, dy) {
       const v = y[V]!;
-      const fd = coulomb ? slip * coulomb : damperForce(law, v);
+      const fd = coulomb ? slip * coulomb : damper(v);
       const load = p(t);
       dy[Z] = v;
       dy[V] = (load - fd - k * y[Z]!) / m;
@@ -124,7 +137,7 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
       continue;
     }
     const sol = integrateAdaptive(sys, t, y, tEnd, {
-      rtol, atol, hMax, onStep: (s) => rec.step(s),
+      rtol, atol, hMax, maxSteps: Math.max(1, MAX_STEPS - stats.accepted - stats.rejected), onStep: (s) => rec.step(s),
       event: coulomb ? (_t, s) => slip * s[V]! : undefined,
     });
     stats.accepted += sol.stats.accepted; stats.rejected += sol.stats.rejected; stats.evaluations += sol.stats.evaluations;
@@ -144,6 +157,6 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
     residual: rec.residual, energyScale, closure: energyScale > 0 ? rec.residual / energyScale : 0,
     xMax: rec.xMax, vMax: rec.vMax, forceMax: rec.forceMax, xLastPeriod: rec.xLast,
     powerLastPeriod: (y[ED]! - rec.edAtLastFrom) / (tEnd - Math.max(0, rec.tLastFrom)),
-    stuckTime, stats, law, omegaRef,
+    stuckTime, stats, law, vLinear: td.vLinear, vScale, omegaRef,
   };
 }
