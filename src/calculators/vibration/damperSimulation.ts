@@ -77,6 +77,10 @@ export const damperSimulation = defineCalculator({
     if (law === 'hysteretic' && r.law.kind === 'linear') {
       warnings.push(`Hysteretic damping simulated as the viscous damper c = ηk/ω = ${r.law.c.toPrecision(4)} N·s/m at ${(r.omegaRef / (2 * Math.PI)).toPrecision(4)} Hz; exact only at that frequency.`);
     }
+    if (r.vLinear > 0) {
+      const share = r.vLinear / r.vScale;
+      warnings.push(`Power law with α < 1 taken linear below ${r.vLinear.toPrecision(2)} m/s (${share < 0.01 ? 'a negligible' : `${(100 * share).toPrecision(2)} % of the velocity scale: a noticeable`} change of the law, made so the creeping motion can be integrated).`);
+    }
     if (r.closure > 1e-6) warnings.push(`Energy audit closes only to ${r.closure.toExponential(1)}: tighten the integrator tolerance.`);
     if (values.excitation !== 'none' && num(values, 'duration') * r.omegaRef < 4 * Math.PI) warnings.push('Fewer than two excitation periods simulated: the last-period amplitude and power include the transient.');
     return {
