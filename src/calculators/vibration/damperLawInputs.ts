@@ -14,26 +14,32 @@ import { choice, num, optNum, type InputDef, type Values } from '../types.ts';
 
 const viscous = ['linear', 'power'];
 
-export const LAW_INPUTS: readonly InputDef[] = [
-  {
-    key: 'law', label: 'Damper law', kind: 'choice', default: 'linear', required: true,
-    options: [
-      { value: 'linear', label: 'Linear viscous F = c·v' },
-      { value: 'power', label: 'Power-law viscous F = c·|v|^α·sgn v' },
-      { value: 'coulomb', label: 'Coulomb friction F = F_f·sgn v' },
-      { value: 'bilinear', label: 'Bilinear with knee (rebound/compression)' },
-      { value: 'hysteretic', label: 'Hysteretic (loss factor η)' },
-    ],
-    help: 'Force law of the damper as a function of its stroke velocity.',
-  },
+/** The law inputs, with the law selected by default. */
+export function lawInputs(defaultLaw: DamperLawKind): readonly InputDef[] {
+  return [{ ...LAW_CHOICE, default: defaultLaw }, ...LAW_PARAMETERS];
+}
+
+const LAW_CHOICE: InputDef & { kind: 'choice' } = {
+  key: 'law', label: 'Damper law', kind: 'choice', default: 'linear', required: true,
+  options: [
+    { value: 'linear', label: 'Linear viscous F = c·v' },
+    { value: 'power', label: 'Power-law viscous F = c·|v|^α·sgn v' },
+    { value: 'coulomb', label: 'Coulomb friction F = F_f·sgn v' },
+    { value: 'bilinear', label: 'Bilinear with knee (rebound/compression)' },
+    { value: 'hysteretic', label: 'Hysteretic (loss factor η)' },
+  ],
+  help: 'Force law of the damper as a function of its stroke velocity.',
+};
+
+const LAW_PARAMETERS: readonly InputDef[] = [
   {
     key: 'c', label: 'Damping coefficient c', kind: 'damping', default: 1500, min: 0, max: 1e9, minExclusive: true, required: true, when: { key: 'law', is: viscous },
     help: 'Linear law: N·s/m. Power law: C in N·(s/m)^α, entered in SI base units (unit conversion of other damping units is exact only at α = 1).',
   },
   { key: 'alpha', label: 'Velocity exponent α', kind: 'dimensionless', default: 0.5, min: 0, max: 2, minExclusive: true, when: { key: 'law', is: ['power'] }, help: 'Fluid viscous dampers in buildings: typically 0.3–1.' },
   { key: 'Ff', label: 'Friction (slip) force F_f', kind: 'force', default: 200, min: 0, max: 1e8, minExclusive: true, required: true, when: { key: 'law', is: ['coulomb'] }, help: 'Constant force opposing sliding.' },
-  { key: 'c1', label: 'Low-speed coefficient c₁', kind: 'damping', default: 3000, min: 0, max: 1e9, required: true, when: { key: 'law', is: ['bilinear'] }, help: 'Slope below the knee velocity (reference curve).' },
-  { key: 'c2', label: 'High-speed coefficient c₂', kind: 'damping', default: 900, min: 0, max: 1e9, required: true, when: { key: 'law', is: ['bilinear'] }, help: 'Slope above the knee velocity, where the blow-off valves open (reference curve).' },
+  { key: 'c1', label: 'Low-speed coefficient c₁', kind: 'damping', default: 2000, min: 0, max: 1e9, required: true, when: { key: 'law', is: ['bilinear'] }, help: 'Slope below the knee velocity (reference curve).' },
+  { key: 'c2', label: 'High-speed coefficient c₂', kind: 'damping', default: 600, min: 0, max: 1e9, required: true, when: { key: 'law', is: ['bilinear'] }, help: 'Slope above the knee velocity, where the blow-off valves open (reference curve).' },
   { key: 'vknee', label: 'Knee velocity v_k', kind: 'velocity', default: 0.1, min: 0, max: 100, minExclusive: true, when: { key: 'law', is: ['bilinear'] }, help: 'Stroke velocity where the slope changes from c₁ to c₂.' },
   { key: 'cRebound', label: 'Rebound factor', kind: 'dimensionless', default: 1, min: 0, max: 100, when: { key: 'law', is: ['bilinear'] }, help: 'Multiplies c₁ and c₂ for extension (v > 0).' },
   { key: 'cCompression', label: 'Compression factor', kind: 'dimensionless', default: 0.4, min: 0, max: 100, when: { key: 'law', is: ['bilinear'] }, help: 'Multiplies c₁ and c₂ for compression (v < 0); often 0.3–0.5 of rebound.' },

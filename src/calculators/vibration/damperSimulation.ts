@@ -1,6 +1,6 @@
 import { simulateSdof, type Excitation, type SimulationResult } from '../../core/simulation/index.ts';
 import { choice, defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
-import { LAW_INPUTS, lawFromValues } from './damperLawInputs.ts';
+import { lawInputs, lawFromValues } from './damperLawInputs.ts';
 import { simulationCharts } from './damperSimulationCharts.ts';
 
 const CHART_SAMPLES = 801;
@@ -31,7 +31,7 @@ export const damperSimulation = defineCalculator({
   title: 'Nonlinear damper: time simulation with energy audit',
   summary: 'Response of a mass on a spring with a linear, power-law, Coulomb, bilinear or hysteretic damper to initial conditions, a harmonic force or harmonic base motion; adaptive Dormand–Prince 5(4) integration with an energy audit.',
   inputs: [
-    ...LAW_INPUTS,
+    ...lawInputs('bilinear'),
     { key: 'm', label: 'Moving mass m', kind: 'mass', default: 240, min: 0, max: 1e7, minExclusive: true, required: true, help: 'Mass carried by the spring and damper.' },
     { key: 'k', label: 'Spring rate k', kind: 'stiffness', default: 16000, min: 0, max: 1e10, minExclusive: true, required: true, help: 'Linear spring in parallel with the damper (also the stiffness a hysteretic loss factor acts on).' },
     { key: 'x0', label: 'Initial displacement', kind: 'length', default: 0, min: -10, max: 10, help: 'Relative to static equilibrium (relative to the base for base excitation).' },

@@ -1,6 +1,6 @@
 import { damperForce, equivalentDampingRatio, harmonicDuty, lawBreakpoints } from '../../core/dampers/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
-import { LAW_INPUTS, lawFromValues, stiffness } from './damperLawInputs.ts';
+import { lawInputs, lawFromValues, stiffness } from './damperLawInputs.ts';
 
 function setup(values: Values) {
   const X = num(values, 'X');
@@ -15,7 +15,7 @@ export const energyPerCycle = defineCalculator({
   title: 'Damper laws: energy per cycle',
   summary: 'Energy dissipated per cycle of harmonic stroke, mean power, equivalent viscous coefficient and damping ratio, and peak force for linear, power-law, Coulomb, bilinear and hysteretic dampers.',
   inputs: [
-    ...LAW_INPUTS,
+    ...lawInputs('linear'),
     { key: 'X', label: 'Stroke amplitude X', kind: 'length', default: 0.025, min: 0, max: 10, minExclusive: true, required: true, help: 'Displacement amplitude across the damper, x = X sin ωt.' },
     { key: 'f', label: 'Frequency f', kind: 'frequency', default: 1.5, min: 0, max: 1e5, minExclusive: true, required: true, help: 'Frequency of the harmonic stroke.' },
     { key: 'k', label: 'Spring rate k', kind: 'stiffness', default: 16000, min: 0, max: 1e12, minExclusive: true, optional: true, help: 'Optional: stiffness in parallel, for ζ_eq. The hysteretic law needs it (η acts on k).' },
