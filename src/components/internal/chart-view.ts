@@ -47,6 +47,7 @@ function config(spec: ChartSpec, system: UnitSystem): ChartConfiguration<'line',
     const x = toDisplay(m.x, ux);
     if (Number.isFinite(yLo)) datasets.push({ label: m.label, data: [{ x, y: yLo }, { x, y: yHi }], borderColor: '#8e877a', borderWidth: 1, borderDash: [2, 3], pointRadius: 0 });
   }
+  const sortedX = datasets.every((d) => d.data.every((p, i) => i === 0 || p.x >= d.data[i - 1]!.x));
   const axisTitle = (label: string, sym: string) => ({ display: true, text: sym ? `${label} [${sym}]` : label });
   return {
     type: 'line',
@@ -55,8 +56,10 @@ function config(spec: ChartSpec, system: UnitSystem): ChartConfiguration<'line',
       animation: false,
       responsive: true,
       maintainAspectRatio: false,
-      parsing: false,
-      normalized: true,
+      // unparsed data is taken as sorted in x; loops (force against stroke) are not, so let
+      // chart.js parse those and find out for itself
+      parsing: sortedX ? false : undefined,
+      normalized: sortedX,
       interaction: { mode: 'nearest', intersect: false },
       scales: {
         x: { type: xlog ? 'logarithmic' : 'linear', title: axisTitle(spec.x.label, ux.symbol), min: spec.x.min !== undefined ? toDisplay(spec.x.min, ux) : undefined, max: spec.x.max !== undefined ? toDisplay(spec.x.max, ux) : undefined,
