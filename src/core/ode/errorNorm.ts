@@ -11,6 +11,7 @@
  * @param rtol relative tolerance, > 0
  * @param atol absolute tolerance per component (SI unit of that component), > 0
  * @returns the norm (dimensionless; ≤ 1 means the step is accepted)
+ * @example errorNorm(Float64Array.of(1e-6), Float64Array.of(1), Float64Array.of(1), 1e-6, Float64Array.of(0)) // 1
  * @source hairer1993 §II.4, eq. (4.11) (from memory)
  */
 export function errorNorm(err: Float64Array, y0: Float64Array, y1: Float64Array, rtol: number, atol: Float64Array): number {

@@ -20,6 +20,7 @@ function rmsScaled(v: Float64Array, y: Float64Array, rtol: number, atol: Float64
  * @param order p of the propagated solution
  * @param hMax largest allowed step, s
  * @returns a positive step size, s
+ * @example for y' = −y, y0 = 1 at rtol 1e-6, atol 1e-9: 0.046 s
  * @source hairer1993 §II.4, "Starting step size" algorithm (from memory)
  */
 export function initialStep(

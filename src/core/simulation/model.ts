@@ -28,6 +28,7 @@ export interface SdofModel {
  *
  * $$p(t) = F_0\sin\omega t\ \text{(force)},\qquad p(t) = -m\ddot y = m Y\omega^2\sin\omega t\ \text{(base)}$$
  *
+ * @example effectiveLoad({ m: 2, k: 1, law: { kind: 'linear', c: 1 }, excitation: { kind: 'base', Y: 0.01, omega: 10 }, x0: 0, v0: 0 })(Math.PI / 20) // 2 N
  * @source chopra2017 §3.6 (base excitation in relative coordinates; from memory)
  */
 export function effectiveLoad(model: SdofModel): (t: number) => number {

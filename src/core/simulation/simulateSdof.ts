@@ -65,6 +65,7 @@ export interface SimulationResult {
  * a small speed v_ε (see timeDomainLaw). For base excitation z is
  * the relative motion, E_k = ½mż² its kinetic energy and W the work of the inertia load −mÿ.
  *
+ * @example simulateSdof({ m: 1, k: 100, law: { kind: 'linear', c: 4 }, excitation: { kind: 'none' }, x0: 0.01, v0: 0 }, { duration: 1 }).xEnd // −1.36092e-3 m
  * @throws InputRangeError for a bad model or duration; ComputationError if the run needs more than
  *   300 000 steps (stiff) or 200 000 stick–slip segments (chattering)
  * @source hairer1993 §II.4–II.6 (integrator, dense output; from memory); chopra2017 §3.6, §3.8 (energy of an SDOF; from memory)

@@ -12,7 +12,8 @@
  * @param t0 start of sticking, s
  * @param tEnd end of the simulation, s
  * @param dt scan step, s, > 0
- * @source den Hartog, Mechanical Vibrations, 4th ed., §8.6 (stick-slip of Coulomb damping; section from memory)
+ * @example stickRelease((t) => 10 * Math.sin(t), 5, 0, 10, 0.01) // π/6 ≈ 0.5236 s
+ * @source denHartog1956 §8.6, Coulomb damping and stick-slip (section from memory); rao2017 §2.9 (from memory)
  */
 export function stickRelease(g: (t: number) => number, Ff: number, t0: number, tEnd: number, dt: number): number {
   let a = t0;

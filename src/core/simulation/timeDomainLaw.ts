@@ -35,6 +35,7 @@ export const POWER_LAW_RATE_CAP = 100;
  * @param vScale velocity scale of the run, m/s, > 0
  * @param m moving mass, kg (for the rate cap)
  * @param omegaHi fastest circular frequency of the run, max(ω_n, ω), rad/s
+ * @example timeDomainLaw({ kind: 'hysteretic', eta: 0.1, k: 1e5 }, 50, 1, 1, 50).law // { kind: 'linear', c: 200 }
  * @source chopra2017 §3.10 (equivalent viscous form of rate-independent damping; from memory); regularisation: common practice, no source
  */
 export function timeDomainLaw(law: DamperLaw, omegaRef: number, vScale: number, m: number, omegaHi: number): TimeDomainLaw {
