@@ -1,4 +1,9 @@
 import type { CalculatorDefinition } from '../types.ts';
 import { sdof } from './sdof.ts';
+import { forcedResponseCalc } from './forced-response.ts';
+import { logDecrementCalc } from './log-decrement.ts';
+import { halfPowerCalc } from './half-power.ts';
+import { ringDownCalc } from './ring-down.ts';
+import { tmdTuningCalc } from './tmd-tuning.ts';
 
-export const vibrationCalculators: readonly CalculatorDefinition[] = [sdof];
+export const vibrationCalculators: readonly CalculatorDefinition[] = [sdof, forcedResponseCalc, logDecrementCalc, halfPowerCalc, ringDownCalc, tmdTuningCalc];
