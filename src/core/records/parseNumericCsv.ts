@@ -63,18 +63,27 @@ function parseRow(line: string, d: Delimiter, decimalComma: boolean): number[] |
   return out;
 }
 
-/** Picks the first delimiter under which the sample data lines all parse with one column count. */
+/**
+ * Picks the delimiter (and decimal mark) under which most sample data lines parse with one
+ * column count; ties go to the earlier candidate (tab, semicolon, comma, space). A malformed
+ * line among the samples does not hide the format: it is reported later with its line number.
+ */
 function detect(sample: readonly string[], minColumns: number): { d: Delimiter; comma: boolean } | undefined {
   const candidates: Delimiter[] = ['\t', ';', ',', ' '];
+  let best: { d: Delimiter; comma: boolean; score: number } | undefined;
   for (const d of candidates) {
     if (d !== ' ' && !sample.some((l) => l.includes(d))) continue;
     for (const comma of d === ',' ? [false] : [false, true]) {
-      const counts = sample.map((l) => parseRow(l, d, comma)?.length ?? -1);
-      const n = counts[0] ?? -1;
-      if (n >= minColumns && counts.every((c) => c === n)) return { d, comma };
+      const tally = new Map<number, number>();
+      for (const l of sample) {
+        const c = parseRow(l, d, comma)?.length ?? -1;
+        if (c >= minColumns) tally.set(c, (tally.get(c) ?? 0) + 1);
+      }
+      const score = Math.max(0, ...tally.values()) / sample.length;
+      if (score >= 0.5 && (!best || score > best.score)) best = { d, comma, score };
     }
   }
-  return undefined;
+  return best && { d: best.d, comma: best.comma };
 }
 
 /**

@@ -18,7 +18,7 @@ export interface HalfPowerResult {
  * $$g = \frac{4\zeta\sqrt{1-\zeta^2}}{1-2\zeta^2}\;\Rightarrow\;\zeta^2 = \tfrac12\left(1-\frac{2}{\sqrt{g^2+4}}\right),\qquad f_n = \frac{f_p}{\sqrt{1-2\zeta^2}}$$
  * Velocity response (mobility): the peak is at f_n and the relation is exact without
  * approximation: $$\zeta = \frac{f_2-f_1}{2 f_p},\qquad f_p^2 = f_1 f_2.$$
- * Both tend to the small-damping form $\zeta \approx (f_2-f_1)/(2f_p)$.
+ * The lower point exists only for ζ < sin(π/8) ≈ 0.383. Both tend to the small-damping form $\zeta \approx (f_2-f_1)/(2f_p)$.
  *
  * @param f1 lower half-power frequency, Hz, 0 < f1 < fp
  * @param f2 upper half-power frequency, Hz, f2 > fp
