@@ -1,2 +1,3 @@
 /** Numerical building blocks shared by every domain. */
 export { adaptiveSimpson } from './adaptiveSimpson.ts';
+export { gamma } from './gamma.ts';
