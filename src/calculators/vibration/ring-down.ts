@@ -16,9 +16,9 @@ function thin<T>(v: readonly T[]): T[] {
   return v.filter((_, i) => i % k === 0);
 }
 
-const SDOF_D = syntheticRingDown({ wn: 10, zeta: 0.2, amplitude: 0.01, offset: 0, phase: 0, cycles: 4, samplesPerCycle: 80, noise: 0, jitter: 0, seed: 1, header: 't,x', delimiter: ',', digits: 10 });
-const MOUNT = syntheticRingDown({ wn: 20, zeta: 0.05, amplitude: 2.5, offset: -0.8, phase: 1.1, cycles: 8, samplesPerCycle: 40, noise: 0, jitter: 0.5, seed: 5, header: 'time\taccel', delimiter: '\t', digits: 10 });
-const NOISY = syntheticRingDown({ wn: 20, zeta: 0.02, amplitude: 1, offset: 0.3, phase: 0.2, cycles: 16, samplesPerCycle: 40, noise: 0.005, jitter: 0.5, seed: 2026, header: 't;x', delimiter: ';', digits: 6 });
+const SDOF_D = syntheticRingDown({ wn: 10, zeta: 0.2, amplitude: 0.01, offset: 0, phase: 0, cycles: 4, samplesPerCycle: 40, noise: 0, jitter: 0, seed: 1, header: 't,x', delimiter: ',', digits: 9 });
+const MOUNT = syntheticRingDown({ wn: 20, zeta: 0.05, amplitude: 2.5, offset: -0.8, phase: 1.1, cycles: 8, samplesPerCycle: 30, noise: 0, jitter: 0.5, seed: 5, header: 'time\taccel', delimiter: '\t', digits: 9 });
+const NOISY = syntheticRingDown({ wn: 20, zeta: 0.02, amplitude: 1, offset: 0.3, phase: 0.2, cycles: 14, samplesPerCycle: 30, noise: 0.005, jitter: 0.5, seed: 2026, header: 't;x', delimiter: ';', digits: 5 });
 
 /** Damping, frequencies and (with m or k) the damper coefficient from a pasted free-decay record. */
 export const ringDownCalc = defineCalculator({
@@ -30,7 +30,7 @@ export const ringDownCalc = defineCalculator({
     { key: 'column', label: 'Signal column', kind: 'dimensionless', default: 2, min: 2, max: 50, help: 'Column number of the signal (time is column 1).' },
     { key: 'timeUnit', label: 'Time column unit', kind: 'choice', default: 's', options: [{ value: 's', label: 'seconds' }, { value: 'ms', label: 'milliseconds' }], help: 'Unit of the time column.' },
     { key: 'm', label: 'Moving mass (optional)', kind: 'mass', default: 10, min: 0, max: 1e7, minExclusive: true, optional: true, help: 'Gives the stiffness and damping coefficient.' },
-    { key: 'k', label: 'Spring rate (optional)', kind: 'stiffness', default: 4000, min: 0, max: 1e10, minExclusive: true, optional: true, help: 'Used when the mass is not given: gives the mass and damping coefficient.' },
+    { key: 'k', label: 'Spring rate (optional)', kind: 'stiffness', default: 4000, min: 0, max: 1e10, minExclusive: true, optional: true, help: 'Without a mass: gives the mass and damping coefficient. With both: a check on the measured frequency.' },
   ],
   outputs: [
     { key: 'zeta', label: 'Damping ratio ζ', kind: 'dimensionless' },
@@ -52,7 +52,9 @@ export const ringDownCalc = defineCalculator({
     const warnings: string[] = [];
     if (fit.r2 < 0.99) warnings.push(`R² = ${fit.r2.toFixed(4)}: the decay is not a clean exponential. Friction (straight-line decay), amplitude-dependent damping, beating between two modes or a drifting offset are likely; report the damping with its amplitude range.`);
     if (fit.peaks.length < 6) warnings.push(`Only ${fit.peaks.length} peaks: the estimate rests on few cycles; a longer or less damped record is better.`);
-    if (m !== undefined && k !== undefined) warnings.push('Both m and k given: the mass is used and k is reported from the measured frequency; compare it with your k.');
+    if (m !== undefined && k !== undefined && Math.abs((m * fit.wn * fit.wn) / k - 1) > 0.1) {
+      warnings.push(`The measured frequency with m = ${m.toPrecision(4)} kg implies k = ${(m * fit.wn * fit.wn).toPrecision(4)} N/m, more than 10 % from the k entered: check the mass (include attached parts) or the spring rate. c uses the mass.`);
+    }
     return {
       outputs: {
         zeta: fit.zeta, delta: fit.delta, fd: fit.wd / (2 * Math.PI), fn: fit.wn / (2 * Math.PI), peaks: fit.peaks.length, r2: fit.r2,
@@ -80,7 +82,7 @@ export const ringDownCalc = defineCalculator({
         { label: '−envelope', x: t, y: env.map((e) => fit.offset - e), style: 'dash', tone: 1 },
         { label: 'peaks used', x: fit.peaks.map((p) => p.t), y: fit.peaks.map((p) => p.y), style: 'points', tone: 3 },
       ],
-      summary: `${series.t.length} samples over ${(series.t[series.t.length - 1]! - series.t[0]!).toPrecision(3)} s; ${fit.peaks.length} peaks fitted with ζ = ${(result.outputs.zeta as number).toPrecision(3)}, f_d = ${(result.outputs.fd as number).toPrecision(4)} Hz, R² = ${fit.r2.toFixed(4)}.`,
+      summary: `${series.t.length} samples over ${(series.t[series.t.length - 1]! - series.t[0]!).toPrecision(3)} s; ${fit.peaks.length} peaks fitted with ζ = ${(result.outputs.zeta as number).toPrecision(3)}, f_d = ${(result.outputs.fd as number).toPrecision(4)} Hz, R² = ${fit.r2.toFixed(5)}.`,
     }];
   },
   verification: [
@@ -88,8 +90,8 @@ export const ringDownCalc = defineCalculator({
       name: 'Free response m = 1 kg, k = 100 N/m, c = 4 N·s/m (ζ = 0.2), released from 10 mm',
       inputs: { record: SDOF_D, m: 1 },
       expected: { zeta: 0.2, fn: 10 / (2 * Math.PI), fd: (10 * Math.sqrt(0.96)) / (2 * Math.PI), c: 4, kEst: 100 },
-      tolerance: 1e-3,
-      why: 'noise-free closed-form record at 80 samples per cycle; peak refinement by parabola leaves < 1e-4, margin for sampling',
+      tolerance: 3e-3,
+      why: 'noise-free closed-form record, 40 samples per cycle, time to 10 µs; parabola peak refinement errs by up to about 2e-3 at ζ = 0.2 depending on sample placement',
       source: { key: 'rao2017', locator: '§2.6 underdamped free response, Eq. (2.70) (equation number from memory)' },
       provenance: 'closed form',
     },
