@@ -66,7 +66,7 @@ export const tmdTuningCalc = defineCalculator({
     const stroke = pk.stroke * s.unit;
     const warnings: string[] = [];
     if (s.sys.zeta1 > 0) warnings.push('The tuning formulas assume an undamped primary; with ζ₁ > 0 they are near, not at, the optimum. The peak shown includes ζ₁.');
-    if (s.excitation.startsWith('white')) warnings.push('White-noise tuning minimises the response variance; the peak shown is the harmonic peak with these values, a little above the Den Hartog optimum.');
+    if (s.excitation.startsWith('white')) warnings.push('White-noise tuning minimises the response variance; the peak shown is the harmonic peak with these values, a little above the least peak that harmonic tuning would give.');
     if (s.mu > 0.1) warnings.push('μ above 0.1 is unusual: check the added mass on the structure and the absorber stroke.');
     return {
       outputs: {
