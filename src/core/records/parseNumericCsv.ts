@@ -91,6 +91,8 @@ function detect(sample: readonly string[], minColumns: number): { d: Delimiter; 
  * @throws InputRangeError naming the input and the line when the text holds no data rows, a row
  *   has a non-numeric field, or rows disagree on the number of columns
  * @example parseNumericCsv('t;x\n0;1,5\n0,01;1,2').rows // [[0, 1.5], [0.01, 1.2]]
+ * @source common practice, no source (the comma form is RFC 4180; semicolons with decimal commas
+ *   and tab-separated exports follow common spreadsheet and logger practice)
  */
 export function parseNumericCsv(text: string, opts: ParseOptions = {}): NumericTable {
   const input = opts.input ?? 'record';

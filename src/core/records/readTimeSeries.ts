@@ -22,6 +22,7 @@ export interface TimeSeriesOptions {
  * increases strictly from row to row, which uneven sampling may break but must not reverse.
  * @throws InputRangeError naming the input and the line of the first offending row
  * @example readTimeSeries('t,x\n0,1\n0.1,0.5').y // [1, 0.5]
+ * @source common practice, no source
  */
 export function readTimeSeries(text: string, opts: TimeSeriesOptions = {}): TimeSeries {
   const input = opts.input ?? 'record';

@@ -91,6 +91,7 @@ function equilibrium(t: readonly number[], y: readonly number[], coarse: readonl
  * @param t times, s, strictly increasing (uneven spacing allowed)
  * @param y recorded displacement, velocity or acceleration
  * @throws ComputationError for a flat record or one without two complete half cycles
+ * @example decayPeaks(t, y).peaks.length // one extremum per usable half cycle
  * @source common practice, no source (hysteresis crossing detection); press2007 §15.4 (parabola fit)
  */
 export function decayPeaks(t: readonly number[], y: readonly number[]): DecayPeaks {
