@@ -1,2 +1,4 @@
 /** Numerical building blocks shared by every domain. */
 export { adaptiveSimpson } from './adaptiveSimpson.ts';
+export { brentRoot, type BrentOptions } from './brent.ts';
+export { bracketRoots, type Crossing } from './bracketRoots.ts';
