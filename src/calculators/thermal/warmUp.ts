@@ -29,7 +29,10 @@ function bodyRun(values: Values, C: number, tEnd: number, stopAt?: number) {
   const d = num(values, 'duty');
   const tp = num(values, 'period');
   const power = (t: number) => (d >= 1 || t % tp < d * tp ? P : 0);
-  const steps = Math.min(20000, Math.max(400, Math.ceil((tEnd / tp) * 40)));
+  // RK4 is stable for h·(dQ/dT)/C below about 2.8; keep h below a fifth of the shortest time
+  // constant (largest UA, at the top of the air table) and resolve each duty phase with 40 steps.
+  const tauMin = C / Math.max(1e-12, bodyCooling(body, 690).UA);
+  const steps = Math.min(200000, Math.max(400, Math.ceil((tEnd / tp) * 40), Math.ceil(tEnd / (0.2 * tauMin))));
   return rk4((t, T) => (power(t) - bodyCooling(body, T).Q) / C, body.Tamb, tEnd, steps, stopAt);
 }
 

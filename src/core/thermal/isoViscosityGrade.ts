@@ -16,7 +16,8 @@ export const ISO_VG = [2, 3, 5, 7, 10, 15, 22, 32, 46, 68, 100, 150, 220, 320, 4
  */
 export function isoViscosityGrade(nu40: number): string {
   const v = requireInRange('nu40', nu40, POSITIVE, 'm²/s') * 1e6;
-  const hit = ISO_VG.find((g) => v >= 0.9 * g && v <= 1.1 * g);
+  // 1e-9 relative slack: 28.8e-6 m²/s converted to mm²/s lands a rounding step below 0.9 × 32
+  const hit = ISO_VG.find((g) => v >= 0.9 * g * (1 - 1e-9) && v <= 1.1 * g * (1 + 1e-9));
   if (hit !== undefined) return `ISO VG ${hit}`;
   const above = ISO_VG.find((g) => g > v);
   const below = [...ISO_VG].reverse().find((g) => g < v);
