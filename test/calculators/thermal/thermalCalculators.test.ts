@@ -85,7 +85,8 @@ describe('damping-fade coupled equilibrium', () => {
       duty: fc.constantFrom('harmonic', 'random'),
       orientation: fc.constantFrom('horizontal', 'vertical'),
     });
-    fc.assert(fc.property(arb, (inputs) => {
+    fc.assert(fc.property(arb, (drawn) => {
+      const inputs = drawn as Record<string, number | string>;
       try {
         const r = evaluate(def, inputs);
         const s = r.outputs.status;
