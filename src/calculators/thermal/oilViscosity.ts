@@ -35,7 +35,7 @@ export const oilViscosityCalc = defineCalculator({
   },
   charts(values, result): ChartSpec[] {
     const f = fit(values);
-    const T = Array.from({ length: 47 }, (_, i) => 253.15 + 4 * i);
+    const T = Array.from({ length: 51 }, (_, i) => 253.15 + 4 * i); // −20 °C to 180 °C
     const nu = T.map((t) => waltherViscosity(f, t));
     return [{
       id: 'viscosity',
@@ -47,7 +47,7 @@ export const oilViscosityCalc = defineCalculator({
         { label: 'data points', x: [313.15, 373.15], y: [num(values, 'nu40'), num(values, 'nu100')], style: 'points', tone: 3 },
       ],
       markers: [{ x: num(values, 'T'), label: 'T' }],
-      summary: `Viscosity falls from ${(nu[0]! * 1e6).toPrecision(3)} mm²/s at −20 °C to ${(nu.at(-1)! * 1e6).toPrecision(3)} mm²/s at 180 °C; ${((result.outputs.nu as number) * 1e6).toPrecision(4)} mm²/s at the chosen temperature.`,
+      summary: `Viscosity falls from ${(nu[0]! * 1e6).toPrecision(3)} mm²/s at ${(T[0]! - 273.15).toFixed(0)} °C to ${(nu.at(-1)! * 1e6).toPrecision(3)} mm²/s at ${(T.at(-1)! - 273.15).toFixed(0)} °C; ${((result.outputs.nu as number) * 1e6).toPrecision(4)} mm²/s at the chosen temperature.`,
     }];
   },
   verification: [
