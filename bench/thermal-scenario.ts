@@ -16,7 +16,7 @@ run('steady-temperature', { ...body, P: 5.05, V: 0 });
 run('power-rating', { ...body, Tmax: 373.15, V: 0 });
 run('power-rating', { ...body, Tmax: 373.15, V: 20, flowFactor: 0.3 });
 run('warm-up', { P: 80.85, Cth: 0, mSteel: 2.0, mOil: 0.25, UA: 0.7457, Tamb: 298.15, Tlimit: 373.15, t: 1800 });
-run('warm-up', { P: 80.85, Cth: 0, mSteel: 2.0, mOil: 0.25, UA: 0.7457, Tamb: 298.15, Tlimit: 373.15, t: 1800, loss: 'body', ...body, V: 0 });
+run('warm-up', { P: 80.85, Cth: 0, mSteel: 2.0, mOil: 0.25, UA: 0.7457, Tlimit: 373.15, t: 1800, loss: 'body', ...body, V: 0 });
 run('warm-up', { P: 80.85, Cth: 0, mSteel: 2.0, mOil: 0.25, UA: 0.7457, Tamb: 298.15, Tlimit: 373.15, t: 1800, duty: 0.5, period: 600 });
 run('oil-viscosity', { nu40: 20e-6, nu100: 4.5e-6, T: 353.15 });
 run('oil-viscosity', { nu40: 20e-6, nu100: 4.5e-6, T: 263.15 });
