@@ -43,6 +43,10 @@ describe('thermal CLI contracts', () => {
     const b = evaluate(calc('body-cooling'), { D: 0.05, L: 0.35, orientation: 'horizontal', Ts: 353.15, Tamb: 298.15, V: 0, eps: 0.9 });
     expectClose({ label: 'Q ratio with ends', computed: (a.outputs.Q as number) / (b.outputs.Q as number), expected: 1 + 0.05 / (2 * 0.35), tol: 1e-12, why: 'ends at lateral h: area ratio 1 + D/2L' });
   });
+  it('radiates nothing when the surroundings are as hot as the body (h_r·(T_s − T_sur) = 0, closed form)', () => {
+    const r = evaluate(calc('body-cooling'), { D: 0.05, L: 0.35, orientation: 'horizontal', Ts: 353.15, Tamb: 298.15, dTsur: 55, V: 0, eps: 0.9 });
+    expectClose({ label: 'Q = h_conv·A·ΔT', computed: r.outputs.Q as number, expected: (r.outputs.hConv as number) * Math.PI * 0.05 * 0.35 * 55, tol: 1e-12, why: 'same arithmetic' });
+  });
   it('shows the slenderness warning for a vertical body in its result', () => {
     const r = evaluate(calc('body-cooling'), { D: 0.05, L: 0.35, orientation: 'vertical', Ts: 353.15, Tamb: 298.15, V: 0, eps: 0.9 });
     expect(r.warnings.join(' ')).toMatch(/35·L\/Gr_L/);
@@ -79,7 +83,7 @@ describe('damping-fade coupled equilibrium', () => {
       if (!d || !('min' in d)) throw new Error(key);
       return fc.double({ min: d.min, max: d.max, noNaN: true }).filter((x) => !(d.minExclusive && x === d.min));
     };
-    const keys = ['cRef', 'Tref', 'share', 'nu40', 'nu100', 'X', 'f', 'P', 'Tlimit', 'Cth', 'D', 'L', 'Tamb', 'V', 'flowFactor', 'eps', 'ends'];
+    const keys = ['cRef', 'Tref', 'share', 'nu40', 'nu100', 'X', 'f', 'P', 'Tlimit', 'Cth', 'D', 'L', 'Tamb', 'dTsur', 'V', 'flowFactor', 'eps', 'ends'];
     const arb = fc.record({
       ...Object.fromEntries(keys.map((k) => [k, number(k)])),
       duty: fc.constantFrom('harmonic', 'random'),
