@@ -68,7 +68,22 @@ describe('warm-up with the body model (ODE) against the constant-UA closed form'
   });
 });
 
+describe('warm-up heat capacity from parts', () => {
+  it('adds m·c of each listed part to the direct capacity (Incropera 6th ed. Tables A.1, A.5 at 300 K, from memory)', () => {
+    const r = evaluate(calc('warm-up'), { P: 50, Cth: 100, UA: 1, mSteel: 2, mOil: 0.25 });
+    expectClose({ label: 'C total', computed: r.outputs.CthTotal as number, expected: 100 + 2 * 434 + 0.25 * 1909, tol: 1e-14, why: 'same arithmetic' });
+  });
+});
+
 describe('damping-fade coupled equilibrium', () => {
+  it('on a random road with no equilibrium, its time to the limit equals the warm-up body model', () => {
+    const common = { D: 0.05, L: 0.35, orientation: 'horizontal', Tamb: 298.15, V: 0, eps: 0.9, Tlimit: 373.15 };
+    const fade = evaluate(calc('damping-fade'), { ...common, duty: 'random', P: 80.85, Cth: 1345.25 });
+    const warm = evaluate(calc('warm-up'), { ...common, P: 80.85, Cth: 1345.25, UA: 1, loss: 'body' });
+    expect(fade.outputs.status).toBe('no equilibrium below the limit');
+    expectClose({ label: 't_lim fade vs warm-up', computed: fade.outputs.tLimit as number, expected: warm.outputs.tLimitBody as number, tol: 1e-7, why: 'same integral by two calculators, quadrature at 1e-9' });
+  });
+
   const def = calc('damping-fade');
   it('balances heat out against damper power at the equilibrium it reports', () => {
     const r = evaluate(def, {});
