@@ -27,6 +27,9 @@ export class CalculatorElement extends HTMLElement {
   system: UnitSystem = 'SI';
   private charts: { update(specs: ReturnType<NonNullable<CalculatorDefinition['charts']>>, system: UnitSystem): void } | undefined;
   private pending = 0;
+  /** The last valid inputs (SI) and outputs shown; undefined while a field is bad. */
+  values: Values | undefined;
+  outputs: Outputs | undefined;
 
   async connectedCallback(): Promise<void> {
     const list = await loaders[this.dataset.domain ?? '']?.();
@@ -37,6 +40,9 @@ export class CalculatorElement extends HTMLElement {
     this.addEventListener('input', (e) => this.onInput(e));
     this.addEventListener('change', (e) => this.onChange(e));
     this.recompute();
+    // input sets and records: their code (and zod) loads only when the panel is opened
+    const rec = this.querySelector<HTMLDetailsElement>('details.calc-records');
+    rec?.addEventListener('toggle', () => void import('./record-panel.ts').then((m) => m.attachRecords(this, rec)), { once: true });
     this.dataset.ready = '';
   }
 
@@ -74,6 +80,7 @@ export class CalculatorElement extends HTMLElement {
 
   private onInput(e: Event): void {
     const t = e.target as HTMLElement;
+    if (t.closest('.calc-records')) return;
     if (t instanceof HTMLInputElement && t.type === 'file') return;
     if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) return;
     this.schedule();
@@ -81,6 +88,7 @@ export class CalculatorElement extends HTMLElement {
 
   private onChange(e: Event): void {
     const t = e.target as HTMLElement;
+    if (t.closest('.calc-records')) return;
     if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) this.convertField(t);
     else if (t instanceof HTMLInputElement && t.name === 'units') this.setSystem(t.value === 'US' ? 'US' : 'SI');
     else if (t instanceof HTMLInputElement && t.type === 'file') { void this.loadFile(t); return; }
@@ -99,6 +107,38 @@ export class CalculatorElement extends HTMLElement {
     if (!def || def.kind === 'choice' || def.kind === 'text' || !ctl) return;
     const r = readField(def, ctl.value, prev, {});
     if (r.ok && typeof r.value === 'number') ctl.value = formatInput(fromSI(r.value, findUnit(def.kind, sel.value)));
+  }
+
+  /** The unit id each number field is shown in. */
+  unitsShown(): Record<string, string> {
+    const out: Record<string, string> = {};
+    for (const def of this.calc!.inputs) {
+      const sel = def.kind === 'choice' || def.kind === 'text' ? null : this.unitSelect(def.key);
+      if (sel) out[def.key] = sel.value;
+    }
+    return out;
+  }
+
+  /** Fills every field from SI values (shown in `units` where given) and recomputes now. */
+  applyInputs(values: Values, units: Readonly<Record<string, string>>): void {
+    for (const def of this.calc!.inputs) {
+      const v = values[def.key];
+      const ctl = this.control(def.key);
+      if (!ctl) continue;
+      if (def.kind === 'choice' || def.kind === 'text') { if (typeof v === 'string') ctl.value = v; continue; }
+      const sel = this.unitSelect(def.key);
+      const want = units[def.key];
+      if (sel && want && [...sel.options].some((o) => o.value === want) && sel.value !== want) {
+        sel.value = want;
+        sel.dataset.unit = want;
+        const srUnit = this.field(def.key)?.querySelector('.sr-unit');
+        if (srUnit) srUnit.textContent = ` (${sel.selectedOptions[0]?.textContent ?? ''})`;
+      }
+      if (typeof v !== 'number') { ctl.value = ''; continue; }
+      const shown = sel ? fromSI(v, findUnit(def.kind, sel.value)) : v;
+      ctl.value = String(Number(shown.toPrecision(15)));
+    }
+    this.recompute();
   }
 
   private setSystem(system: UnitSystem): void {
@@ -162,6 +202,8 @@ export class CalculatorElement extends HTMLElement {
     const calc = this.calc!;
     const state = this.querySelector<HTMLElement>('.calc-state');
     const values = this.readValues();
+    this.values = undefined;
+    this.outputs = undefined;
     if (!values) { this.setState(state, 'error', 'Results are held until every highlighted field is valid.'); return; }
     let result;
     try {
@@ -172,6 +214,8 @@ export class CalculatorElement extends HTMLElement {
       return;
     }
     this.renderOutputs(result.outputs);
+    this.values = result.values;
+    this.outputs = result.outputs;
     const warn = this.querySelector('.calc-warnings');
     if (warn) warn.replaceChildren(...result.warnings.map((w) => { const li = document.createElement('li'); li.textContent = w; return li; }));
     this.setState(state, 'ok', '');
