@@ -10,7 +10,7 @@ import type { CalculatorDefinition, Outputs, Values } from '../../calculators/ty
 import { DampbookError } from '../../core/errors.ts';
 import { findUnit, fromSI, parseQuantity, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from './format.ts';
-import { readField } from './fieldState.ts';
+import { parseTyped, readField } from './fieldState.ts';
 
 type Loader = () => Promise<readonly CalculatorDefinition[]>;
 const loaders: Record<string, Loader> = {
@@ -109,25 +109,27 @@ export class CalculatorElement extends HTMLElement {
     if (r.ok && typeof r.value === 'number') ctl.value = formatInput(fromSI(r.value, findUnit(def.kind, sel.value)));
   }
 
-  /** The unit id each number field is shown in. */
-  unitsShown(): Record<string, string> {
-    const out: Record<string, string> = {};
+  /** Each number field as typed: its number and its unit id (for records). */
+  inputsShown(): Record<string, { value: number; unit: string }> {
+    const out: Record<string, { value: number; unit: string }> = {};
     for (const def of this.calc!.inputs) {
-      const sel = def.kind === 'choice' || def.kind === 'text' ? null : this.unitSelect(def.key);
-      if (sel) out[def.key] = sel.value;
+      if (def.kind === 'choice' || def.kind === 'text') continue;
+      const n = parseTyped(this.control(def.key)?.value ?? '');
+      const unit = this.unitSelect(def.key)?.value;
+      if (Number.isFinite(n) && unit) out[def.key] = { value: n, unit };
     }
     return out;
   }
 
-  /** Fills every field from SI values (shown in `units` where given) and recomputes now. */
-  applyInputs(values: Values, units: Readonly<Record<string, string>>): void {
+  /** Fills every field from SI values (or the typed number and unit in `shown`) and recomputes now. */
+  applyInputs(values: Values, shown: Readonly<Record<string, { value: number; unit: string }>>): void {
     for (const def of this.calc!.inputs) {
       const v = values[def.key];
       const ctl = this.control(def.key);
       if (!ctl) continue;
       if (def.kind === 'choice' || def.kind === 'text') { if (typeof v === 'string') ctl.value = v; continue; }
       const sel = this.unitSelect(def.key);
-      const want = units[def.key];
+      const want = shown[def.key]?.unit;
       if (sel && want && [...sel.options].some((o) => o.value === want) && sel.value !== want) {
         sel.value = want;
         sel.dataset.unit = want;
@@ -135,8 +137,9 @@ export class CalculatorElement extends HTMLElement {
         if (srUnit) srUnit.textContent = ` (${sel.selectedOptions[0]?.textContent ?? ''})`;
       }
       if (typeof v !== 'number') { ctl.value = ''; continue; }
-      const shown = sel ? fromSI(v, findUnit(def.kind, sel.value)) : v;
-      ctl.value = String(Number(shown.toPrecision(15)));
+      const typed = shown[def.key];
+      // String() of a double parses back to the same double: the field reproduces the value exactly
+      ctl.value = typed && (!sel || sel.value === typed.unit) ? String(typed.value) : String(sel ? fromSI(v, findUnit(def.kind, sel.value)) : v);
     }
     this.recompute();
   }

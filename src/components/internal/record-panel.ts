@@ -30,7 +30,7 @@ export function attachRecords(el: CalculatorElement, panel: HTMLElement): void {
 
   function current(name?: string): CalcRecord | undefined {
     if (!el.values || !el.outputs) { say('error', 'Fix the highlighted fields first: there are no valid results to save.'); return undefined; }
-    return makeRecord(calc!, el.values, el.outputs, el.unitsShown(), ctx, new Date(), name);
+    return makeRecord(calc!, el.values, el.outputs, el.inputsShown(), ctx, new Date(), name);
   }
 
   function readSets(): CalcRecord[] {
@@ -53,7 +53,7 @@ export function attachRecords(el: CalculatorElement, panel: HTMLElement): void {
 
   /** Applies a checked replay to the widget and reports how it went. */
   function apply(rec: CalcRecord, r: Extract<Replay, { ok: true }>, what: string): void {
-    el.applyInputs(r.values, r.units);
+    el.applyInputs(r.values, r.shown);
     const lines = [`${what}: ${r.matched} of ${Object.keys(rec.outputs).length} recorded outputs reproduced.`];
     for (const d of r.diffs) lines.push(`${d.key}: recorded ${String(d.recorded)}, computed now ${String(d.computed ?? '—')}.`);
     lines.push(...r.warnings);
