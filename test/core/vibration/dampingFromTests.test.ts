@@ -54,6 +54,14 @@ describe('halfPowerDamping', () => {
       return Math.abs(r.zeta - z) < 1e-8 && Math.abs(r.fn / fn - 1) < 1e-8;
     }));
   });
+  it('inverts the accelerance half-power points for any ζ that has both', () => {
+    // accelerance r²M has the receptance form in 1/r² (closed form): 1/r² = 1 − 2ζ² ± 2ζ√(1−ζ²)
+    fc.assert(fc.property(fc.double({ min: 1e-3, max: 0.38, noNaN: true }), fc.double({ min: 0.1, max: 1e3, noNaN: true }), (z, fn) => {
+      const s = 2 * z * Math.sqrt(1 - z * z);
+      const r = halfPowerDamping(fn / Math.sqrt(1 - 2 * z * z + s), fn / Math.sqrt(1 - 2 * z * z - s), fn / Math.sqrt(1 - 2 * z * z), 'acceleration');
+      return Math.abs(r.zeta - z) < 1e-8 && Math.abs(r.fn / fn - 1) < 1e-8;
+    }));
+  });
   it('refuses half-power points that do not bracket the peak', () => {
     expect(() => halfPowerDamping(1.1, 1.2, 1)).toThrow(/'f1'/);
     expect(() => halfPowerDamping(0.9, 0.95, 1)).toThrow(/'f2'/);
