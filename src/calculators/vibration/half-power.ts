@@ -39,7 +39,7 @@ export const halfPowerCalc = defineCalculator({
       expected: { zeta: 0.05, fn: 1 },
       tolerance: 5e-6,
       why: 'frequencies given to 6 decimals (about 1e-6 relative), which moves ζ by under 5e-6 relative',
-      source: { key: 'rao2017', locator: 'Eq. (3.30) solved for M = M_max/√2 (closed form; equation number from memory)' },
+      source: { key: 'rao2017', locator: '§3.4 magnification factor solved for M = M_max/√2 (closed form; section from memory)' },
       provenance: 'closed form',
     },
     {
@@ -72,6 +72,6 @@ export const halfPowerCalc = defineCalculator({
   ],
   sources: [
     { key: 'ewins2000', locator: '§2.6 half-power bandwidth (from memory)' },
-    { key: 'rao2017', locator: '§3.4, Eq. (3.30) and the quality factor (from memory)' },
+    { key: 'rao2017', locator: '§3.4 magnification factor and quality factor (section from memory)' },
   ],
 });

@@ -57,7 +57,7 @@ export const logDecrementCalc = defineCalculator({
       expected: { zeta: 0.4, zetaSmall: 0.4 / Math.sqrt(1 - 0.16) },
       tolerance: 1e-12,
       why: 'closed form δ = 2πζ/√(1−ζ²) inverted; same arithmetic',
-      source: { key: 'rao2017', locator: 'Eqs. (2.84)–(2.86) (equation numbers from memory)' },
+      source: { key: 'rao2017', locator: '§2.6 logarithmic decrement (section from memory)' },
       provenance: 'closed form',
     },
     {

@@ -29,7 +29,7 @@ export interface HalfPowerResult {
  * @throws InputRangeError naming f1 or f2 when they do not bracket fp
  * @example halfPowerDamping(0.946111, 1.046363, 0.997497).zeta // 0.05
  * @source ewins2000 §2.6 (half-power points; section from memory); derivation from rao2017
- *   Eq. (3.30) by solving M(r) = M_max/√2 for r² (closed form)
+ *   §3.4 magnification factor, solving M(r) = M_max/√2 for r² (closed form; section from memory)
  */
 export function halfPowerDamping(f1: number, f2: number, fp: number, response: HalfPowerResponse = 'displacement'): HalfPowerResult {
   requireInRange('f1', f1, POSITIVE, 'Hz');
