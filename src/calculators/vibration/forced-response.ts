@@ -14,7 +14,7 @@ function params(values: Values) {
 
 /** Log-spaced frequency ratios covering the operating point and two decades around resonance. */
 function ratios(rOp: number): number[] {
-  const lo = Math.log10(Math.min(0.1, rOp / 2));
+  const lo = Math.log10(rOp > 0 ? Math.min(0.1, rOp / 2) : 0.1);
   const hi = Math.log10(Math.max(10, rOp * 2));
   return Array.from({ length: 241 }, (_, i) => 10 ** (lo + ((hi - lo) * i) / 240)).filter((r) => Math.abs(r - 1) > 1e-9);
 }

@@ -24,7 +24,7 @@ export const tmdTuningCalc = defineCalculator({
   title: 'Tuned mass damper: tuning and exact response',
   summary: 'Optimum absorber frequency and damping (Den Hartog for a harmonic force, Warburton for harmonic base acceleration and white noise), absorber mass, spring and damper, then the exact peak response, absorber stroke, damper force and damper power.',
   inputs: [
-    { key: 'mu', label: 'Mass ratio μ = m_a/m₁', kind: 'dimensionless', default: 0.02, min: 0, max: 1, minExclusive: true, required: true, help: 'Absorber mass over the primary (modal) mass; 0.01–0.05 is usual for floors and footbridges.' },
+    { key: 'mu', label: 'Mass ratio μ = m_a/m₁', kind: 'dimensionless', default: 0.02, min: 0.001, max: 1, required: true, help: 'Absorber mass over the primary (modal) mass; 0.01–0.05 is usual for floors and footbridges.' },
     { key: 'm1', label: 'Primary (modal) mass m₁', kind: 'mass', default: 14_000, min: 0, max: 1e9, minExclusive: true, required: true, help: 'Mass of the primary system, or the modal mass of the mode to control.' },
     { key: 'k1', label: 'Primary (modal) stiffness k₁', kind: 'stiffness', default: 2.44e6, min: 0, max: 1e12, minExclusive: true, required: true, help: 'Stiffness of the primary, or modal stiffness m₁ω₁².' },
     {
