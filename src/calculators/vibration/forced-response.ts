@@ -14,7 +14,7 @@ function params(values: Values) {
 
 /** Log-spaced frequency ratios covering the operating point and two decades around resonance. */
 function ratios(rOp: number): number[] {
-  const lo = Math.log10(Math.min(0.1, rOp / 2));
+  const lo = Math.log10(rOp > 0 ? Math.min(0.1, rOp / 2) : 0.1);
   const hi = Math.log10(Math.max(10, rOp * 2));
   return Array.from({ length: 241 }, (_, i) => 10 ** (lo + ((hi - lo) * i) / 240)).filter((r) => Math.abs(r - 1) > 1e-9);
 }
@@ -97,16 +97,25 @@ export const forcedResponseCalc = defineCalculator({
       expected: { r: 0.5, X: 1.321637, phase: (7.5946 * Math.PI) / 180, TR: 1.328229 },
       tolerance: 2e-5,
       why: 'independent evaluation of the closed forms (scipy.signal.freqresp agrees) to 7 s.f.; phase given to 5 s.f. in degrees',
-      source: { key: 'rao2017', locator: 'Eqs. (3.30), (3.31), (9.94) (equation numbers from memory)' },
+      source: { key: 'rao2017', locator: '§3.4 magnification and phase, §9.10 transmissibility (sections from memory)' },
       provenance: 'closed form',
     },
     {
-      name: 'ζ = 0.1 at r = 2 and r = √2: T_R = 0.355862 and exactly 1',
+      name: 'ζ = 0.1 at r = 2: M = 0.330409, T_R = 0.355862',
       inputs: { m: 1, k: K1, c: 0.4 * Math.PI, f: 2, excitation: 'force', F0: K1 },
       expected: { M: 0.330409, TR: 0.355862, phase: (172.4054 * Math.PI) / 180 },
       tolerance: 2e-6,
       why: 'closed form evaluated independently to 6 s.f.',
-      source: { key: 'rao2017', locator: '§9.10 transmissibility, Eq. (9.94) (equation number from memory)' },
+      source: { key: 'rao2017', locator: '§9.10 transmissibility (section from memory)' },
+      provenance: 'closed form',
+    },
+    {
+      name: 'Any damping at r = √2: T_R = 1 exactly (ζ = 0.35)',
+      inputs: { m: 1, k: K1, c: 1.4 * Math.PI, f: Math.SQRT2, excitation: 'force', F0: 1 },
+      expected: { TR: 1 },
+      tolerance: 1e-12,
+      why: '(1 + 8ζ²)/(1 + 8ζ²) at r = √2; closed form, same arithmetic',
+      source: { key: 'rao2017', locator: '§9.10 transmissibility (section from memory)' },
       provenance: 'closed form',
     },
     {
@@ -124,7 +133,7 @@ export const forcedResponseCalc = defineCalculator({
       expected: { TR: 2.692582, X: 0.02692582, Z: 0.025, vrel: TAU * 0.025, P: 0.5 * 0.8 * Math.PI * (TAU * 0.025) ** 2 },
       tolerance: 2e-6,
       why: 'closed form (table value 2.692582 to 7 s.f.)',
-      source: { key: 'rao2017', locator: '§3.6 base excitation, Eqs. (3.68), (3.75) (equation numbers from memory)' },
+      source: { key: 'rao2017', locator: '§3.6 base excitation (section from memory)' },
       provenance: 'closed form',
     },
   ],

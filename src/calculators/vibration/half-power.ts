@@ -10,7 +10,7 @@ export const halfPowerCalc = defineCalculator({
     { key: 'f1', label: 'Lower half-power frequency f₁', kind: 'frequency', default: 2.02, min: 0, max: 1e6, minExclusive: true, required: true, help: 'Below the peak, where the response is the peak value over √2 (−3 dB).' },
     { key: 'f2', label: 'Upper half-power frequency f₂', kind: 'frequency', default: 2.23, min: 0, max: 1e6, minExclusive: true, required: true, help: 'Above the peak, where the response is the peak value over √2 (−3 dB).' },
     { key: 'fp', label: 'Peak frequency f_p', kind: 'frequency', default: 2.125, min: 0, max: 1e6, minExclusive: true, required: true, help: 'Frequency of the highest response.' },
-    { key: 'response', label: 'Measured response', kind: 'choice', default: 'displacement', options: [{ value: 'displacement', label: 'Displacement or acceleration over force' }, { value: 'velocity', label: 'Velocity over force (mobility)' }], help: 'Which frequency response the points were read from; the exact relation differs.' },
+    { key: 'response', label: 'Measured response', kind: 'choice', default: 'displacement', options: [{ value: 'displacement', label: 'Displacement over force (receptance)' }, { value: 'velocity', label: 'Velocity over force (mobility)' }, { value: 'acceleration', label: 'Acceleration over force (accelerance)' }], help: 'Which frequency response the points were read from; the exact relation differs.' },
   ],
   outputs: [
     { key: 'zeta', label: 'Damping ratio ζ (exact, points at M_max/√2)', kind: 'dimensionless' },
@@ -25,7 +25,7 @@ export const halfPowerCalc = defineCalculator({
     const response = choice<HalfPowerResponse>(values, 'response');
     const r = halfPowerDamping(f1, f2, fp, response);
     const warnings: string[] = [];
-    const centre = response === 'velocity' ? Math.sqrt(f1 * f2) : Math.sqrt((f1 * f1 + f2 * f2) / 2);
+    const centre = response === 'velocity' ? Math.sqrt(f1 * f2) : response === 'acceleration' ? 1 / Math.sqrt((1 / (f1 * f1) + 1 / (f2 * f2)) / 2) : Math.sqrt((f1 * f1 + f2 * f2) / 2);
     if (Math.abs(fp - centre) > 0.1 * (f2 - f1)) {
       warnings.push(`An SDOF resonance would peak at ${centre.toPrecision(4)} Hz for these half-power points, not ${fp.toPrecision(4)} Hz: check the readings, the response type, or a neighbouring mode.`);
     }
@@ -39,7 +39,7 @@ export const halfPowerCalc = defineCalculator({
       expected: { zeta: 0.05, fn: 1 },
       tolerance: 5e-6,
       why: 'frequencies given to 6 decimals (about 1e-6 relative), which moves ζ by under 5e-6 relative',
-      source: { key: 'rao2017', locator: 'Eq. (3.30) solved for M = M_max/√2 (closed form; equation number from memory)' },
+      source: { key: 'rao2017', locator: '§3.4 magnification factor solved for M = M_max/√2 (closed form; section from memory)' },
       provenance: 'closed form',
     },
     {
@@ -60,9 +60,18 @@ export const halfPowerCalc = defineCalculator({
       source: { key: 'ewins2000', locator: '§2.6 (from memory)' },
       provenance: 'closed form',
     },
+    {
+      name: 'Accelerance at ζ = 0.1: peak at f_n/√(1−2ζ²), half-power points from the receptance form in 1/f²',
+      inputs: { f1: 1 / Math.sqrt(0.98 + 0.2 * Math.sqrt(0.99)), f2: 1 / Math.sqrt(0.98 - 0.2 * Math.sqrt(0.99)), fp: 1 / Math.sqrt(0.98), response: 'acceleration' },
+      expected: { zeta: 0.1, fn: 1 },
+      tolerance: 1e-12,
+      why: '|r²M|² = 1/((1/r² − 1)² + 4ζ²/r²), the receptance form in 1/r²; same arithmetic',
+      source: { key: 'ewins2000', locator: '§2.6 and the FRF forms of §2.2 (sections from memory)' },
+      provenance: 'closed form',
+    },
   ],
   sources: [
     { key: 'ewins2000', locator: '§2.6 half-power bandwidth (from memory)' },
-    { key: 'rao2017', locator: '§3.4, Eq. (3.30) and the quality factor (from memory)' },
+    { key: 'rao2017', locator: '§3.4 magnification factor and quality factor (section from memory)' },
   ],
 });

@@ -16,7 +16,7 @@ export const logDecrementCalc = defineCalculator({
   outputs: [
     { key: 'delta', label: 'Logarithmic decrement δ', kind: 'dimensionless', help: '(1/n)·ln(x₁/xₙ) per cycle.' },
     { key: 'zeta', label: 'Damping ratio ζ (exact)', kind: 'dimensionless', help: 'δ/√(4π² + δ²).' },
-    { key: 'zetaSmall', label: 'Damping ratio δ/2π (small-damping form)', kind: 'dimensionless', help: 'Overestimates ζ: by 1 % at ζ ≈ 0.1 and 10 % at ζ ≈ 0.4.' },
+    { key: 'zetaSmall', label: 'Damping ratio δ/2π (small-damping form)', kind: 'dimensionless', help: 'Overestimates ζ by the factor 1/√(1−ζ²): 0.5 % at ζ = 0.1, 9 % at ζ = 0.4.' },
     { key: 'wn', label: 'Natural frequency ω_n', kind: 'angularFrequency', optional: true, help: 'Needs T_d.' },
     { key: 'fn', label: 'Natural frequency f_n', kind: 'frequency', optional: true, help: 'Needs T_d.' },
     { key: 'k', label: 'Stiffness k = mω_n²', kind: 'stiffness', optional: true, help: 'Needs T_d and m.' },
@@ -57,7 +57,7 @@ export const logDecrementCalc = defineCalculator({
       expected: { zeta: 0.4, zetaSmall: 0.4 / Math.sqrt(1 - 0.16) },
       tolerance: 1e-12,
       why: 'closed form δ = 2πζ/√(1−ζ²) inverted; same arithmetic',
-      source: { key: 'rao2017', locator: 'Eqs. (2.84)–(2.86) (equation numbers from memory)' },
+      source: { key: 'rao2017', locator: '§2.6 logarithmic decrement (section from memory)' },
       provenance: 'closed form',
     },
     {

@@ -92,7 +92,7 @@ export const ringDownCalc = defineCalculator({
       expected: { zeta: 0.2, fn: 10 / (2 * Math.PI), fd: (10 * Math.sqrt(0.96)) / (2 * Math.PI), c: 4, kEst: 100 },
       tolerance: 3e-3,
       why: 'noise-free closed-form record, 40 samples per cycle, time to 10 µs; parabola peak refinement errs by up to about 2e-3 at ζ = 0.2 depending on sample placement',
-      source: { key: 'rao2017', locator: '§2.6 underdamped free response, Eq. (2.70) (equation number from memory)' },
+      source: { key: 'rao2017', locator: '§2.6 underdamped free response (section from memory)' },
       provenance: 'closed form',
     },
     {

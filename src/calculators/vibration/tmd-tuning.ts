@@ -24,7 +24,7 @@ export const tmdTuningCalc = defineCalculator({
   title: 'Tuned mass damper: tuning and exact response',
   summary: 'Optimum absorber frequency and damping (Den Hartog for a harmonic force, Warburton for harmonic base acceleration and white noise), absorber mass, spring and damper, then the exact peak response, absorber stroke, damper force and damper power.',
   inputs: [
-    { key: 'mu', label: 'Mass ratio μ = m_a/m₁', kind: 'dimensionless', default: 0.02, min: 0, max: 1, minExclusive: true, required: true, help: 'Absorber mass over the primary (modal) mass; 0.01–0.05 is usual for floors and footbridges.' },
+    { key: 'mu', label: 'Mass ratio μ = m_a/m₁', kind: 'dimensionless', default: 0.02, min: 0.001, max: 1, required: true, help: 'Absorber mass over the primary (modal) mass; 0.01–0.05 is usual for floors and footbridges.' },
     { key: 'm1', label: 'Primary (modal) mass m₁', kind: 'mass', default: 14_000, min: 0, max: 1e9, minExclusive: true, required: true, help: 'Mass of the primary system, or the modal mass of the mode to control.' },
     { key: 'k1', label: 'Primary (modal) stiffness k₁', kind: 'stiffness', default: 2.44e6, min: 0, max: 1e12, minExclusive: true, required: true, help: 'Stiffness of the primary, or modal stiffness m₁ω₁².' },
     {
@@ -107,16 +107,16 @@ export const tmdTuningCalc = defineCalculator({
       expected: { fopt: 1 / 1.1, zeta: Math.sqrt(0.3 / 8.8), zetaDH: Math.sqrt(0.3 / (8 * 1.1 ** 3)), peak: 4.59022 },
       tolerance: 5e-6,
       why: 'tuning is closed form; the peak is an independent frequency scan of the exact 2-DOF response, quoted to 6 s.f.',
-      source: { key: 'denHartog1956', locator: '§3.3, Eqs. (3.36)–(3.40) (equation numbers from memory); brock1946 for the damping' },
+      source: { key: 'denHartog1956', locator: 'ch. 3, the damped vibration absorber (from memory); brock1946 for the damping' },
       provenance: 'closed form',
     },
     {
-      name: 'Warburton white-noise force, μ = 0.01 / 0.05 / 0.2 (here μ = 0.05): f = 0.964212, ζ = 0.109772',
+      name: 'Warburton white-noise force, μ = 0.05: f = 0.964212, ζ = 0.109772',
       inputs: { mu: 0.05, m1: 1000, k1: 1e5, excitation: 'white-force', F0: 100 },
       expected: { fopt: 0.964212, zeta: 0.109772, md: 50, kd: 50 * 100 * 0.964212 ** 2 },
       tolerance: 6e-6,
       why: 'closed form evaluated independently, quoted to 6 s.f. (half a unit in the 6th figure is up to 5e-6 relative)',
-      source: { key: 'warburton1982', locator: 'Table II, white-noise force on the main mass (table number from memory)' },
+      source: { key: 'warburton1982', locator: 'optimum-parameter table, white-noise force on the main mass (from memory)' },
       provenance: 'from memory',
     },
     {
@@ -125,7 +125,7 @@ export const tmdTuningCalc = defineCalculator({
       expected: { fopt: 0.874007, zeta: 0.208712 },
       tolerance: 6e-6,
       why: 'closed form evaluated independently, quoted to 6 s.f. (half a unit in the 6th figure is up to 5e-6 relative)',
-      source: { key: 'warburton1982', locator: 'Table II (table number from memory)' },
+      source: { key: 'warburton1982', locator: 'optimum-parameter table, white-noise force (from memory)' },
       provenance: 'from memory',
     },
     {
@@ -134,13 +134,13 @@ export const tmdTuningCalc = defineCalculator({
       expected: { zeta: Math.sqrt(0.15 / 8.4), zetaDH: Math.sqrt(0.15 / (8 * 1.05 ** 3)), cd: 2 * Math.sqrt(0.15 / (8 * 1.05 ** 3)) * 0.1 * 2 },
       tolerance: 1e-12,
       why: 'closed form, same arithmetic',
-      source: { key: 'denHartog1956', locator: '§3.3 (from memory)' },
+      source: { key: 'denHartog1956', locator: 'ch. 3 (from memory)' },
       provenance: 'closed form',
     },
   ],
   sources: [
-    { key: 'denHartog1956', locator: '§3.3 the damped vibration absorber (from memory)' },
+    { key: 'denHartog1956', locator: 'ch. 3, the damped vibration absorber (from memory)' },
     { key: 'brock1946', locator: 'optimum damping' },
-    { key: 'warburton1982', locator: 'Tables I–II optimum parameters (from memory)' },
+    { key: 'warburton1982', locator: 'optimum-parameter tables (from memory)' },
   ],
 });

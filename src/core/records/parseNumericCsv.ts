@@ -100,9 +100,14 @@ export function parseNumericCsv(text: string, opts: ParseOptions = {}): NumericT
   const maxRows = opts.maxRows ?? 200_000;
   const maxHeader = opts.maxHeaderLines ?? 50;
   const all = text.replace(/^\uFEFF/, '').split(/\r\n|\r|\n/);
-  const meaningful = all.map((l, i) => ({ l: l.trim(), line: i + 1 })).filter((x) => x.l !== '' && !COMMENT.test(x.l));
-  const sample = meaningful.filter((x) => DATA_START.test(x.l)).slice(1, 21).map((x) => x.l); // skip a possible numeric-looking header
-  const fmt = detect(sample.length > 0 ? sample : meaningful.filter((x) => DATA_START.test(x.l)).map((x) => x.l).slice(0, 20), minColumns);
+  const meaningful = (l: string) => l !== '' && !COMMENT.test(l);
+  // format sample: data-looking lines 2–21 (the first may be a numeric-looking header)
+  const candidates: string[] = [];
+  for (let i = 0; i < all.length && candidates.length < 21; i++) {
+    const l = all[i]!.trim();
+    if (meaningful(l) && DATA_START.test(l)) candidates.push(l);
+  }
+  const fmt = detect(candidates.length > 1 ? candidates.slice(1) : candidates, minColumns);
   if (!fmt) {
     throw new InputRangeError(input, text.slice(0, 40), undefined, '', `no table of at least ${minColumns} numeric columns found (delimiters tried: tab, semicolon, comma, space)`);
   }
@@ -110,7 +115,11 @@ export function parseNumericCsv(text: string, opts: ParseOptions = {}): NumericT
   const lines: number[] = [];
   let header: string[] | undefined;
   let headerLines = 0;
-  for (const { l, line } of meaningful) {
+  let ignored = 0;
+  for (let i = 0; i < all.length; i++) {
+    const l = all[i]!.trim();
+    const line = i + 1;
+    if (!meaningful(l)) { ignored++; continue; }
     const row = parseRow(l, fmt.d, fmt.comma);
     if (row === undefined) {
       if (rows.length === 0 && headerLines < maxHeader) {
@@ -131,5 +140,5 @@ export function parseNumericCsv(text: string, opts: ParseOptions = {}): NumericT
     lines.push(line);
   }
   if (rows.length === 0) throw new InputRangeError(input, text.slice(0, 40), undefined, '', 'no data rows found');
-  return { header, columnCount: rows[0]!.length, rows, lines, delimiter: fmt.d, decimalComma: fmt.comma, skipped: all.length - meaningful.length + headerLines };
+  return { header, columnCount: rows[0]!.length, rows, lines, delimiter: fmt.d, decimalComma: fmt.comma, skipped: ignored + headerLines };
 }

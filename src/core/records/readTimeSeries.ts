@@ -29,7 +29,7 @@ export function readTimeSeries(text: string, opts: TimeSeriesOptions = {}): Time
   const column = opts.column ?? 2;
   const scale = opts.timeScale ?? 1;
   const table = parseNumericCsv(text, { input, minColumns: 2, maxRows: opts.maxRows });
-  if (column < 2 || column > table.columnCount) {
+  if (!Number.isInteger(column) || column < 2 || column > table.columnCount) {
     throw new InputRangeError('column', column, { min: 2, max: table.columnCount }, '', `the record has ${table.columnCount} columns; column 1 is time`);
   }
   const t: number[] = [];

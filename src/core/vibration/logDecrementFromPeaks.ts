@@ -12,7 +12,7 @@ import { InputRangeError, POSITIVE, requireInRange } from '../errors.ts';
  * @throws InputRangeError naming 'xn' when the later peak is not smaller (no decay), naming 'n'
  *   when n is not a whole number ≥ 1
  * @example logDecrementFromPeaks(1, 1 / 16, 1) // ln 16 = 2.772589
- * @source rao2017 §2.6.3, Eq. (2.85) (equation number from memory)
+ * @source rao2017 §2.6, logarithmic decrement (section from memory)
  */
 export function logDecrementFromPeaks(x1: number, xn: number, n: number): number {
   requireInRange('x1', x1, POSITIVE);

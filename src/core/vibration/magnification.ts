@@ -12,7 +12,7 @@ import { InputRangeError, NON_NEGATIVE, requireInRange } from '../errors.ts';
  * @throws InputRangeError for negative or non-finite inputs, and naming 'r' at r = 1 with ζ = 0
  *   (undamped resonance, unbounded amplitude)
  * @example magnificationFactor(0.5, 0.1) // 1.321637
- * @source rao2017 Eq. (3.30) (equation number from memory)
+ * @source rao2017 §3.4, magnification factor of a damped system under harmonic force (section from memory)
  */
 export function magnificationFactor(r: number, zeta: number): number {
   requireInRange('r', r, NON_NEGATIVE);
@@ -31,7 +31,7 @@ export function magnificationFactor(r: number, zeta: number): number {
  * @param zeta damping ratio, [0, ∞)
  * @returns φ in rad (π/2 at resonance for any ζ > 0)
  * @example phaseLag(1, 0.1) // π/2
- * @source rao2017 Eq. (3.31) (equation number from memory)
+ * @source rao2017 §3.4, phase angle (section from memory)
  */
 export function phaseLag(r: number, zeta: number): number {
   requireInRange('r', r, NON_NEGATIVE);

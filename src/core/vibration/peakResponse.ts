@@ -9,7 +9,7 @@ import { requireInRange } from '../errors.ts';
  * @returns the frequency ratio and height of the peak
  * @throws InputRangeError naming 'zeta' outside (0, 1/√2): no interior peak there
  * @example displacementPeak(0.05) // { r: 0.997497, M: 10.01252 }
- * @source rao2017 §3.4, Eqs. (3.33)–(3.34) (equation numbers from memory)
+ * @source rao2017 §3.4, resonant peak (section from memory)
  */
 export function displacementPeak(zeta: number): { r: number; M: number } {
   requireInRange('zeta', zeta, { min: 0, max: Math.SQRT1_2, minExclusive: true, maxExclusive: true });

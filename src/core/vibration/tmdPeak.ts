@@ -9,8 +9,10 @@ export interface TmdPeak {
 
 /**
  * The true maximum over frequency of the primary amplification |X_1(β)| of a primary with an
- * absorber: a log-spaced scan of β over [0.05, 20] (4000 points) finds every local maximum, and
- * golden-section search refines each to a relative bracket of 1e-10; the highest wins.
+ * absorber: a log-spaced scan of β over [0.05, 20] (4000 points), densified by 2000 points over
+ * 1 ± max(6√μ, 0.05) where the two peaks of a tuned absorber lie (they are about √(μ/2) from 1),
+ * finds every local maximum, and golden-section search refines each to a relative bracket of
+ * 1e-10; the highest wins.
  *
  * @param s the two-degree-of-freedom system
  * @param load 'force' or 'base'
@@ -22,10 +24,12 @@ export function tmdPeak(s: TmdSystem, load: 'force' | 'base'): TmdPeak {
   const N = 4000;
   const lo = Math.log(0.05);
   const hi = Math.log(20);
-  const beta = Array.from({ length: N }, (_, i) => Math.exp(lo + ((hi - lo) * i) / (N - 1)));
+  const w = Math.max(6 * Math.sqrt(s.mu), 0.05);
+  const dense = Array.from({ length: 2000 }, (_, i) => Math.max(0.05, 1 - w) + ((2 * w) * i) / 1999);
+  const beta = [...Array.from({ length: N }, (_, i) => Math.exp(lo + ((hi - lo) * i) / (N - 1))), ...dense].sort((a, b) => a - b);
   const val = beta.map(h);
   let best = { beta: beta[0]!, value: val[0]! };
-  for (let i = 1; i + 1 < N; i++) {
+  for (let i = 1; i + 1 < beta.length; i++) {
     if (val[i]! >= val[i - 1]! && val[i]! >= val[i + 1]!) {
       const r = golden(h, beta[i - 1]!, beta[i + 1]!);
       if (r.value > best.value) best = r;

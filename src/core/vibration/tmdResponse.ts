@@ -25,7 +25,7 @@ export interface TmdPhasors {
  * @param beta frequency ratio ω/ω_1, > 0
  * @param load 'force' or 'base'
  * @example abs(tmdResponse({ mu: 0.1, f: 1 / 1.1, zeta: 0.1679, zeta1: 0 }, 1, 'force').x1)
- * @source denHartog1956 §3.3, Eq. (3.29) (same system written as a matrix; equation number from memory)
+ * @source denHartog1956 ch. 3, the damped vibration absorber (same system written as a matrix; from memory)
  */
 export function tmdResponse(s: TmdSystem, beta: number, load: 'force' | 'base'): TmdPhasors {
   const D = complex(s.f * s.f, 2 * s.zeta * s.f * beta);

@@ -29,8 +29,8 @@ export interface TmdTuning {
  * @param mu mass ratio m_a/m_1, (0, 1]
  * @param excitation see TmdExcitation
  * @example tmdTuning(0.05, 'force') // { f: 0.952381, zeta: 0.133631, zetaPrimary: 0.127267 }
- * @source denHartog1956 §3.3 (fixed points; section from memory); brock1946 (optimum damping);
- *   warburton1982 Tables I–II (harmonic and white-noise forms, table numbers from memory)
+ * @source denHartog1956 ch. 3, the damped vibration absorber and its fixed points (from memory); brock1946 (optimum damping);
+ *   warburton1982, optimum-parameter tables for harmonic and white-noise excitation (from memory; not checked against the paper)
  */
 export function tmdTuning(mu: number, excitation: TmdExcitation): TmdTuning {
   requireInRange('mu', mu, { min: 0, max: 1, minExclusive: true });

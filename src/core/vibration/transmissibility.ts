@@ -12,7 +12,7 @@ import { magnificationFactor } from './magnification.ts';
  * @param zeta damping ratio, [0, ∞)
  * @returns T_R, dimensionless
  * @example transmissibility(2, 0.1) // 0.355862
- * @source rao2017 §9.10, Eq. (9.94) (equation number from memory)
+ * @source rao2017 §9.10, transmissibility (section from memory)
  */
 export function transmissibility(r: number, zeta: number): number {
   return Math.sqrt(1 + (2 * zeta * r) ** 2) * magnificationFactor(r, zeta);
@@ -27,7 +27,7 @@ export function transmissibility(r: number, zeta: number): number {
  * @param zeta damping ratio, [0, ∞)
  * @returns Z/Y, dimensionless (tends to 1 far above resonance)
  * @example relativeMotionRatio(1, 0.1) // 5
- * @source rao2017 §3.6.2, Eq. (3.75) (equation number from memory)
+ * @source rao2017 §3.6, base excitation, relative motion (section from memory)
  */
 export function relativeMotionRatio(r: number, zeta: number): number {
   return r * r * magnificationFactor(r, zeta);
@@ -42,7 +42,7 @@ export function relativeMotionRatio(r: number, zeta: number): number {
  * @param zeta damping ratio, [0, ∞)
  * @returns φ in rad
  * @example baseMotionPhaseLag(1, 0.1) // atan2(0.2, 0.04) = 1.373401
- * @source rao2017 §3.6.1, Eq. (3.69) (equation number from memory)
+ * @source rao2017 §3.6, base excitation, phase of the absolute motion (section from memory)
  */
 export function baseMotionPhaseLag(r: number, zeta: number): number {
   magnificationFactor(r, zeta); // validates r and ζ, rejects the undamped resonance

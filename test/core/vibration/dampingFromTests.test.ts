@@ -9,7 +9,7 @@ describe('logDecrementFromPeaks', () => {
     expectClose({ label: 'δ', computed: logDecrementFromPeaks(1, 1 / 16, 1), expected: 2.7726, tol: 2e-5, why: 'book value to 5 s.f.' });
     expectClose({ label: 'ζ', computed: zetaFromLogDecrement(logDecrementFromPeaks(1, 1 / 16, 1)), expected: 0.4037, tol: 1e-4, why: 'book value to 4 s.f.' });
   });
-  it('averages over n cycles: δ = (1/n) ln(x₁/xₙ) (Rao 6th ed. Eq. 2.85, from memory; closed form)', () => {
+  it('averages over n cycles: δ = (1/n) ln(x₁/xₙ) (Rao 6th ed. §2.6, from memory; closed form)', () => {
     expectClose({ label: 'δ', computed: logDecrementFromPeaks(10, 10 * Math.exp(-2.5), 5), expected: 0.5, tol: 1e-14, why: 'same arithmetic' });
   });
   it('refuses a later peak that is not smaller, and a fractional cycle count', () => {
@@ -31,7 +31,7 @@ describe('logDecrementFromPeaks', () => {
 
 describe('halfPowerDamping', () => {
   it('recovers ζ = 0.05 from the half-power points 0.946111 and 1.046363 around the peak at 0.997497 (closed form, calc)', () => {
-    // Rao 6th ed. Eq. (3.30) solved for M = M_max/√2 (points at M_max/√2, pitfall 4); 6-decimal inputs
+    // Rao 6th ed. §3.4 magnification factor (from memory) solved for M = M_max/√2 (points at M_max/√2, pitfall 4); 6-decimal inputs
     const r = halfPowerDamping(0.946111, 1.046363, 0.997497);
     expectClose({ label: 'ζ', computed: r.zeta, expected: 0.05, tol: 5e-6, why: 'inputs rounded to 6 decimals' });
     expectClose({ label: 'fn', computed: r.fn, expected: 1, tol: 5e-6, why: 'inputs rounded to 6 decimals' });
@@ -51,6 +51,14 @@ describe('halfPowerDamping', () => {
     fc.assert(fc.property(fc.double({ min: 1e-3, max: 0.38, noNaN: true }), fc.double({ min: 0.1, max: 1e3, noNaN: true }), (z, fn) => {
       const s = 2 * z * Math.sqrt(1 - z * z);
       const r = halfPowerDamping(fn * Math.sqrt(1 - 2 * z * z - s), fn * Math.sqrt(1 - 2 * z * z + s), fn * Math.sqrt(1 - 2 * z * z));
+      return Math.abs(r.zeta - z) < 1e-8 && Math.abs(r.fn / fn - 1) < 1e-8;
+    }));
+  });
+  it('inverts the accelerance half-power points for any ζ that has both', () => {
+    // accelerance r²M has the receptance form in 1/r² (closed form): 1/r² = 1 − 2ζ² ± 2ζ√(1−ζ²)
+    fc.assert(fc.property(fc.double({ min: 1e-3, max: 0.38, noNaN: true }), fc.double({ min: 0.1, max: 1e3, noNaN: true }), (z, fn) => {
+      const s = 2 * z * Math.sqrt(1 - z * z);
+      const r = halfPowerDamping(fn / Math.sqrt(1 - 2 * z * z + s), fn / Math.sqrt(1 - 2 * z * z - s), fn / Math.sqrt(1 - 2 * z * z), 'acceleration');
       return Math.abs(r.zeta - z) < 1e-8 && Math.abs(r.fn / fn - 1) < 1e-8;
     }));
   });

@@ -1,7 +1,6 @@
 /**
  * Forced-response reference rows. Source of the formulas: Rao, Mechanical Vibrations 6th ed.,
- * Eqs. (3.30)–(3.31) (magnification, phase) and Eq. (9.94) (transmissibility); equation numbers
- * from memory. Values: evaluated independently of this project with scipy (closed form; scipy
+ * §3.4 (magnification, phase) and §9.10 (transmissibility); sections from memory. Values: evaluated independently of this project with scipy (closed form; scipy
  * signal.freqresp of 1/(s² + 2ζs + 1) agrees) — provenance 'closed form'. Columns: ζ, r, M,
  * phase (degrees), T_R; tolerance 5e-6 relative (values rounded to 6 decimals; phase to 4 decimals of a degree, 1e-5).
  */

@@ -11,7 +11,7 @@ const zetaArb = fc.double({ min: 1e-3, max: 2, noNaN: true });
 
 describe('magnification, phase and transmissibility against reference values', () => {
   for (const row of FORCED_ROWS) {
-    it(`ζ = ${row.zeta}, r = ${row.r.toFixed(4)} (Rao 6th ed. Eqs. 3.30, 3.31, 9.94; closed form)`, () => {
+    it(`ζ = ${row.zeta}, r = ${row.r.toFixed(4)} (Rao 6th ed. §3.4 and §9.10, from memory; closed form)`, () => {
       const why = 'reference rounded to 6 decimals: half a unit is ≤ 5e-6 relative for values ≥ 0.1';
       expectClose({ label: 'M', computed: magnificationFactor(row.r, row.zeta), expected: row.M, tol: 5e-6, why });
       expectClose({ label: 'TR', computed: transmissibility(row.r, row.zeta), expected: row.TR, tol: 5e-6, why });
@@ -19,7 +19,7 @@ describe('magnification, phase and transmissibility against reference values', (
     });
   }
   it('peaks at r = √(1−2ζ²) with M = 1/(2ζ√(1−ζ²)): ζ = 0.05 gives 10.01252 at 0.997497 and ζ = 0.5 gives 1.154701 at 0.707107', () => {
-    // Rao 6th ed. §3.4 Eqs. (3.33)–(3.34) (from memory); values closed form (calc)
+    // Rao 6th ed. §3.4 resonant peak (section from memory); values closed form (calc)
     expectClose({ label: 'M_max(0.05)', computed: displacementPeak(0.05).M, expected: 10.01252, tol: 1e-6, why: '7 s.f.' });
     expectClose({ label: 'r_peak(0.05)', computed: displacementPeak(0.05).r, expected: 0.997497, tol: 1e-6, why: '6 s.f.' });
     expectClose({ label: 'M_max(0.5)', computed: displacementPeak(0.5).M, expected: 1.154701, tol: 1e-6, why: '7 s.f.' });

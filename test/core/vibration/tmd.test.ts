@@ -27,7 +27,7 @@ function fixedPoints(mu: number, f: number, load: 'force' | 'base'): { beta: num
 const variance = (s: TmdSystem, load: 'force' | 'base') => adaptiveSimpson((b) => amp(s, b, load) ** 2, 1e-6, 40, 1e-10);
 
 describe('tmdTuning closed forms', () => {
-  it('Den Hartog: f = 1/(1+μ) and both damping forms, μ = 0.1 (Den Hartog, Mechanical Vibrations 4th ed. 1956, §3.3; from memory)', () => {
+  it('Den Hartog: f = 1/(1+μ) and both damping forms, μ = 0.1 (Den Hartog, Mechanical Vibrations 4th ed. 1956, ch. 3, damped vibration absorber; from memory)', () => {
     const t = tmdTuning(0.1, 'force');
     expectClose({ label: 'f', computed: t.f, expected: 0.909091, tol: 1e-6, why: '6 s.f.' });
     expectClose({ label: 'ζ (absorber frequency)', computed: t.zeta, expected: Math.sqrt(0.3 / 8.8), tol: 1e-14, why: 'pitfall 1: √(3μ/(8(1+μ)))' });
@@ -48,14 +48,14 @@ describe('tmdTuning closed forms', () => {
 
 describe('exact two-degree-of-freedom response', () => {
   it('true peak with Den Hartog tuning at μ = 0.1 is 4.59022, above the fixed-point estimate √(1+2/μ) = 4.58258', () => {
-    // reference: exact 2-DOF frequency scan (calc), Den Hartog 4th ed. §3.3 fixed-point estimate (from memory)
+    // reference: exact 2-DOF frequency scan (calc), Den Hartog 4th ed. ch. 3 fixed-point estimate (from memory)
     const t = tmdTuning(0.1, 'force');
     const p = tmdPeak({ mu: 0.1, f: t.f, zeta: t.zeta, zeta1: 0 }, 'force');
     expectClose({ label: 'peak', computed: p.amplification, expected: 4.59022, tol: 5e-6, why: '6 s.f.' });
     expect(p.amplification).toBeGreaterThan(Math.sqrt(1 + 2 / 0.1));
   });
   it('an undamped absorber tuned to the forcing frequency stops the primary (classical undamped absorber)', () => {
-    // Den Hartog 4th ed. §3.2 (from memory): X₁ = 0 when ω = ω_a for an undamped absorber
+    // Den Hartog 4th ed. ch. 3, undamped absorber (from memory): X₁ = 0 when ω = ω_a for an undamped absorber
     expect(amp({ mu: 0.05, f: 1, zeta: 0, zeta1: 0 }, 1, 'force')).toBeLessThan(1e-12);
   });
   it('a locked absorber (huge damping) makes one mass (1+μ)m₁ on k₁', () => {
