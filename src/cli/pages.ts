@@ -1,7 +1,7 @@
 /**
  * Reads handbook pages for the CLI: every `content/**\/*.mdx` (files starting with _ are not
  * pages, as in src/content.config.ts), its YAML frontmatter validated with the same schema the
- * site build uses. YAML 1.1 rules, as Astro's own frontmatter parser applies them (dates).
+ * site build uses. YAML 1.2 core rules, as Astro's js-yaml parser applies them (`n`, `y`, `on` stay strings; dates are coerced by the schema).
  */
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
@@ -35,7 +35,7 @@ export function readPage(file: string, contentDir: string): PageFile {
   if (!m) return { file, entry, errors: ['no frontmatter: the file must start with a --- block'] };
   let data: unknown;
   try {
-    data = parse(m[1]!, { schema: 'yaml-1.1' });
+    data = parse(m[1]!, { schema: 'core' });
   } catch (e) {
     return { file, entry, errors: [`frontmatter is not valid YAML: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`] };
   }
