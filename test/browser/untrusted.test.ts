@@ -78,8 +78,9 @@ describe('untrusted URL parameters', () => {
 
     it(`ignores a 100 kB parameter and refuses a 1 MB paste with a message on ${path}`, async () => {
       // Node's HTTP server refuses request lines over 16 KB, so the page is served from disk by
-      // the browser's router; Chromium itself refuses addresses over 2 MB, so a 10 MB value can
-      // reach the page only by pasting, tested below.
+      // the browser's router. Chromium refuses addresses over 2 MB, so a huge value reaches the
+      // page only by pasting: 1 MB here (Chromium lays out a 10 MB field for tens of seconds);
+      // 10 MB strings run through evaluate() in test/calculators/hostile.test.ts.
       const w = await watchedPage(browser, server.origin);
       const { page } = w;
       try {
