@@ -8,7 +8,7 @@
  */
 import { spawn } from 'node:child_process';
 import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
-import { cpus, totalmem, tmpdir } from 'node:os';
+import { cpus, loadavg, totalmem, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { baselineConfig, baselineLayout, benchPage } from './lib/pages.ts';
 
@@ -20,7 +20,7 @@ function arg(name: string, fallback: string): string {
   return eq ? eq.split('=')[1]! : i >= 0 ? process.argv[i + 1] ?? fallback : fallback;
 }
 
-interface ChildRun { seconds: number; maxRssKB: number; wallSeconds: number }
+interface ChildRun { seconds: number; cpuSeconds: number; maxRssKB: number; wallSeconds: number }
 
 /** Runs a node script, returns the JSON it prints last, plus wall time. */
 function runNode(script: string, args: string[], env: NodeJS.ProcessEnv, cwd = ROOT): Promise<ChildRun> {
@@ -35,7 +35,7 @@ function runNode(script: string, args: string[], env: NodeJS.ProcessEnv, cwd = R
       const wallSeconds = (performance.now() - t0) / 1000;
       const last = out.trim().split('\n').pop() ?? '';
       if (code !== 0) { fail(new Error(`${script} exited ${code}:\n${err.slice(-4000)}`)); return; }
-      try { ok({ ...(JSON.parse(last) as { seconds: number; maxRssKB: number }), wallSeconds }); } catch { fail(new Error(`${script}: no result line\n${out.slice(-2000)}\n${err.slice(-2000)}`)); }
+      try { ok({ ...(JSON.parse(last) as { seconds: number; cpuSeconds: number; maxRssKB: number }), wallSeconds }); } catch { fail(new Error(`${script}: no result line\n${out.slice(-2000)}\n${err.slice(-2000)}`)); }
     });
   });
 }
@@ -69,14 +69,14 @@ async function main(): Promise<void> {
     }
     const out = join(tmp, 'dist-dampbook');
     const env = cleanEnv({ DAMPBOOK_CONTENT: join(tmp, 'content'), DAMPBOOK_OUT: out });
-    process.stderr.write(`bench:build: ${n} pages in ${tmp}\n`);
+    process.stderr.write(`bench:build: ${n} pages in ${tmp} (load average ${loadavg().map((x) => x.toFixed(1)).join(' ')})\n`);
 
     const astro = await runNode(join(ROOT, 'bench/lib/astro-build-child.mjs'), [ROOT], env);
-    process.stderr.write(`  dampbook astro build ${astro.wallSeconds.toFixed(1)} s, peak ${(astro.maxRssKB / 1024).toFixed(0)} MB\n`);
+    process.stderr.write(`  dampbook astro build ${astro.wallSeconds.toFixed(1)} s (CPU ${astro.cpuSeconds.toFixed(1)} s), peak ${(astro.maxRssKB / 1024).toFixed(0)} MB\n`);
     const index = await runNode(join(ROOT, 'bench/lib/index-child.mjs'), [], env);
-    process.stderr.write(`  search index ${index.wallSeconds.toFixed(1)} s, peak ${(index.maxRssKB / 1024).toFixed(0)} MB\n`);
+    process.stderr.write(`  search index ${index.wallSeconds.toFixed(1)} s (CPU ${index.cpuSeconds.toFixed(1)} s, Node side), peak ${(index.maxRssKB / 1024).toFixed(0)} MB\n`);
     const base = await runNode(join(ROOT, 'bench/lib/astro-build-child.mjs'), [plain], cleanEnv({}), plain);
-    process.stderr.write(`  baseline astro build ${base.wallSeconds.toFixed(1)} s, peak ${(base.maxRssKB / 1024).toFixed(0)} MB\n`);
+    process.stderr.write(`  baseline astro build ${base.wallSeconds.toFixed(1)} s (CPU ${base.cpuSeconds.toFixed(1)} s), peak ${(base.maxRssKB / 1024).toFixed(0)} MB\n`);
 
     const dampbookSeconds = astro.wallSeconds + index.wallSeconds;
     const result = {
@@ -88,6 +88,11 @@ async function main(): Promise<void> {
       searchIndexSeconds: Number(index.wallSeconds.toFixed(2)),
       dampbookAstroSeconds: Number(astro.wallSeconds.toFixed(2)),
       baselinePeakRssMB: Math.round(base.maxRssKB / 1024),
+      // CPU time (user + system) compares the two builds fairly when other work shares the machine
+      dampbookAstroCpuSeconds: Number(astro.cpuSeconds.toFixed(2)),
+      baselineCpuSeconds: Number(base.cpuSeconds.toFixed(2)),
+      astroCpuRatio: Number((astro.cpuSeconds / base.cpuSeconds).toFixed(3)),
+      loadAverage: loadavg().map((x) => Number(x.toFixed(1))),
       machine: `${cpus().length} × ${cpus()[0]?.model.trim() ?? 'cpu'}, ${(totalmem() / 2 ** 30).toFixed(0)} GiB, Node ${process.version}`,
     };
     mkdirSync(join(ROOT, 'bench', 'results'), { recursive: true });
