@@ -31,7 +31,7 @@ export async function main(argv: readonly string[], out = (s: string) => console
     const name = args.positionals[0];
     if (!name || name === 'help' || args.flags.has('help')) { out(usage()); return name ? 0 : 2; }
     const cmd = commands[name];
-    if (!cmd) throw new UsageError(`unknown command '${name}'\n${usage()}`);
+    if (!cmd) throw new UsageError(`unknown command '${name}'; commands: ${Object.keys(commands).join(', ')} (dampbook help shows usage)`);
     return await cmd.run(args, out);
   } catch (e) {
     if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) err(e.stack ?? e.message);

@@ -7,7 +7,7 @@
  */
 import { evaluate, inputOrder, isActive } from '../../calculators/evaluate.ts';
 import type { CalculatorDefinition, Outputs, Values } from '../../calculators/types.ts';
-import { DampbookError } from '../../core/errors.ts';
+import { DampbookError, InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, parseQuantity, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from './format.ts';
 import { parseTyped, readField } from './fieldState.ts';
@@ -213,6 +213,8 @@ export class CalculatorElement extends HTMLElement {
       result = evaluate(calc, values);
     } catch (e) {
       const msg = e instanceof DampbookError ? e.message : 'These inputs could not be computed.';
+      // a problem found while computing (e.g. a bad row in a pasted record) is shown at its field too
+      if (e instanceof InputRangeError && this.field(e.input)) this.showFieldMessage(e.input, e.message);
       this.setState(state, 'error', msg);
       return;
     }
