@@ -49,7 +49,7 @@ describe('oscillator page in Chromium', () => {
     await page.goto(`${server.url}oscillators/sdof/`);
     await page.waitForSelector('db-calculator[data-ready]');
     await page.fill('#c-sdof-m', '-3');
-    await expect.poll(() => page.locator('.field[data-key="m"] .msg').textContent()).toMatch(/greater than 0/);
+    await expect.poll(() => page.locator('.field[data-key="m"] .msg').textContent()).toMatch(/Out of range: at least 1e-6 kg/);
     expect(await page.locator('.field[data-key="m"]').getAttribute('data-invalid')).toBe('');
     await page.fill('#c-sdof-m', 'abc');
     await expect.poll(() => page.locator('.field[data-key="m"] .msg').textContent()).toMatch(/Not a number/);

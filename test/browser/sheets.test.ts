@@ -40,13 +40,13 @@ describe('printed calculation sheet', () => {
     const pdf = join(tmp, 'sdof-a4.pdf');
     await printSheet({
       site: ROOT_BUILD, page: 'sdof', pdf, inputs: [['c', '80']],
-      sheet: { project: 'Test bay instrument mounts', no: 'TW-077', calc: 'TW-077-C-003', by: 'Rana Oduya', checker: 'Tobias Quell', date: '2026-12-01' },
+      sheet: { project: 'Test bay mounts', no: 'TW-077', calc: 'TW-077-C-003', by: 'Rana Oduya', checker: 'Tobias Quell', date: '2026-12-01' },
     });
     const info = pdfInfo(pdf);
     const pages = Number(/Pages:\s+(\d+)/.exec(info)![1]);
     expect(info).toMatch(/\(A4\)/);
     const text = pdfText(pdf);
-    for (const s of ['Tarnwick Works', 'Calculation sheet', 'Test bay instrument mounts', 'TW-077', 'TW-077-C-003', 'Rana Oduya', 'Tobias Quell', '2026-12-01',
+    for (const s of ['Tarnwick Works', 'Calculation sheet', 'Test bay mounts', 'TW-077', 'TW-077-C-003', 'Rana Oduya', 'Tobias Quell', '2026-12-01',
       'Damped single-degree-of-freedom oscillator', 'revision B', 'APPROVED']) expect(text, s).toContain(s);
     // inputs with units (c = 80 N·s/m from the command) and results with units: ζ = 80/400 = 0.2 (closed form, Rao 6th ed. §2.6)
     expect(text).toMatch(/Damping coefficient\s+80\s+N·s\/m/);

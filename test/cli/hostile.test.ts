@@ -10,6 +10,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { calculators } from '../../src/calculators/registry.ts';
+import { defaults, isActive } from '../../src/calculators/evaluate.ts';
 import { main } from '../../src/cli/main.ts';
 
 function dampbook(...argv: string[]): { status: number | null; stdout: string; stderr: string } {
@@ -58,12 +59,14 @@ describe('dampbook with bad invocations', () => {
   });
 
   for (const calc of calculators) {
-    const num = calc.inputs.find((d) => d.kind !== 'choice' && d.kind !== 'text' && d.required) ?? calc.inputs.find((d) => d.kind !== 'choice' && d.kind !== 'text');
+    // a number input that applies with the default choices (an input hidden by `when` is ignored)
+    const active = calc.inputs.filter((d) => isActive(d, defaults(calc)));
+    const num = active.find((d) => d.kind !== 'choice' && d.kind !== 'text' && d.required) ?? active.find((d) => d.kind !== 'choice' && d.kind !== 'text');
     const choice = calc.inputs.find((d) => d.kind === 'choice');
     const text = calc.inputs.find((d) => d.kind === 'text');
     const bad: [string, string[]][] = [];
     if (num) {
-      for (const v of ['NaN', 'Infinity', '-1e999', '1e999', 'abc', '12 furlongs', '<script>alert(1)</script>', '', '9'.repeat(5000)]) bad.push([`${num.key}=${v.slice(0, 20)}`, [`${num.key}=${v}`]]);
+      for (const v of ['NaN', 'Infinity', '-1e999', '1e999', 'abc', '12 furlongs', '<script>alert(1)</script>', ...(num.required ? [''] : []), '9'.repeat(5000)]) bad.push([`${num.key}=${v.slice(0, 20)}`, [`${num.key}=${v}`]]);
     }
     if (choice) bad.push([`${choice.key}=not-an-option`, [`${choice.key}=not-an-option`]]);
     if (text) {
@@ -75,6 +78,11 @@ describe('dampbook with bad invocations', () => {
         const key = ins[0]!.split('=')[0]!;
         // every other required input is given its default, so only the bad one is wrong
         const others = calc.inputs.filter((d) => d.required && d.key !== key && d.kind !== 'text').map((d) => `${d.key}=${String(d.default)}`);
+        for (const t of calc.inputs.filter((d) => d.kind === 'text' && d.required && d.key !== key)) {
+          const file = join(dir, `${calc.id}-${t.key}.csv`);
+          writeFileSync(file, String(t.default));
+          others.push(`${t.key}=@${file}`);
+        }
         const r = await inProcess('calc', calc.id, ...[...others, ...ins].flatMap((kv) => ['--in', kv]));
         expectOneLineError(r, new RegExp(`'${key}'`));
       });

@@ -1,3 +1,4 @@
+import { ComputationError } from '../../core/errors.ts';
 import {
   BIOT_LUMPED_MAX, biotNumber, bodyCooling, material, onOffDuty, rk4, steadyTemperature, timeToLimit,
 } from '../../core/thermal/index.ts';
@@ -22,6 +23,9 @@ function setup(values: Values) {
   return { C, Tamb, duty };
 }
 
+/** Largest RK4 step count of the body model (about 0.1 s in a browser). */
+const MAX_BODY_STEPS = 60000;
+
 /** Body-model run: C dT/dt = P(t) − Q(T) with h(T) from the correlations (RK4). */
 function bodyRun(values: Values, C: number, tEnd: number, stopAt?: number) {
   const body = { ...bodyFrom(values), Tamb: num(values, 'Tamb') };
@@ -32,7 +36,11 @@ function bodyRun(values: Values, C: number, tEnd: number, stopAt?: number) {
   // RK4 is stable for h·(dQ/dT)/C below about 2.8; keep h below a fifth of the shortest time
   // constant (largest UA, at the top of the air table) and resolve each duty phase with 40 steps.
   const tauMin = C / Math.max(1e-12, bodyCooling(body, 690).UA);
-  const steps = Math.min(200000, Math.max(400, Math.ceil((tEnd / tp) * 40), Math.ceil(tEnd / (0.2 * tauMin))));
+  const steps = Math.max(400, Math.ceil((tEnd / tp) * 40), Math.ceil(tEnd / (0.2 * tauMin)));
+  // a page must answer at typing speed: beyond this the inputs are outside the model's use
+  if (steps > MAX_BODY_STEPS) {
+    throw new ComputationError(`the body model would need ${steps.toExponential(1)} steps (a heat capacity very small for its heat loss, or many duty periods): lengthen the duty period, shorten the time, or use the constant-UA model`);
+  }
   return rk4((t, T) => (power(t) - bodyCooling(body, T).Q) / C, body.Tamb, tEnd, steps, stopAt);
 }
 

@@ -1,3 +1,4 @@
+import { ComputationError, InputRangeError } from '../../core/errors.ts';
 import { readTimeSeries } from '../../core/records/index.ts';
 import { ringDown } from '../../core/vibration/index.ts';
 import { choice, defineCalculator, num, optNum, text, type ChartSpec, type Values } from '../types.ts';
@@ -7,7 +8,13 @@ function analyse(values: Values) {
   const series = readTimeSeries(text(values, 'record'), {
     input: 'record', column: num(values, 'column'), timeScale: choice<'s' | 'ms'>(values, 'timeUnit') === 'ms' ? 1e-3 : 1,
   });
-  return { series, fit: ringDown(series.t, series.y) };
+  try {
+    return { series, fit: ringDown(series.t, series.y) };
+  } catch (e) {
+    // the record itself is what cannot be analysed: say so at the record field
+    if (e instanceof ComputationError) throw new InputRangeError('record', `${series.t.length} samples`, undefined, '', e.message);
+    throw e;
+  }
 }
 
 /** Every k-th point so a chart carries at most about 1500 points. */
