@@ -7,7 +7,8 @@ import { stickRelease } from './stickRelease.ts';
 import { timeDomainLaw } from './timeDomainLaw.ts';
 
 /** Work limit: a run needing more steps is stiff or chattering and is refused, not left to hang a page. */
-const MAX_STEPS = 300_000;
+// bounds the work of one run (about a second in a browser); beyond it the inputs are refused
+const MAX_STEPS = 100_000;
 
 export interface SimulationOptions {
   /** Simulated time, s, (0, 1e5]. */

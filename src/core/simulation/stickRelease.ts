@@ -1,3 +1,4 @@
+import { ComputationError } from '../errors.ts';
 /**
  * First time after `t0` at which the net non-friction force on a stuck mass exceeds the friction
  * force, |p(t) − k·z| > F_f, or Infinity when that does not happen before `tEnd`. The mass is
@@ -15,9 +16,15 @@
  * @example stickRelease((t) => 10 * Math.sin(t), 5, 0, 10, 0.01) // π/6 ≈ 0.5236 s
  * @source denHartog1956 §8.6, Coulomb damping and stick-slip (section from memory); rao2017 §2.9 (from memory)
  */
-export function stickRelease(g: (t: number) => number, Ff: number, t0: number, tEnd: number, dt: number): number {
+/** Largest number of scan steps while stuck (bounds the work of one simulation). */
+export const MAX_SCAN = 200_000;
+
+export function stickRelease(g: (t: number) => number, Ff: number, t0: number, tEnd: number, dt: number, maxScan = MAX_SCAN): number {
   let a = t0;
+  let scanned = 0;
   while (a < tEnd) {
+    // a fast drive over a long stick would scan for hours: refuse instead of freezing the page
+    if (++scanned > maxScan) throw new ComputationError(`simulation: the mass sticks for more than ${maxScan} scan steps of the drive; shorten the duration or lower the drive frequency`);
     const b = Math.min(a + dt, tEnd);
     if (Math.abs(g(b)) > Ff) {
       let lo = a;
