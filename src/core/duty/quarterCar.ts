@@ -1,0 +1,84 @@
+/**
+ * The quarter-car model: sprung mass on a spring and damper, unsprung mass on a tyre spring,
+ * driven by the road profile under the tyre. Exact frequency responses, squared magnitudes.
+ */
+import { POSITIVE, requireInRange } from '../errors.ts';
+
+export interface QuarterCar {
+  /** Sprung mass per corner, kg. */
+  readonly ms: number;
+  /** Unsprung mass per corner, kg. */
+  readonly mu: number;
+  /** Suspension spring rate at the wheel, N/m. */
+  readonly ks: number;
+  /** Tyre vertical rate, N/m. */
+  readonly kt: number;
+  /** Linear (or equivalent linear) damping at the wheel, N·s/m. */
+  readonly c: number;
+}
+
+/** Checks quarter-car parameters; names the offending input. */
+export function checkQuarterCar(q: QuarterCar): QuarterCar {
+  requireInRange('ms', q.ms, POSITIVE, 'kg');
+  requireInRange('mu', q.mu, POSITIVE, 'kg');
+  requireInRange('ks', q.ks, POSITIVE, 'N/m');
+  requireInRange('kt', q.kt, POSITIVE, 'N/m');
+  requireInRange('c', q.c, POSITIVE, 'N·s/m');
+  return q;
+}
+
+/** |H(f)|² of each response per unit road displacement. */
+export interface QuarterCarGains {
+  /** Damper (relative) velocity, (m/s)²/m². */
+  readonly damperVelocity: number;
+  /** Suspension travel z_s − z_u, m²/m². */
+  readonly travel: number;
+  /** Sprung-mass acceleration, (m/s²)²/m². */
+  readonly bodyAcceleration: number;
+  /** Dynamic tyre load k_t(z_r − z_u), N²/m². */
+  readonly tyreLoad: number;
+}
+
+/**
+ * Squared gains of the quarter car at frequency f (s = iω, ω = 2πf).
+ *
+ * $$a = m_s s^2 + cs + k_s,\quad b = m_u s^2 + cs + k_s + k_t,\quad d = cs + k_s,\quad \Delta = ab - d^2$$
+ * $$\frac{Z_s - Z_u}{Z_r} = \frac{-k_t m_s s^2}{\Delta},\qquad \frac{Z_s}{Z_r} = \frac{k_t d}{\Delta},\qquad
+ *   \frac{F_t}{Z_r} = k_t\left(1 - \frac{k_t a}{\Delta}\right) = \frac{k_t\,(a(b-k_t) - d^2)}{\Delta}$$
+ *
+ * @param q quarter car (call checkQuarterCar first)
+ * @param f frequency, Hz, ≥ 0
+ * @example quarterCarGains(fellrunner, 0).travel // 0 (static road offset moves the car bodily)
+ * @source wong2008 §7.2 quarter-car equations of motion (section from memory); closed form
+ */
+export function quarterCarGains(q: QuarterCar, f: number): QuarterCarGains {
+  const w = 2 * Math.PI * f;
+  const w2 = w * w;
+  const cw = q.c * w;
+  const aRe = q.ks - q.ms * w2; // a = aRe + i·cw
+  const bRe = q.ks + q.kt - q.mu * w2; // b = bRe + i·cw
+  const eRe = q.ks - q.mu * w2; // b − k_t
+  // d² = (k_s + i cω)² = k_s² − c²ω² + 2i k_s cω
+  const d2Re = q.ks * q.ks - cw * cw;
+  const d2Im = 2 * q.ks * cw;
+  const dRe = aRe * bRe - cw * cw - d2Re;
+  const dIm = cw * (aRe + bRe) - d2Im;
+  const mag2 = dRe * dRe + dIm * dIm;
+  const nRe = aRe * eRe - cw * cw - d2Re;
+  const nIm = cw * (aRe + eRe) - d2Im;
+  const rel2 = (q.kt * q.ms * w2) ** 2 / mag2;
+  const zs2 = (q.kt * q.kt * (q.ks * q.ks + cw * cw)) / mag2;
+  return {
+    damperVelocity: w2 * rel2,
+    travel: rel2,
+    bodyAcceleration: w2 * w2 * zs2,
+    tyreLoad: (q.kt * q.kt * (nRe * nRe + nIm * nIm)) / mag2,
+  };
+}
+
+/** Undamped natural frequencies of the body and wheel modes (uncoupled estimates), Hz. */
+export function quarterCarModes(q: QuarterCar): { body: number; wheel: number } {
+  const body = Math.sqrt((q.ks * q.kt) / (q.ks + q.kt) / q.ms) / (2 * Math.PI);
+  const wheel = Math.sqrt((q.ks + q.kt) / q.mu) / (2 * Math.PI);
+  return { body, wheel };
+}

@@ -1,0 +1,43 @@
+/**
+ * Equivalent linear damping of a power-law damper under Gaussian random motion, iterated to
+ * consistency with the response it produces.
+ */
+import { ComputationError } from '../errors.ts';
+import { gaussianMomentFactor } from '../dampers/index.ts';
+
+export interface Linearised {
+  /** Equivalent viscous coefficient, N·s/m. */
+  readonly ceq: number;
+  /** RMS velocity consistent with ceq, m/s. */
+  readonly sigmaV: number;
+  readonly iterations: number;
+}
+
+/**
+ * Fixed point of $c_{eq} = C\,\kappa(\alpha)\,\sigma_v(c_{eq})^{\alpha-1}$.
+ *
+ * Minimising the mean-square error between C|v|^α sgn v and c_eq·v for Gaussian v gives
+ * $$c_{eq} = \frac{E[F(v)\,v]}{E[v^2]} = C\,\kappa(\alpha)\,\sigma_v^{\alpha-1},$$
+ * so c_eq·σ_v² = C κ σ_v^{1+α}: the linearised damper dissipates the same mean power.
+ * Iterated in logarithms; with σ_v ∝ c^{−1/2} the map contracts by |1 − α|/2 per step.
+ *
+ * @param C power-law coefficient, N·(s/m)^α; alpha (0, 2]
+ * @param sigmaVOf RMS damper velocity of the linear system with damping c, m/s
+ * @param c0 starting guess, N·s/m
+ * @throws ComputationError when 200 steps do not reach 1e-10
+ * @example statisticalLinearisation(800, 0.5, (c) => Math.sqrt(40 / c), 1000).ceq
+ * @source roberts2003 ch. 5 (statistical linearisation, Gaussian closure; chapter from memory)
+ */
+export function statisticalLinearisation(C: number, alpha: number, sigmaVOf: (c: number) => number, c0: number): Linearised {
+  const k = C * gaussianMomentFactor(alpha);
+  let c = c0;
+  for (let i = 1; i <= 200; i++) {
+    const s = sigmaVOf(c);
+    const next = k * s ** (alpha - 1);
+    if (!(next > 0) || !Number.isFinite(next)) throw new ComputationError('statistical linearisation: equivalent damping not finite');
+    const done = Math.abs(Math.log(next / c)) < 1e-10;
+    c = next;
+    if (done) return { ceq: c, sigmaV: sigmaVOf(c), iterations: i };
+  }
+  throw new ComputationError('statistical linearisation did not converge in 200 steps');
+}
