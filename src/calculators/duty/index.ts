@@ -1,5 +1,7 @@
 import type { CalculatorDefinition } from '../types.ts';
+import { harmonicDutyCalc } from './harmonicDutyCalc.ts';
 import { impact } from './impact.ts';
 import { roadPower } from './roadPower.ts';
+import { structuralDampers } from './structuralDampersCalc.ts';
 
-export const dutyCalculators: readonly CalculatorDefinition[] = [roadPower, impact];
+export const dutyCalculators: readonly CalculatorDefinition[] = [harmonicDutyCalc, roadPower, impact, structuralDampers];

@@ -10,3 +10,4 @@ export { roadDuty, type RoadDamper, type RoadDuty } from './roadDuty.ts';
 export { thinProfile, type DutySummary } from './dutySummary.ts';
 export { impactEnergy, STANDARD_GRAVITY, type ImpactInput, type ImpactEnergy } from './impactEnergy.ts';
 export { linearStop, type LinearStop } from './linearStop.ts';
+export { storeyDampers, adiabaticRise, type StoreyDampers, type StoreyDamperResult } from './structuralDampers.ts';
