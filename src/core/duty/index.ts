@@ -11,3 +11,7 @@ export { thinProfile, type DutySummary } from './dutySummary.ts';
 export { impactEnergy, STANDARD_GRAVITY, type ImpactInput, type ImpactEnergy } from './impactEnergy.ts';
 export { linearStop, type LinearStop } from './linearStop.ts';
 export { storeyDampers, adiabaticRise, type StoreyDampers, type StoreyDamperResult } from './structuralDampers.ts';
+export { parseRecordedMotion, type ParsedRecord, type RejectedRow } from './recordedMotionCsv.ts';
+export { mapColumns, splitNameUnit, type ColumnLayout, type ColumnMap, type Role } from './recordedMotionHeader.ts';
+export { findSegments, differentiate, type Segments } from './recordSegments.ts';
+export { recordedMotion, type RecordedMotionResult } from './recordedMotion.ts';
