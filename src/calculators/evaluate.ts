@@ -12,7 +12,7 @@ export interface EvaluateOptions {
   readonly fillDefaults?: boolean;
 }
 
-function rangeOf(def: Extract<InputDef, { min: number }>): Range {
+export function rangeOf(def: Extract<InputDef, { min: number }>): Range {
   return { min: def.min, max: def.max, minExclusive: def.minExclusive, maxExclusive: def.maxExclusive };
 }
 
@@ -23,59 +23,68 @@ export function isActive(def: InputDef, values: Values): boolean {
   return typeof v === 'string' && def.when.is.includes(v);
 }
 
+/**
+ * Checks one raw value (SI number, string such as "25 lb", or anything untrusted) against its
+ * definition and returns the typed SI value. `values` holds the choices already read (for `when`).
+ * Returns undefined for an inactive or empty optional input.
+ */
+export function checkInput(def: InputDef, v: unknown, values: Values, fill: boolean): number | string | undefined {
+  if (def.kind === 'choice') {
+    const allowed = def.options.map((o) => o.value).join(', ');
+    if (v === undefined || v === '') {
+      if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', `choose one of ${allowed}`);
+      v = def.default;
+    }
+    if (typeof v !== 'string' || !def.options.some((o) => o.value === v)) throw new InputRangeError(def.key, v, undefined, '', `choose one of ${allowed}`);
+    return v;
+  }
+  if (!isActive(def, values)) return undefined;
+  if (def.kind === 'text') {
+    if (v === undefined || v === null) {
+      if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', 'required');
+      v = def.default;
+    }
+    if (typeof v !== 'string') throw new InputRangeError(def.key, typeof v, undefined, '', 'must be text');
+    if (v.length > def.maxLength) throw new InputRangeError(def.key, `${v.length} characters`, undefined, '', `longer than ${def.maxLength} characters`);
+    return v;
+  }
+  const unit = siSymbol(def.kind);
+  const r = rangeOf(def);
+  if (v === undefined || v === null || (typeof v === 'string' && v.trim() === '')) {
+    if (def.optional) return undefined;
+    if (def.required && !fill) throw new InputRangeError(def.key, undefined, r, unit, 'required');
+    v = def.default;
+  }
+  let n: number;
+  if (typeof v === 'number') n = v;
+  else if (typeof v === 'string') {
+    try {
+      n = parseQuantity(v, def.kind);
+    } catch (e) {
+      if (e instanceof UnitError) throw new InputRangeError(def.key, v, r, unit, e.message);
+      throw e;
+    }
+  } else throw new InputRangeError(def.key, typeof v, r, unit, 'not a number');
+  if (!Number.isFinite(n)) throw new InputRangeError(def.key, n, r, unit, 'not a finite number');
+  const low = r.minExclusive ? n <= r.min : n < r.min;
+  const high = r.maxExclusive ? n >= r.max : n > r.max;
+  if (low || high) throw new InputRangeError(def.key, n, r, unit);
+  return n;
+}
+
+/** Choices first: the `when` clauses of other inputs depend on them. */
+export function inputOrder(calc: CalculatorDefinition): InputDef[] {
+  return [...calc.inputs].sort((a, b) => Number(a.kind !== 'choice') - Number(b.kind !== 'choice'));
+}
+
 /** Converts and checks raw values (SI numbers or strings such as "25 lb") into typed SI values. */
 export function validateInputs(calc: CalculatorDefinition, raw: Readonly<Record<string, unknown>>, opts: EvaluateOptions = {}): Values {
   const fill = opts.fillDefaults ?? true;
   const values: Record<string, number | string | undefined> = {};
-  // choices first: `when` clauses of number inputs depend on them
-  const ordered = [...calc.inputs].sort((a, b) => Number(a.kind !== 'choice') - Number(b.kind !== 'choice'));
-  for (const def of ordered) {
+  for (const def of inputOrder(calc)) {
     const has = Object.prototype.hasOwnProperty.call(raw, def.key);
-    let v = has ? raw[def.key] : undefined;
-    if (def.kind === 'choice') {
-      if (v === undefined || v === '') {
-        if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', `choose one of ${def.options.map((o) => o.value).join(', ')}`);
-        v = def.default;
-      }
-      if (typeof v !== 'string' || !def.options.some((o) => o.value === v)) {
-        throw new InputRangeError(def.key, v, undefined, '', `choose one of ${def.options.map((o) => o.value).join(', ')}`);
-      }
-      values[def.key] = v;
-      continue;
-    }
-    if (!isActive(def, values)) continue;
-    if (def.kind === 'text') {
-      if (v === undefined || v === null) {
-        if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', 'required');
-        v = def.default;
-      }
-      if (typeof v !== 'string') throw new InputRangeError(def.key, typeof v, undefined, '', 'must be text');
-      if (v.length > def.maxLength) throw new InputRangeError(def.key, `${v.length} characters`, undefined, '', `longer than ${def.maxLength} characters`);
-      values[def.key] = v;
-      continue;
-    }
-    const unit = siSymbol(def.kind);
-    if (v === undefined || v === null || (typeof v === 'string' && v.trim() === '')) {
-      if (def.optional) { values[def.key] = undefined; continue; }
-      if (def.required && !fill) throw new InputRangeError(def.key, undefined, rangeOf(def), unit, 'required');
-      v = def.default;
-    }
-    let n: number;
-    if (typeof v === 'number') n = v;
-    else if (typeof v === 'string') {
-      try {
-        n = parseQuantity(v, def.kind);
-      } catch (e) {
-        if (e instanceof UnitError) throw new InputRangeError(def.key, v, rangeOf(def), unit, e.message);
-        throw e;
-      }
-    } else throw new InputRangeError(def.key, v, rangeOf(def), unit, 'not a number');
-    const r = rangeOf(def);
-    if (!Number.isFinite(n)) throw new InputRangeError(def.key, n, r, unit, 'not a finite number');
-    const low = r.minExclusive ? n <= r.min : n < r.min;
-    const high = r.maxExclusive ? n >= r.max : n > r.max;
-    if (low || high) throw new InputRangeError(def.key, n, r, unit);
-    values[def.key] = n;
+    const v = checkInput(def, has ? raw[def.key] : undefined, values, fill);
+    if (v !== undefined) values[def.key] = v;
   }
   return values;
 }

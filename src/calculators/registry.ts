@@ -7,7 +7,11 @@ import { dutyCalculators } from './duty/index.ts';
 import { thermalCalculators } from './thermal/index.ts';
 import type { CalculatorDefinition } from './types.ts';
 
-export const calculators: readonly CalculatorDefinition[] = [...vibrationCalculators, ...dutyCalculators, ...thermalCalculators];
+/** Domains are also the client's lazy-loading unit: a page loads only its calculator's domain. */
+export const domains = { vibration: vibrationCalculators, duty: dutyCalculators, thermal: thermalCalculators } as const;
+export type Domain = keyof typeof domains;
+
+export const calculators: readonly CalculatorDefinition[] = Object.values(domains).flat();
 
 const byId = new Map(calculators.map((c) => [c.id, c]));
 if (byId.size !== calculators.length) throw new Error('registry: duplicate calculator id');
@@ -18,4 +22,10 @@ export function getCalculator(id: string): CalculatorDefinition | undefined {
 
 export function calculatorIds(): string[] {
   return calculators.map((c) => c.id);
+}
+
+/** The domain whose list holds a calculator. */
+export function domainOf(id: string): Domain | undefined {
+  for (const [d, list] of Object.entries(domains) as [Domain, readonly CalculatorDefinition[]][]) if (list.some((c) => c.id === id)) return d;
+  return undefined;
 }

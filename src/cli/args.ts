@@ -1,0 +1,35 @@
+/** Argument parsing for the CLI: flags, repeated `--in key=value`, positionals. */
+export interface ParsedArgs {
+  readonly positionals: string[];
+  readonly flags: Map<string, string | true>;
+  readonly inputs: [string, string][];
+}
+
+export class UsageError extends Error {
+  override name = 'UsageError';
+}
+
+export function parseArgs(argv: readonly string[]): ParsedArgs {
+  const positionals: string[] = [];
+  const flags = new Map<string, string | true>();
+  const inputs: [string, string][] = [];
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i]!;
+    if (a === '--in' || a === '-i') {
+      const kv = argv[++i];
+      if (kv === undefined) throw new UsageError('--in needs key=value');
+      const eq = kv.indexOf('=');
+      if (eq <= 0) throw new UsageError(`--in ${kv}: expected key=value`);
+      inputs.push([kv.slice(0, eq), kv.slice(eq + 1)]);
+    } else if (a.startsWith('--')) {
+      const eq = a.indexOf('=');
+      if (eq > 0) flags.set(a.slice(2, eq), a.slice(eq + 1));
+      else {
+        const next = argv[i + 1];
+        const takesValue = ['record', 'pdf', 'paper', 'out', 'base', 'site'].includes(a.slice(2));
+        if (takesValue && next !== undefined) { flags.set(a.slice(2), next); i++; } else flags.set(a.slice(2), true);
+      }
+    } else positionals.push(a);
+  }
+  return { positionals, flags, inputs };
+}

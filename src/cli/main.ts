@@ -1,0 +1,35 @@
+/**
+ * The `dampbook` command line over the same calculator registry as the site. Errors print one
+ * line and exit non-zero; stack traces only with DAMPBOOK_DEBUG=1.
+ */
+import { DampbookError } from '../core/errors.ts';
+import { parseArgs, UsageError, type ParsedArgs } from './args.ts';
+import { calc } from './commands/calc.ts';
+import { list } from './commands/list.ts';
+
+type Command = (args: ParsedArgs, out: (s: string) => void) => number | Promise<number>;
+
+export const commands: Record<string, { run: Command; help: string }> = {
+  list: { run: list, help: 'list [--json]                      every calculator with its inputs and outputs (SI units)' },
+  calc: { run: calc, help: 'calc <id> --in key=value … [--json] evaluate a calculator (SI values, or "25 lb")' },
+};
+
+function usage(): string {
+  return ['usage: dampbook <command> …', ...Object.values(commands).map((c) => `  dampbook ${c.help}`)].join('\n');
+}
+
+export async function main(argv: readonly string[], out = (s: string) => console.log(s), err = (s: string) => console.error(s)): Promise<number> {
+  try {
+    const args = parseArgs(argv);
+    const name = args.positionals[0];
+    if (!name || name === 'help' || args.flags.has('help')) { out(usage()); return name ? 0 : 2; }
+    const cmd = commands[name];
+    if (!cmd) throw new UsageError(`unknown command '${name}'\n${usage()}`);
+    return await cmd.run(args, out);
+  } catch (e) {
+    if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) err(e.stack ?? e.message);
+    else if (e instanceof DampbookError || e instanceof UsageError) err(`dampbook: ${e.message}`);
+    else err(`dampbook: internal error: ${e instanceof Error ? e.message : String(e)} (set DAMPBOOK_DEBUG=1 for details)`);
+    return e instanceof UsageError ? 2 : 1;
+  }
+}

@@ -1,0 +1,68 @@
+/**
+ * A static SVG drawing of a ChartSpec, rendered on the server so that search, print and readers
+ * without JavaScript see the chart; the chart element replaces it with a live chart.js canvas.
+ */
+import type { ChartSpec } from '../../calculators/types.ts';
+import type { UnitSystem } from '../../core/units/index.ts';
+import { displayUnit, escapeHtml, formatNumber, toDisplay } from './format.ts';
+
+const W = 480;
+const H = 256;
+const PAD = { l: 56, r: 12, t: 10, b: 34 };
+
+function scaler(lo: number, hi: number, a: number, b: number, log: boolean) {
+  const f = log ? Math.log10 : (v: number) => v;
+  const l = f(lo);
+  const h = f(hi) === l ? l + 1 : f(hi);
+  return (v: number) => a + ((f(v) - l) / (h - l)) * (b - a);
+}
+
+export function svgChart(spec: ChartSpec, system: UnitSystem): string {
+  const ux = displayUnit(spec.x.kind, system);
+  const uy = displayUnit(spec.y.kind, system);
+  const xlog = spec.x.scale === 'log';
+  const ylog = spec.y.scale === 'log';
+  const xs: number[] = [];
+  const ys: number[] = [];
+  for (const s of spec.series) {
+    s.x.forEach((v) => { const d = toDisplay(v, ux); if (Number.isFinite(d) && (!xlog || d > 0)) xs.push(d); });
+    s.y.forEach((v) => { const d = toDisplay(v, uy); if (Number.isFinite(d) && (!ylog || d > 0)) ys.push(d); });
+  }
+  if (xs.length === 0 || ys.length === 0) return '';
+  const x0 = spec.x.min !== undefined ? toDisplay(spec.x.min, ux) : Math.min(...xs);
+  const x1 = spec.x.max !== undefined ? toDisplay(spec.x.max, ux) : Math.max(...xs);
+  const y0 = spec.y.min !== undefined ? toDisplay(spec.y.min, uy) : Math.min(...ys);
+  const y1 = spec.y.max !== undefined ? toDisplay(spec.y.max, uy) : Math.max(...ys);
+  const sx = scaler(x0, x1, PAD.l, W - PAD.r, xlog);
+  const sy = scaler(y0, y1, H - PAD.b, PAD.t, ylog);
+  const parts: string[] = [];
+  parts.push(`<rect class="svg-axis" x="${PAD.l}" y="${PAD.t}" width="${W - PAD.l - PAD.r}" height="${H - PAD.t - PAD.b}"/>`);
+  for (const m of spec.markers ?? []) {
+    const mx = sx(toDisplay(m.x, ux));
+    if (mx >= PAD.l && mx <= W - PAD.r) parts.push(`<line class="svg-marker" x1="${mx.toFixed(1)}" x2="${mx.toFixed(1)}" y1="${PAD.t}" y2="${H - PAD.b}"/>`);
+  }
+  for (const s of spec.series) {
+    const pts: string[] = [];
+    const step = Math.max(1, Math.floor(s.x.length / 400));
+    for (let i = 0; i < s.x.length; i += step) {
+      const dx = toDisplay(s.x[i]!, ux);
+      const dy = toDisplay(s.y[i]!, uy);
+      if (!Number.isFinite(dx) || !Number.isFinite(dy) || (xlog && dx <= 0) || (ylog && dy <= 0)) continue;
+      pts.push(`${sx(dx).toFixed(1)},${Math.min(Math.max(sy(dy), PAD.t), H - PAD.b).toFixed(1)}`);
+    }
+    const tone = `tone-${s.tone ?? 0}`;
+    if (s.style === 'points') {
+      for (const p of pts) { const [a, b] = p.split(','); parts.push(`<circle class="${tone}" cx="${a}" cy="${b}" r="3.5" fill="none" stroke-width="2"/>`); }
+    } else {
+      parts.push(`<polyline class="svg-line ${tone}${s.style === 'dash' ? ' dash' : ''}" points="${pts.join(' ')}"/>`);
+    }
+  }
+  const tick = (v: number) => escapeHtml(formatNumber(v, 3));
+  parts.push(`<text class="svg-tick" x="${PAD.l}" y="${H - PAD.b + 14}">${tick(x0)}</text>`);
+  parts.push(`<text class="svg-tick" x="${W - PAD.r}" y="${H - PAD.b + 14}" text-anchor="end">${tick(x1)}</text>`);
+  parts.push(`<text class="svg-tick" x="${(PAD.l + W - PAD.r) / 2}" y="${H - 4}" text-anchor="middle">${escapeHtml(spec.x.label)}${ux.symbol ? ` [${escapeHtml(ux.symbol)}]` : ''}</text>`);
+  parts.push(`<text class="svg-tick" x="${PAD.l - 4}" y="${H - PAD.b}" text-anchor="end">${tick(y0)}</text>`);
+  parts.push(`<text class="svg-tick" x="${PAD.l - 4}" y="${PAD.t + 8}" text-anchor="end">${tick(y1)}</text>`);
+  parts.push(`<text class="svg-tick" x="12" y="${(PAD.t + H - PAD.b) / 2}" text-anchor="middle" transform="rotate(-90 12 ${(PAD.t + H - PAD.b) / 2})">${escapeHtml(spec.y.label)}${uy.symbol ? ` [${escapeHtml(uy.symbol)}]` : ''}</text>`);
+  return `<svg viewBox="0 0 ${W} ${H}" preserveAspectRatio="none" aria-hidden="true" focusable="false">${parts.join('')}</svg>`;
+}
