@@ -68,7 +68,7 @@ export const roadPower = defineCalculator({
     const s = setup(values);
     const r = roadDuty(s.car, s.road, s.damper);
     const warnings: string[] = [];
-    if (optNum(values, 'Gd0') !== undefined) warnings.push('A measured G_d(n0) is given, so the road class is not used; clear that field to use the class.');
+    if (optNum(values, 'Gd0') !== undefined) warnings.push('A measured G_d(n0) is given, so the road class is not used; leave that field empty to use the class.');
     if (s.openLimit) warnings.push('ISO 8608 leaves this class limit open; the value shown is the factor-2 step from the class mean.');
     if (r.tyreLoadRatio > 1 / 3) warnings.push(`RMS dynamic tyre load is ${(100 * r.tyreLoadRatio).toFixed(0)} % of the static load: the wheel lifts off at times, and the linear model no longer holds.`);
     if (s.road.w !== 2) warnings.push('w ≠ 2: road velocity is not white, so only the quadrature applies (no closed-form check).');
