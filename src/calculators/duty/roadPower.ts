@@ -61,7 +61,7 @@ export const roadPower = defineCalculator({
     { key: 'vRmsClosed', label: 'RMS damper velocity, closed form (w = 2)', kind: 'velocity', optional: true },
     { key: 'closedFormDiff', label: 'Quadrature vs closed form, largest difference', kind: 'dimensionless', digits: 2, optional: true },
     { key: 'quadError', label: 'Quadrature error bound (relative)', kind: 'dimensionless', digits: 2 },
-    { key: 'band', label: 'Quadrature band', kind: 'text' },
+    { key: 'band', label: 'Quadrature band (log grid, adaptive Simpson; tails added)', kind: 'text' },
     { key: 'roadBasis', label: 'Road input', kind: 'text' },
   ],
   compute(values) {
@@ -78,7 +78,7 @@ export const roadPower = defineCalculator({
       outputs: {
         vRms: r.vRms, P: r.P, accRms: r.accRms, travelRms: r.travelRms, tyreLoadRms: r.tyreLoadRms, tyreLoadRatio: r.tyreLoadRatio,
         Gd0Used: s.road.Gd0, ceq: r.c, PClosed: c?.P, vRmsClosed: c?.vRms, closedFormDiff: diff, quadError: r.relError,
-        band: `${r.band[0].toPrecision(3)} Hz – ${r.band[1].toPrecision(3)} Hz (log grid, adaptive Simpson; power-law tails added)`,
+        band: `${r.band[0].toPrecision(3)}–${r.band[1].toPrecision(3)} Hz`,
         roadBasis: s.basis,
       },
       warnings,

@@ -46,6 +46,7 @@ function detectDelimiter(line: string): { split: (s: string) => string[]; decima
  */
 export function parseRecordedMotion(text: string, layout: ColumnLayout = 'auto'): ParsedRecord {
   const lines = text.split(/\r\n|\n|\r/);
+  if (lines.length > 1 && lines[lines.length - 1] === '') lines.pop(); // the file's final newline is not a line
   let skipped = 0;
   let i = 0;
   const nextContent = () => {
