@@ -1,8 +1,7 @@
 import {
-  ISO_8608_CLASSES, damperVelocityVariance, quarterCarGains, roadDisplacementPsd, roadDuty, roadRoughness, statisticalLinearisation,
+  ISO_8608_CLASSES, quarterCarGains, roadDamperPower, roadDisplacementPsd, roadDuty, roadRoughness,
   type ClassValue, type RoadDamper, type RoadInput,
 } from '../../core/duty/index.ts';
-import { gaussianMomentFactor } from '../../core/dampers/index.ts';
 import { choice, defineCalculator, num, optNum, type ChartSpec, type Values } from '../types.ts';
 import { lawInputs } from './lawInputs.ts';
 
@@ -18,14 +17,6 @@ function setup(values: Values) {
     : { kind: 'linear', c: num(values, 'c') };
   const basis = measured !== undefined ? `measured G_d(n0) = ${measured.toPrecision(4)} m³` : `ISO 8608 class ${cls}, ${which === 'mean' ? 'geometric mean' : `${which} limit`}`;
   return { road, car, damper, basis, openLimit: measured === undefined && fromClass.openLimit };
-}
-
-/** Mean damper power at one speed and roughness (statistical linearisation for a power law). */
-function powerAt(car: ReturnType<typeof setup>['car'], road: RoadInput, damper: RoadDamper): number {
-  if (damper.kind === 'linear') return damper.c * damperVelocityVariance({ ...car, c: damper.c }, road, 1e-6);
-  const k = damper.C * gaussianMomentFactor(damper.alpha);
-  const lin = statisticalLinearisation(damper.C, damper.alpha, (c) => Math.sqrt(damperVelocityVariance({ ...car, c }, road, 1e-6)), k * 0.3 ** (damper.alpha - 1));
-  return lin.ceq * lin.sigmaV ** 2;
 }
 
 const logGrid = (a: number, b: number, n: number) => Array.from({ length: n }, (_, i) => a * (b / a) ** (i / (n - 1)));
@@ -92,7 +83,7 @@ export const roadPower = defineCalculator({
     const speeds = [2.5, 5, 10, 15, 20, 25, 30, 40];
     const classes = ISO_8608_CLASSES.map((cls, i) => ({
       label: `class ${cls}`, x: speeds, tone: i % 6, style: i < 6 ? ('line' as const) : ('dash' as const),
-      y: speeds.map((V) => powerAt(s.car, { Gd0: roadRoughness(cls, 'mean').Gd0, w: s.road.w, V }, s.damper)),
+      y: speeds.map((V) => roadDamperPower(s.car, { Gd0: roadRoughness(cls, 'mean').Gd0, w: s.road.w, V }, s.damper)),
     }));
     const pC = classes[2]!.y[4]!;
     return [

@@ -15,3 +15,4 @@ export { parseRecordedMotion, type ParsedRecord, type RejectedRow } from './reco
 export { mapColumns, splitNameUnit, type ColumnLayout, type ColumnMap, type Role } from './recordedMotionHeader.ts';
 export { findSegments, differentiate, type Segments } from './recordSegments.ts';
 export { recordedMotion, type RecordedMotionResult } from './recordedMotion.ts';
+export { roadDamperPower } from './roadDamperPower.ts';
