@@ -15,4 +15,4 @@ console.log(`search index: ${added.page_count} pages in ${((performance.now() - 
 
 // The stock search UI files are not used (the handbook has its own search box): remove them.
 import { readdirSync, rmSync } from 'node:fs';
-for (const f of readdirSync(`${site}/pagefind`)) if (/^pagefind-(component-|modular-)?ui\./.test(f)) rmSync(`${site}/pagefind/${f}`);
+for (const f of readdirSync(`${site}/pagefind`)) if (/^pagefind-((component-|modular-)?ui|highlight)\./.test(f)) rmSync(`${site}/pagefind/${f}`);
