@@ -7,7 +7,9 @@ function setup(values: Values) {
   if (vert !== 0 && vert !== 1) throw new InputRangeError('vertical', vert, { min: 0, max: 1 }, '', '0 = horizontal, 1 = vertical travel downward onto the stop');
   const i = { m: num(values, 'm'), v: num(values, 'v'), Fp: num(values, 'Fp'), s: num(values, 's'), cph: num(values, 'cph'), vertical: vert === 1 };
   const F0 = i.Fp + (i.vertical ? i.m * STANDARD_GRAVITY : 0);
-  return { i, F0, vEnd: num(values, 'vEnd') };
+  const ratio = num(values, 'vEndRatio');
+  if (ratio === 0 && F0 > 0) throw new InputRangeError('vEndRatio', 0, { min: 0, max: 0.9, minExclusive: true }, '', 'a mass that is pushed on (drive force or gravity) is never stopped by a dashpot alone');
+  return { i, F0, vEnd: ratio * i.v };
 }
 
 /** End-stop impacts: energy per stroke and per hour, mean power, ideal and linear-dashpot stop forces. */
@@ -22,7 +24,7 @@ export const impact = defineCalculator({
     { key: 's', label: 'Stop stroke', kind: 'length', default: 0.025, min: 0, max: 2, minExclusive: true, required: true, help: 'Working stroke of the end-stop damper.' },
     { key: 'cph', label: 'Impacts per hour', kind: 'dimensionless', default: 1200, min: 0, max: 1e6, required: true, help: 'Strokes of this stop per hour (cycles per hour).' },
     { key: 'vertical', label: 'Vertical travel (0 or 1)', kind: 'dimensionless', default: 0, min: 0, max: 1, help: '0 = horizontal; 1 = vertical, moving down onto the stop, so gravity works through the stroke.' },
-    { key: 'vEnd', label: 'Residual speed at end of stroke (dashpot)', kind: 'velocity', default: 0.05, min: 0, max: 20, help: 'A dashpot cannot stop a mass that is pushed on; the linear stop is sized to leave this speed for the hard stop.' },
+    { key: 'vEndRatio', label: 'Residual speed at end of stroke / impact speed (dashpot)', kind: 'dimensionless', default: 0.05, min: 0, max: 0.9, help: 'A dashpot cannot stop a mass that is pushed on; the linear stop is sized to leave this fraction of the impact speed for the hard stop (0 only without drive force or gravity).' },
   ],
   outputs: [
     { key: 'E', label: 'Energy per stroke', kind: 'energy' },
@@ -77,7 +79,7 @@ export const impact = defineCalculator({
   verification: [
     {
       name: 'Horizontal carriage, no drive force: E = ½mv², F = E/s, a = v²/2s (TW-118 carriage, 12 kg at 1.5 m/s, 25 mm)',
-      inputs: { m: 12, v: 1.5, Fp: 0, s: 0.025, cph: 1200, vertical: 0, vEnd: 0 },
+      inputs: { m: 12, v: 1.5, Fp: 0, s: 0.025, cph: 1200, vertical: 0, vEndRatio: 0 },
       expected: { E: 13.5, Ehour: 16200, P: 4.5, Favg: 540, decel: 45, FpeakLinear: 1080, efficiencyLinear: 0.5 },
       tolerance: 1e-9, why: 'closed form, same arithmetic',
       source: { key: 'meriam2012', locator: '§3/6 work–energy; §3/5 velocity-proportional resistance (sections from memory)' },
@@ -85,7 +87,7 @@ export const impact = defineCalculator({
     },
     {
       name: 'Vertical drop onto the stop: gravity adds m·g·s (100 kg at 1 m/s over 50 mm)',
-      inputs: { m: 100, v: 1, Fp: 0, s: 0.05, cph: 60, vertical: 1, vEnd: 0.05 },
+      inputs: { m: 100, v: 1, Fp: 0, s: 0.05, cph: 60, vertical: 1, vEndRatio: 0.05 },
       expected: { E: 50 + 100 * 9.80665 * 0.05, Egravity: 49.033250, decel: 10 },
       tolerance: 1e-9, why: 'closed form with standard gravity 9.80665 m/s² (exact by definition)',
       source: { key: 'meriam2012', locator: '§3/6 work–energy principle (section from memory)' },
@@ -93,7 +95,7 @@ export const impact = defineCalculator({
     },
     {
       name: 'Cylinder pushing through the stroke: 60 N over 25 mm adds 1.5 J (TW-118 Packline 4)',
-      inputs: { m: 12, v: 1.5, Fp: 60, s: 0.025, cph: 1200, vertical: 0, vEnd: 0.05 },
+      inputs: { m: 12, v: 1.5, Fp: 60, s: 0.025, cph: 1200, vertical: 0, vEndRatio: 0.05 },
       expected: { E: 15, Ehour: 18000, P: 5, Favg: 600 },
       tolerance: 1e-9, why: 'closed form, same arithmetic',
       source: { key: 'meriam2012', locator: '§3/6 work–energy principle (section from memory)' },

@@ -3,14 +3,22 @@ import { choice, defineCalculator, num, text, type ChartSpec, type Values } from
 import { demoDynoRecord, sineRecord } from './demoRecord.ts';
 import { lawFromValues, lawInputs } from './lawInputs.ts';
 
-function analyse(values: Values) {
+type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion> };
+// charts(values, result) receives the same values object compute saw: parse a long record once.
+const analysed = new WeakMap<Values, Analysis>();
+
+function analyse(values: Values): Analysis {
+  const hit = analysed.get(values);
+  if (hit) return hit;
   const rec = parseRecordedMotion(text(values, 'csv'), choice<ColumnLayout>(values, 'layout'));
   const law = rec.F ? undefined : lawFromValues(values);
-  return { rec, r: recordedMotion(rec, law, num(values, 'gapFactor')) };
+  const a = { rec, r: recordedMotion(rec, law, num(values, 'gapFactor')) };
+  analysed.set(values, a);
+  return a;
 }
 
 /** Keeps at most `max` points by striding (for charts only; energies use every sample). */
-function stride(t: Float64Array, y: Float64Array, max = 1500): { x: number[]; y: number[] } {
+function stride(t: Float64Array, y: Float64Array, max = 1200): { x: number[]; y: number[] } {
   const step = Math.max(1, Math.ceil(t.length / max));
   const x: number[] = [];
   const out: number[] = [];

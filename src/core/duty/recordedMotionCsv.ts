@@ -55,7 +55,14 @@ export function parseRecordedMotion(text: string, layout: ColumnLayout = 'auto')
   nextContent();
   if (i >= lines.length) throw new InputRangeError('csv', '', undefined, '', 'the record is empty');
   const delim = detectDelimiter(lines[i]!);
-  const cellsOf = (line: string) => delim.split(line).map((c) => c.trim().replace(/^"(.*)"$/, '$1'));
+  const cellsOf = (line: string) => {
+    const cells = delim.split(line);
+    for (let k = 0; k < cells.length; k++) {
+      const c = cells[k]!.trim();
+      cells[k] = c.length > 1 && c.charCodeAt(0) === 34 && c.charCodeAt(c.length - 1) === 34 ? c.slice(1, -1) : c;
+    }
+    return cells;
+  };
   const isNum = (c: string) => NUMBER.test(delim.decimalComma ? c.replace(',', '.') : c);
   let header: string[] | undefined;
   let units: string[] | undefined;
