@@ -45,6 +45,8 @@ export interface QuarterCarGains {
  * $$a = m_s s^2 + cs + k_s,\quad b = m_u s^2 + cs + k_s + k_t,\quad d = cs + k_s,\quad \Delta = ab - d^2$$
  * $$\frac{Z_s - Z_u}{Z_r} = \frac{-k_t m_s s^2}{\Delta},\qquad \frac{Z_s}{Z_r} = \frac{k_t d}{\Delta},\qquad
  *   \frac{F_t}{Z_r} = k_t\left(1 - \frac{k_t a}{\Delta}\right) = \frac{k_t\,(a(b-k_t) - d^2)}{\Delta}$$
+ * evaluated in the expanded form $\Delta = m_s m_u s^4 + (m_s+m_u)s^2 d + m_s k_t s^2 + k_t d$,
+ * $a(b-k_t) - d^2 = m_s m_u s^4 + (m_s+m_u) s^2 d$, which has no cancelling k_s² terms.
  *
  * @param q quarter car (call checkQuarterCar first)
  * @param f frequency, Hz, ≥ 0
@@ -55,17 +57,15 @@ export function quarterCarGains(q: QuarterCar, f: number): QuarterCarGains {
   const w = 2 * Math.PI * f;
   const w2 = w * w;
   const cw = q.c * w;
-  const aRe = q.ks - q.ms * w2; // a = aRe + i·cw
-  const bRe = q.ks + q.kt - q.mu * w2; // b = bRe + i·cw
-  const eRe = q.ks - q.mu * w2; // b − k_t
-  // d² = (k_s + i cω)² = k_s² − c²ω² + 2i k_s cω
-  const d2Re = q.ks * q.ks - cw * cw;
-  const d2Im = 2 * q.ks * cw;
-  const dRe = aRe * bRe - cw * cw - d2Re;
-  const dIm = cw * (aRe + bRe) - d2Im;
+  const M = q.ms + q.mu;
+  // Expanded so that the k_s² terms of a·b and d² cancel exactly (they would lose digits when k_s ≫ k_t):
+  // Δ = m_s m_u s⁴ + M s² d + m_s k_t s² + k_t d,  a(b − k_t) − d² = m_s m_u s⁴ + M s² d
+  const m4 = q.ms * q.mu * w2 * w2;
+  const dRe = m4 - M * w2 * q.ks - q.ms * q.kt * w2 + q.kt * q.ks;
+  const dIm = cw * (q.kt - M * w2);
   const mag2 = dRe * dRe + dIm * dIm;
-  const nRe = aRe * eRe - cw * cw - d2Re;
-  const nIm = cw * (aRe + eRe) - d2Im;
+  const nRe = m4 - M * w2 * q.ks;
+  const nIm = -M * w2 * cw;
   const rel2 = (q.kt * q.ms * w2) ** 2 / mag2;
   const zs2 = (q.kt * q.kt * (q.ks * q.ks + cw * cw)) / mag2;
   return {

@@ -24,20 +24,21 @@ export interface Linearised {
  * @param C power-law coefficient, N·(s/m)^α; alpha (0, 2]
  * @param sigmaVOf RMS damper velocity of the linear system with damping c, m/s
  * @param c0 starting guess, N·s/m
- * @throws ComputationError when 200 steps do not reach 1e-10
+ * @param tol relative change of c_eq that ends the iteration, default 1e-10
+ * @throws ComputationError when 200 steps do not reach tol
  * @example statisticalLinearisation(800, 0.5, (c) => Math.sqrt(40 / c), 1000).ceq
  * @source roberts2003 ch. 5 (statistical linearisation, Gaussian closure; chapter from memory)
  */
-export function statisticalLinearisation(C: number, alpha: number, sigmaVOf: (c: number) => number, c0: number): Linearised {
+export function statisticalLinearisation(C: number, alpha: number, sigmaVOf: (c: number) => number, c0: number, tol = 1e-10): Linearised {
   const k = C * gaussianMomentFactor(alpha);
   let c = c0;
   for (let i = 1; i <= 200; i++) {
     const s = sigmaVOf(c);
     const next = k * s ** (alpha - 1);
     if (!(next > 0) || !Number.isFinite(next)) throw new ComputationError('statistical linearisation: equivalent damping not finite');
-    const done = Math.abs(Math.log(next / c)) < 1e-10;
+    const done = Math.abs(Math.log(next / c)) < tol;
     c = next;
     if (done) return { ceq: c, sigmaV: sigmaVOf(c), iterations: i };
   }
-  throw new ComputationError('statistical linearisation did not converge in 200 steps');
+  throw new ComputationError(`statistical linearisation did not converge to ${tol} in 200 steps`);
 }
