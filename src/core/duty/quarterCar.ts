@@ -76,9 +76,20 @@ export function quarterCarGains(q: QuarterCar, f: number): QuarterCarGains {
   };
 }
 
-/** Undamped natural frequencies of the body and wheel modes (uncoupled estimates), Hz. */
+/**
+ * Undamped natural frequencies of the coupled quarter car (body and wheel-hop modes), Hz: the roots of
+ *
+ * $$m_s m_u\,\omega^4 - \left[(m_s + m_u)k_s + m_s k_t\right]\omega^2 + k_s k_t = 0 .$$
+ *
+ * Response peaks sit near these when damping is light; the quadrature places panel edges around them.
+ * @source wong2008 §7.2 (from memory); closed form
+ */
 export function quarterCarModes(q: QuarterCar): { body: number; wheel: number } {
-  const body = Math.sqrt((q.ks * q.kt) / (q.ks + q.kt) / q.ms) / (2 * Math.PI);
-  const wheel = Math.sqrt((q.ks + q.kt) / q.mu) / (2 * Math.PI);
-  return { body, wheel };
+  const a = q.ms * q.mu;
+  const b = (q.ms + q.mu) * q.ks + q.ms * q.kt;
+  const c = q.ks * q.kt;
+  const disc = Math.sqrt(Math.max(0, b * b - 4 * a * c));
+  const hi = (b + disc) / (2 * a);
+  const lo = c / (a * hi); // product of roots = c/a: avoids cancellation in (b − disc)
+  return { body: Math.sqrt(lo) / (2 * Math.PI), wheel: Math.sqrt(hi) / (2 * Math.PI) };
 }

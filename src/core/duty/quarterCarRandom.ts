@@ -34,17 +34,20 @@ export function quarterCarBand(q: QuarterCar): [number, number] {
  */
 export function quarterCarRandom(q: QuarterCar, road: RoadInput): QuarterCarRandom {
   const [f1, f2] = quarterCarBand(q);
+  const m = quarterCarModes(q);
+  const peaks = [m.body, m.wheel];
   const gz = (f: number) => roadDisplacementPsd(road, f);
   return {
-    damperVelocity: spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * gz(f), f1, f2),
-    travel: spectralIntegral((f) => quarterCarGains(q, f).travel * gz(f), f1, f2),
-    bodyAcceleration: spectralIntegral((f) => quarterCarGains(q, f).bodyAcceleration * gz(f), f1, f2),
-    tyreLoad: spectralIntegral((f) => quarterCarGains(q, f).tyreLoad * gz(f), f1, f2),
+    damperVelocity: spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * gz(f), f1, f2, 1e-9, 120, peaks),
+    travel: spectralIntegral((f) => quarterCarGains(q, f).travel * gz(f), f1, f2, 1e-9, 120, peaks),
+    bodyAcceleration: spectralIntegral((f) => quarterCarGains(q, f).bodyAcceleration * gz(f), f1, f2, 1e-9, 120, peaks),
+    tyreLoad: spectralIntegral((f) => quarterCarGains(q, f).tyreLoad * gz(f), f1, f2, 1e-9, 120, peaks),
   };
 }
 
 /** Damper-velocity variance alone, (m/s)², with a looser tolerance for iterations. */
 export function damperVelocityVariance(q: QuarterCar, road: RoadInput, relTol = 1e-8): number {
   const [f1, f2] = quarterCarBand(q);
-  return spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * roadDisplacementPsd(road, f), f1, f2, relTol, 60).value;
+  const m = quarterCarModes(q);
+  return spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * roadDisplacementPsd(road, f), f1, f2, relTol, 60, [m.body, m.wheel]).value;
 }

@@ -16,6 +16,22 @@ export interface SpectralIntegral {
   readonly relError: number;
 }
 
+/**
+ * Equal log panels plus, around each expected peak, edges at relative offsets ±10⁻⁷ … ±0.3 (a factor
+ * ~3 apart), so a resonance narrower than a panel is bracketed whatever its damping.
+ */
+function panelEdges(u1: number, u2: number, panels: number, peaks: readonly number[]): number[] {
+  const inner: number[] = [];
+  for (let i = 1; i < panels; i++) inner.push(u1 + ((u2 - u1) * i) / panels);
+  for (const p of peaks) {
+    const up = Math.log(p);
+    inner.push(up);
+    for (let d = 1e-7; d < 0.4; d *= 3) inner.push(up + Math.log1p(d), up - Math.log1p(d));
+  }
+  const e = [u1, ...inner.filter((x) => x > u1 && x < u2).sort((a, b) => a - b), u2];
+  return e.filter((x, i) => i === 0 || x - e[i - 1]! > 1e-12 * (1 + Math.abs(x)));
+}
+
 /** Local log-log slope of g at f (central difference over a factor 1.01). */
 function slope(g: (f: number) => number, f: number): number {
   const h = 0.01;
@@ -37,14 +53,17 @@ function slope(g: (f: number) => number, f: number): number {
  * @param f1 lower band edge, Hz, > 0
  * @param f2 upper band edge, Hz, > f1
  * @param relTol relative tolerance of the quadrature, default 1e-9
+ * @param panels number of equal log panels, default 120
+ * @param peaks frequencies (Hz) of expected narrow peaks, bracketed by extra panel edges
  * @throws ComputationError when a tail does not decay (the variance is infinite)
  * @example spectralIntegral((f) => 1 / (1 + f * f), 1e-4, 1e4).value // π/2
  * @source lyness1969 (adaptive Simpson); tails: closed form of ∫ f^p df
  */
-export function spectralIntegral(g: (f: number) => number, f1: number, f2: number, relTol = 1e-9, panels = 120): SpectralIntegral {
+export function spectralIntegral(g: (f: number) => number, f1: number, f2: number, relTol = 1e-9, panels = 120, peaks: readonly number[] = []): SpectralIntegral {
   const u1 = Math.log(f1);
   const u2 = Math.log(f2);
   const h = (u2 - u1) / panels;
+  const edges = panelEdges(u1, u2, panels, peaks);
   const gu = (u: number): number => {
     const f = Math.exp(u);
     return g(f) * f;
@@ -54,10 +73,10 @@ export function spectralIntegral(g: (f: number) => number, f1: number, f2: numbe
   for (let i = 0; i <= 8 * panels; i++) coarse += gu(u1 + (i * h) / 8) * (i === 0 || i === 8 * panels ? 0.5 : 1);
   coarse *= h / 8;
   if (!(coarse > 0) || !Number.isFinite(coarse)) throw new ComputationError('spectral integral: the PSD is zero or not finite on the band');
-  const absTol = (relTol * coarse) / panels;
+  const absTol = (relTol * coarse) / edges.length;
   let band = 0;
-  // depth 16 per panel: a panel is 1/120 of the band, so 2⁻¹⁶ of it is far below any resonance width
-  for (let i = 0; i < panels; i++) band += adaptiveSimpson(gu, u1 + i * h, u1 + (i + 1) * h, absTol, 16);
+  // depth 16 per panel bounds the work; narrow peaks are caught by the panel edges placed around them
+  for (let i = 0; i + 1 < edges.length; i++) band += adaptiveSimpson(gu, edges[i]!, edges[i + 1]!, absTol, 16);
   const p1 = slope(g, f1);
   const q2 = -slope(g, f2);
   if (p1 <= -1 || q2 <= 1) throw new ComputationError(`spectral integral: the PSD does not decay fast enough outside ${f1.toPrecision(3)}–${f2.toPrecision(3)} Hz (variance unbounded)`);
