@@ -18,14 +18,14 @@ const LABELS: Record<DamperLawKind, string> = {
 export function lawInputs(
   kinds: readonly DamperLawKind[],
   defaults: { law?: DamperLawKind; c?: number; Fref?: number; vref?: number; alpha?: number } = {},
-  limits: { cMin?: number; FrefMin?: number } = {},
+  limits: { cMin?: number; cMax?: number; FrefMin?: number } = {},
 ): InputDef[] {
   const on = (k: DamperLawKind) => ({ key: 'law', is: [k] as const });
   const inputs: InputDef[] = [
     { key: 'law', label: 'Damper law', kind: 'choice', options: kinds.map((k) => ({ value: k, label: LABELS[k] })), default: defaults.law ?? kinds[0]!, help: 'How the damper force depends on its velocity.' },
   ];
   const has = (k: DamperLawKind) => kinds.includes(k);
-  if (has('linear')) inputs.push({ key: 'c', label: 'Damping coefficient c', kind: 'damping', default: defaults.c ?? 980, min: limits.cMin ?? 0, max: 1e10, minExclusive: limits.cMin === undefined, help: 'Linear viscous coefficient at the damper.', when: on('linear') });
+  if (has('linear')) inputs.push({ key: 'c', label: 'Damping coefficient c', kind: 'damping', default: defaults.c ?? 980, min: limits.cMin ?? 0, max: limits.cMax ?? 1e10, minExclusive: limits.cMin === undefined, help: 'Linear viscous coefficient at the damper.', when: on('linear') });
   if (has('power')) {
     inputs.push(
       { key: 'Fref', label: 'Force at reference velocity', kind: 'force', default: defaults.Fref ?? 800, min: limits.FrefMin ?? 0, max: 1e9, minExclusive: limits.FrefMin === undefined, help: 'F_ref = C·v_ref^α. With v_ref = 1 m/s this is the coefficient C in N·(s/m)^α.', when: on('power') },

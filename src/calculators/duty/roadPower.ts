@@ -31,12 +31,12 @@ export const roadPower = defineCalculator({
     { key: 'classValue', label: 'Value within the class', kind: 'choice', options: [{ value: 'mean', label: 'geometric mean' }, { value: 'lower', label: 'lower class limit' }, { value: 'upper', label: 'upper class limit' }], default: 'mean', help: 'Each class spans half to twice its geometric mean.' },
     { key: 'Gd0', label: 'Measured G_d(n0) (optional)', kind: 'roadRoughness', default: 256e-6, optional: true, min: 0, max: 1, minExclusive: true, help: 'Displacement PSD at n0 = 0.1 cycle/m from a profile measurement; leave empty to use the class.' },
     { key: 'w', label: 'Waviness w', kind: 'dimensionless', default: 2, min: 1.5, max: 3.5, help: 'Slope of the road PSD; ISO 8608 classes use 2. Closed-form checks apply only at w = 2.' },
-    { key: 'V', label: 'Vehicle speed', kind: 'velocity', default: 20, min: 0, max: 100, minExclusive: true, required: true, help: 'Forward speed.' },
-    { key: 'ms', label: 'Sprung mass per corner', kind: 'mass', default: 240, min: 0, max: 2e4, minExclusive: true, required: true, help: 'Body mass carried by this corner.' },
-    { key: 'mu', label: 'Unsprung mass', kind: 'mass', default: 36, min: 0, max: 5e3, minExclusive: true, required: true, help: 'Wheel, tyre, hub, brake and part of the links.' },
-    { key: 'ks', label: 'Suspension spring rate (at wheel)', kind: 'stiffness', default: 16000, min: 0, max: 5e6, minExclusive: true, required: true, help: 'Wheel rate of the spring.' },
-    { key: 'kt', label: 'Tyre vertical rate', kind: 'stiffness', default: 160000, min: 0, max: 1e7, minExclusive: true, required: true, help: 'Radial stiffness of the tyre.' },
-    ...lawInputs(['linear', 'power'], { c: 980, Fref: 800, vref: 1, alpha: 0.5 }, { cMin: 10, FrefMin: 1 }),
+    { key: 'V', label: 'Vehicle speed', kind: 'velocity', default: 20, min: 0.1, max: 100, required: true, help: 'Forward speed.' },
+    { key: 'ms', label: 'Sprung mass per corner', kind: 'mass', default: 240, min: 1, max: 2e4, required: true, help: 'Body mass carried by this corner.' },
+    { key: 'mu', label: 'Unsprung mass', kind: 'mass', default: 36, min: 0.5, max: 5e3, required: true, help: 'Wheel, tyre, hub, brake and part of the links.' },
+    { key: 'ks', label: 'Suspension spring rate (at wheel)', kind: 'stiffness', default: 16000, min: 100, max: 5e6, required: true, help: 'Wheel rate of the spring.' },
+    { key: 'kt', label: 'Tyre vertical rate', kind: 'stiffness', default: 160000, min: 1000, max: 1e7, required: true, help: 'Radial stiffness of the tyre.' },
+    ...lawInputs(['linear', 'power'], { c: 980, Fref: 800, vref: 1, alpha: 0.5 }, { cMin: 10, cMax: 1e6, FrefMin: 1 }),
   ],
   outputs: [
     { key: 'vRms', label: 'RMS damper velocity', kind: 'velocity' },
@@ -50,7 +50,7 @@ export const roadPower = defineCalculator({
     { key: 'ceq', label: 'Linear (or equivalent) damping', kind: 'damping' },
     { key: 'PClosed', label: 'Mean power, closed form (w = 2)', kind: 'power', optional: true, help: 'π²·k_t·G_d(n0)·n0²·V: no damper or mass term.' },
     { key: 'vRmsClosed', label: 'RMS damper velocity, closed form (w = 2)', kind: 'velocity', optional: true },
-    { key: 'closedFormDiff', label: 'Quadrature vs closed form, largest difference', kind: 'dimensionless', digits: 2, optional: true },
+    { key: 'closedFormDiff', label: 'Quadrature check: largest difference from the closed forms', kind: 'dimensionless', digits: 2, help: 'Same car and damping on a w = 2 road, where closed forms exist (for w = 2 these are the results shown).' },
     { key: 'quadError', label: 'Quadrature error bound (relative)', kind: 'dimensionless', digits: 2 },
     { key: 'band', label: 'Quadrature band (log grid, adaptive Simpson; tails added)', kind: 'text' },
     { key: 'roadBasis', label: 'Road input', kind: 'text' },
@@ -58,13 +58,14 @@ export const roadPower = defineCalculator({
   compute(values) {
     const s = setup(values);
     const r = roadDuty(s.car, s.road, s.damper);
+    const c = r.closed;
+    const diff = r.closedFormDiff;
     const warnings: string[] = [];
     if (optNum(values, 'Gd0') !== undefined) warnings.push('A measured G_d(n0) is given, so the road class is not used; leave that field empty to use the class.');
     if (s.openLimit) warnings.push('ISO 8608 leaves this class limit open; the value shown is the factor-2 step from the class mean.');
     if (r.tyreLoadRatio > 1 / 3) warnings.push(`RMS dynamic tyre load is ${(100 * r.tyreLoadRatio).toFixed(0)} % of the static load: the wheel lifts off at times, and the linear model no longer holds.`);
+    if (diff > 5e-3) warnings.push(`On this car the quadrature misses the white-road closed form by ${(100 * diff).toPrecision(2)} %: the inputs are outside what the integration resolves${s.road.w === 2 ? '; use the closed-form values' : ''}.`);
     if (s.road.w !== 2) warnings.push('w ≠ 2: road velocity is not white, so only the quadrature applies (no closed-form check).');
-    const c = r.closed;
-    const diff = c ? Math.max(...(['vRms', 'P', 'accRms', 'travelRms', 'tyreLoadRms'] as const).map((k) => Math.abs(r[k] / c[k] - 1))) : undefined;
     return {
       outputs: {
         vRms: r.vRms, P: r.P, accRms: r.accRms, travelRms: r.travelRms, tyreLoadRms: r.tyreLoadRms, tyreLoadRatio: r.tyreLoadRatio,

@@ -1,7 +1,7 @@
 /** Damper duty: harmonic, random road, end-stop impacts, structural dampers, recorded motion. */
 export { ISO_8608_CLASSES, ISO_8608_N0, roadRoughness, type RoadClass, type ClassValue } from './isoRoadClass.ts';
 export { checkRoad, roadDisplacementPsd, roadVelocityWhiteLevel, type RoadInput } from './roadPsd.ts';
-export { checkQuarterCar, quarterCarGains, quarterCarModes, type QuarterCar, type QuarterCarGains } from './quarterCar.ts';
+export { checkQuarterCar, quarterCarGains, quarterCarModes, quarterCarCharacteristicFrequencies, type QuarterCar, type QuarterCarGains } from './quarterCar.ts';
 export { spectralIntegral, type SpectralIntegral } from './spectralIntegral.ts';
 export { quarterCarRandom, quarterCarBand, damperVelocityVariance, type QuarterCarRandom } from './quarterCarRandom.ts';
 export { quarterCarWhiteVariances, whiteRoadDamperPower, type QuarterCarVariances } from './quarterCarWhite.ts';

@@ -93,3 +93,16 @@ export function quarterCarModes(q: QuarterCar): { body: number; wheel: number } 
   const lo = c / (a * hi); // product of roots = c/a: avoids cancellation in (b − disc)
   return { body: Math.sqrt(lo) / (2 * Math.PI), wheel: Math.sqrt(hi) / (2 * Math.PI) };
 }
+
+/**
+ * Frequencies (Hz) where the quarter car's response can change character: the coupled undamped modes,
+ * the mode with the damper locked, √(k_t/(m_s+m_u)), and the relaxation corners k_s/c, k_t/c, c/m_s, c/m_u
+ * (rad/s ÷ 2π) that matter when the damper is very soft or very hard. The quadrature band spans them
+ * with three decades to spare and brackets each with panel edges.
+ * @source closed form (limits of the quarter-car characteristic polynomial)
+ */
+export function quarterCarCharacteristicFrequencies(q: QuarterCar): number[] {
+  const m = quarterCarModes(q);
+  const w = [q.ks / q.c, q.kt / q.c, q.c / q.ms, q.c / q.mu, Math.sqrt(q.kt / (q.ms + q.mu))];
+  return [m.body, m.wheel, ...w.map((x) => x / (2 * Math.PI))].filter((f) => f > 0 && Number.isFinite(f));
+}

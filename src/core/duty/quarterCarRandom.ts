@@ -2,7 +2,7 @@
  * RMS responses of a linear quarter car on an ISO 8608 road, by frequency-domain integration of
  * the exact transfer functions.
  */
-import { quarterCarGains, quarterCarModes, type QuarterCar } from './quarterCar.ts';
+import { quarterCarCharacteristicFrequencies, quarterCarGains, type QuarterCar } from './quarterCar.ts';
 import { roadDisplacementPsd, type RoadInput } from './roadPsd.ts';
 import { spectralIntegral, type SpectralIntegral } from './spectralIntegral.ts';
 
@@ -14,10 +14,10 @@ export interface QuarterCarRandom {
   readonly tyreLoad: SpectralIntegral;
 }
 
-/** Quadrature band: three decades below the body mode to three decades above the wheel mode. */
+/** Quadrature band: three decades below the lowest characteristic frequency to three above the highest. */
 export function quarterCarBand(q: QuarterCar): [number, number] {
-  const m = quarterCarModes(q);
-  return [m.body / 1000, m.wheel * 1000];
+  const f = quarterCarCharacteristicFrequencies(q);
+  return [Math.min(...f) / 1000, Math.max(...f) * 1000];
 }
 
 /**
@@ -34,8 +34,7 @@ export function quarterCarBand(q: QuarterCar): [number, number] {
  */
 export function quarterCarRandom(q: QuarterCar, road: RoadInput): QuarterCarRandom {
   const [f1, f2] = quarterCarBand(q);
-  const m = quarterCarModes(q);
-  const peaks = [m.body, m.wheel];
+  const peaks = quarterCarCharacteristicFrequencies(q);
   const gz = (f: number) => roadDisplacementPsd(road, f);
   return {
     damperVelocity: spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * gz(f), f1, f2, 1e-9, 120, peaks),
@@ -48,6 +47,5 @@ export function quarterCarRandom(q: QuarterCar, road: RoadInput): QuarterCarRand
 /** Damper-velocity variance alone, (m/s)², with a looser tolerance for iterations. */
 export function damperVelocityVariance(q: QuarterCar, road: RoadInput, relTol = 1e-8): number {
   const [f1, f2] = quarterCarBand(q);
-  const m = quarterCarModes(q);
-  return spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * roadDisplacementPsd(road, f), f1, f2, relTol, 60, [m.body, m.wheel]).value;
+  return spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * roadDisplacementPsd(road, f), f1, f2, relTol, 60, quarterCarCharacteristicFrequencies(q)).value;
 }

@@ -31,7 +31,14 @@ export interface RoadDuty {
   /** Closed forms (w = 2 only), same c. */
   readonly closed?: { readonly vRms: number; readonly P: number; readonly accRms: number; readonly travelRms: number; readonly tyreLoadRms: number };
   readonly iterations: number;
+  /**
+   * Largest relative difference between quadrature and closed form for this car and linear damping c
+   * on a w = 2 road (the integration check; when w = 2 it compares the reported values themselves).
+   */
+  readonly closedFormDiff: number;
 }
+
+const KEYS = ['damperVelocity', 'travel', 'bodyAcceleration', 'tyreLoad'] as const;
 
 const G_N = 9.80665;
 
@@ -68,15 +75,17 @@ export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: Ro
   const P = damper.kind === 'linear' ? c * vRms * vRms : damper.C * gaussianMomentFactor(damper.alpha) * vRms ** (1 + damper.alpha);
   const tyreLoadRms = Math.sqrt(r.tyreLoad.value);
   let closed: RoadDuty['closed'];
+  const v = quarterCarWhiteVariances(q, roadVelocityWhiteLevel(road.Gd0, road.V));
+  const check = road.w === 2 ? r : quarterCarRandom(q, { ...road, w: 2 });
+  const closedFormDiff = Math.max(...KEYS.map((k) => Math.abs(Math.sqrt(check[k].value / v[k]) - 1)));
   if (road.w === 2) {
-    const v = quarterCarWhiteVariances(q, roadVelocityWhiteLevel(road.Gd0, road.V));
     closed = {
       vRms: Math.sqrt(v.damperVelocity), P: whiteRoadDamperPower(q.kt, road.Gd0, road.V),
       accRms: Math.sqrt(v.bodyAcceleration), travelRms: Math.sqrt(v.travel), tyreLoadRms: Math.sqrt(v.tyreLoad),
     };
   }
   return {
-    vRms, P, c, iterations, closed,
+    vRms, P, c, iterations, closed, closedFormDiff,
     accRms: Math.sqrt(r.bodyAcceleration.value),
     travelRms: Math.sqrt(r.travel.value),
     tyreLoadRms,

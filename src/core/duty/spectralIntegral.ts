@@ -17,7 +17,7 @@ export interface SpectralIntegral {
 }
 
 /**
- * Equal log panels plus, around each expected peak, edges at relative offsets ±10⁻⁷ … ±0.3 (a factor
+ * Equal log panels plus, around each expected peak, edges at relative offsets ±10⁻¹⁰ … ±0.3 (a factor
  * ~3 apart), so a resonance narrower than a panel is bracketed whatever its damping.
  */
 function panelEdges(u1: number, u2: number, panels: number, peaks: readonly number[]): number[] {
@@ -26,7 +26,7 @@ function panelEdges(u1: number, u2: number, panels: number, peaks: readonly numb
   for (const p of peaks) {
     const up = Math.log(p);
     inner.push(up);
-    for (let d = 1e-7; d < 0.4; d *= 3) inner.push(up + Math.log1p(d), up - Math.log1p(d));
+    for (let d = 1e-10; d < 0.4; d *= 3) inner.push(up + Math.log1p(d), up - Math.log1p(d));
   }
   const e = [u1, ...inner.filter((x) => x > u1 && x < u2).sort((a, b) => a - b), u2];
   return e.filter((x, i) => i === 0 || x - e[i - 1]! > 1e-12 * (1 + Math.abs(x)));
@@ -75,8 +75,8 @@ export function spectralIntegral(g: (f: number) => number, f1: number, f2: numbe
   if (!(coarse > 0) || !Number.isFinite(coarse)) throw new ComputationError('spectral integral: the PSD is zero or not finite on the band');
   const absTol = (relTol * coarse) / edges.length;
   let band = 0;
-  // depth 16 per panel bounds the work; narrow peaks are caught by the panel edges placed around them
-  for (let i = 0; i + 1 < edges.length; i++) band += adaptiveSimpson(gu, edges[i]!, edges[i + 1]!, absTol, 16);
+  // depth 12 per panel bounds the work; narrow peaks are caught by the panel edges placed around them
+  for (let i = 0; i + 1 < edges.length; i++) band += adaptiveSimpson(gu, edges[i]!, edges[i + 1]!, absTol, 12);
   const p1 = slope(g, f1);
   const q2 = -slope(g, f2);
   if (p1 <= -1 || q2 <= 1) throw new ComputationError(`spectral integral: the PSD does not decay fast enough outside ${f1.toPrecision(3)}–${f2.toPrecision(3)} Hz (variance unbounded)`);

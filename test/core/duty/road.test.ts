@@ -94,6 +94,21 @@ describe('quarter car on a random road', () => {
       }), { numRuns: 40 });
   });
 
+  it.each([
+    ['nearly rigid suspension, light damping', { ms: 240, mu: 36, ks: 5e6, kt: 160000 }, 10],
+    ['damper locked solid', { ms: 240, mu: 36, ks: 16000, kt: 160000 }, 1e6],
+    ['heavy truck corner on a stiff tyre', { ms: 20000, mu: 5000, ks: 5e6, kt: 1e7 }, 1e3],
+  ] as const)('agrees with the closed forms at the edge of the input ranges: %s [closed form]', (_n, car, c) => {
+    const r = roadDuty(car, { Gd0: 256e-6, w: 2, V: 20 }, { kind: 'linear', c });
+    expect(r.closedFormDiff).toBeLessThan(1e-6);
+  });
+
+  it('checks its quadrature on the same car at w = 2 when w ≠ 2', () => {
+    const r = roadDuty(TW210, { Gd0: 256e-6, w: 2.5, V: 20 }, { kind: 'linear', c: 980 });
+    expect(r.closed).toBeUndefined();
+    expect(r.closedFormDiff).toBeLessThan(1e-6);
+  });
+
   it('road power on a w = 2 road does not depend on the damper, the spring or the masses', () => {
     fc.assert(fc.property(
       fc.double({ min: 100, max: 2000, noNaN: true }), fc.double({ min: 10, max: 300, noNaN: true }),
