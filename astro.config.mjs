@@ -10,6 +10,8 @@ const base = process.env.DAMPBOOK_BASE ?? '/';
 export default defineConfig({
   base,
   outDir: process.env.DAMPBOOK_OUT ?? './dist',
+  // DAMPBOOK_CACHE: a separate content cache, so a test build of other content leaves this one alone
+  cacheDir: process.env.DAMPBOOK_CACHE ?? './node_modules/.astro',
   trailingSlash: 'always',
   build: { format: 'directory' },
   markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'warn' }]] },

@@ -7,6 +7,16 @@ import { ComputationError, InputRangeError, type Range } from '../core/errors.ts
 import { parseQuantity, siSymbol, UnitError } from '../core/units/index.ts';
 import type { CalculatorDefinition, InputDef, Result, Values } from './types.ts';
 
+/** Longest text accepted for a number ("1.5e3 lbf·s/in" fits many times over); longer is refused unparsed. */
+export const MAX_NUMBER_TEXT = 100;
+
+/** A short, safe description of an untrusted value for a message (never calls its toString). */
+function shown(v: unknown): string | number {
+  if (typeof v === 'string' || typeof v === 'number') return v;
+  if (v === null) return 'null';
+  return Array.isArray(v) ? 'array' : typeof v;
+}
+
 export interface EvaluateOptions {
   /** Fill missing non-required inputs with their defaults (the page does; the CLI does for non-required). */
   readonly fillDefaults?: boolean;
@@ -35,7 +45,7 @@ export function checkInput(def: InputDef, v: unknown, values: Values, fill: bool
       if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', `choose one of ${allowed}`);
       v = def.default;
     }
-    if (typeof v !== 'string' || !def.options.some((o) => o.value === v)) throw new InputRangeError(def.key, v, undefined, '', `choose one of ${allowed}`);
+    if (typeof v !== 'string' || !def.options.some((o) => o.value === v)) throw new InputRangeError(def.key, shown(v), undefined, '', `choose one of ${allowed}`);
     return v;
   }
   if (!isActive(def, values)) return undefined;
@@ -44,7 +54,7 @@ export function checkInput(def: InputDef, v: unknown, values: Values, fill: bool
       if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', 'required');
       v = def.default;
     }
-    if (typeof v !== 'string') throw new InputRangeError(def.key, typeof v, undefined, '', 'must be text');
+    if (typeof v !== 'string') throw new InputRangeError(def.key, shown(v), undefined, '', 'must be text');
     if (v.length > def.maxLength) throw new InputRangeError(def.key, `${v.length} characters`, undefined, '', `longer than ${def.maxLength} characters`);
     return v;
   }
@@ -58,13 +68,14 @@ export function checkInput(def: InputDef, v: unknown, values: Values, fill: bool
   let n: number;
   if (typeof v === 'number') n = v;
   else if (typeof v === 'string') {
+    if (v.length > MAX_NUMBER_TEXT) throw new InputRangeError(def.key, `${v.length} characters`, r, unit, 'too long for a number');
     try {
       n = parseQuantity(v, def.kind);
     } catch (e) {
       if (e instanceof UnitError) throw new InputRangeError(def.key, v, r, unit, e.message);
       throw e;
     }
-  } else throw new InputRangeError(def.key, typeof v, r, unit, 'not a number');
+  } else throw new InputRangeError(def.key, shown(v), r, unit, 'not a number');
   if (!Number.isFinite(n)) throw new InputRangeError(def.key, n, r, unit, 'not a finite number');
   const low = r.minExclusive ? n <= r.min : n < r.min;
   const high = r.maxExclusive ? n >= r.max : n > r.max;
@@ -80,6 +91,9 @@ export function inputOrder(calc: CalculatorDefinition): InputDef[] {
 /** Converts and checks raw values (SI numbers or strings such as "25 lb") into typed SI values. */
 export function validateInputs(calc: CalculatorDefinition, raw: Readonly<Record<string, unknown>>, opts: EvaluateOptions = {}): Values {
   const fill = opts.fillDefaults ?? true;
+  if (raw === null || typeof raw !== 'object' || Array.isArray(raw)) {
+    throw new ComputationError(`${calc.id}: inputs must be a record of key → value, not ${shown(raw)}`);
+  }
   const values: Record<string, number | string | undefined> = {};
   for (const def of inputOrder(calc)) {
     const has = Object.prototype.hasOwnProperty.call(raw, def.key);
@@ -95,7 +109,17 @@ export function validateInputs(calc: CalculatorDefinition, raw: Readonly<Record<
  */
 export function evaluate(calc: CalculatorDefinition, raw: Readonly<Record<string, unknown>>, opts: EvaluateOptions = {}): Result & { values: Values } {
   const values = validateInputs(calc, raw, opts);
-  const result = calc.compute(values);
+  let result: Result;
+  try {
+    result = calc.compute(values);
+  } catch (e) {
+    // The core names its own parameters (e.g. 'zeta'); when that is not one of this calculator's
+    // inputs, the inputs were each valid but their combination has no answer.
+    if (e instanceof InputRangeError && !calc.inputs.some((d) => d.key === e.input)) {
+      throw new ComputationError(`${calc.id}: no answer for these inputs (intermediate ${e.message})`);
+    }
+    throw e;
+  }
   for (const def of calc.outputs) {
     const v = result.outputs[def.key];
     if (v === undefined) {

@@ -26,7 +26,7 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
       if (eq > 0) flags.set(a.slice(2, eq), a.slice(eq + 1));
       else {
         const next = argv[i + 1];
-        const takesValue = ['record', 'pdf', 'paper', 'out', 'base', 'site'].includes(a.slice(2));
+        const takesValue = ['record', 'pdf', 'paper', 'out', 'base', 'site', 'content', 'title', 'by', 'calc', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date'].includes(a.slice(2));
         if (takesValue && next !== undefined) { flags.set(a.slice(2), next); i++; } else flags.set(a.slice(2), true);
       }
     } else positionals.push(a);

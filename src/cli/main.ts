@@ -3,15 +3,22 @@
  * line and exit non-zero; stack traces only with DAMPBOOK_DEBUG=1.
  */
 import { DampbookError } from '../core/errors.ts';
+import { SheetError } from '../sheets/print.ts';
 import { parseArgs, UsageError, type ParsedArgs } from './args.ts';
 import { calc } from './commands/calc.ts';
+import { check } from './commands/check.ts';
 import { list } from './commands/list.ts';
+import { newPage } from './commands/new.ts';
+import { sheet } from './commands/sheet.ts';
 
 type Command = (args: ParsedArgs, out: (s: string) => void) => number | Promise<number>;
 
 export const commands: Record<string, { run: Command; help: string }> = {
   list: { run: list, help: 'list [--json]                      every calculator with its inputs and outputs (SI units)' },
-  calc: { run: calc, help: 'calc <id> --in key=value … [--json] evaluate a calculator (SI values, or "25 lb")' },
+  calc: { run: calc, help: 'calc <id> --in key=value … [--json] evaluate a calculator (SI values, or "25 lb")\n  dampbook calc --record file.json [--json]   recompute a saved record and report differences' },
+  check: { run: check, help: 'check [--content dir]               validate every page and run every verification case' },
+  new: { run: newPage, help: 'new <folder/id> [--title …] [--by …] [--calc id]   scaffold a draft page' },
+  sheet: { run: sheet, help: 'sheet <page> [--in k=v …] [--paper a4|letter] [--project … --project-no … --calc-no … --prepared-by … --checked-by … --date …] [--site dist] --pdf out.pdf' },
 };
 
 function usage(): string {
@@ -24,11 +31,11 @@ export async function main(argv: readonly string[], out = (s: string) => console
     const name = args.positionals[0];
     if (!name || name === 'help' || args.flags.has('help')) { out(usage()); return name ? 0 : 2; }
     const cmd = commands[name];
-    if (!cmd) throw new UsageError(`unknown command '${name}'\n${usage()}`);
+    if (!cmd) throw new UsageError(`unknown command '${name}'; commands: ${Object.keys(commands).join(', ')} (dampbook help shows usage)`);
     return await cmd.run(args, out);
   } catch (e) {
     if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) err(e.stack ?? e.message);
-    else if (e instanceof DampbookError || e instanceof UsageError) err(`dampbook: ${e.message}`);
+    else if (e instanceof DampbookError || e instanceof UsageError || e instanceof SheetError) err(`dampbook: ${e.message}`);
     else err(`dampbook: internal error: ${e instanceof Error ? e.message : String(e)} (set DAMPBOOK_DEBUG=1 for details)`);
     return e instanceof UsageError ? 2 : 1;
   }

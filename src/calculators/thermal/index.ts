@@ -1,3 +1,11 @@
 import type { CalculatorDefinition } from '../types.ts';
+import { bodyCoolingCalc } from './bodyCooling.ts';
+import { steadyTemperatureCalc } from './steadyTemperature.ts';
+import { powerRatingCalc } from './powerRating.ts';
+import { warmUpCalc } from './warmUp.ts';
+import { oilViscosityCalc } from './oilViscosity.ts';
+import { dampingFadeCalc } from './dampingFade.ts';
 
-export const thermalCalculators: readonly CalculatorDefinition[] = [];
+export const thermalCalculators: readonly CalculatorDefinition[] = [
+  bodyCoolingCalc, steadyTemperatureCalc, powerRatingCalc, warmUpCalc, oilViscosityCalc, dampingFadeCalc,
+];

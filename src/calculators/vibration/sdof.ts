@@ -14,9 +14,9 @@ export const sdof = defineCalculator({
   title: 'Damped single-degree-of-freedom oscillator',
   summary: 'Natural and damped frequency, damping ratio, regime and free response of a mass on a spring with a viscous damper.',
   inputs: [
-    { key: 'm', label: 'Moving mass', kind: 'mass', default: 10, min: 0, max: 1e7, minExclusive: true, required: true, help: 'Mass carried by the spring and damper.' },
-    { key: 'k', label: 'Spring rate', kind: 'stiffness', default: 4000, min: 0, max: 1e10, minExclusive: true, required: true, help: 'Linear stiffness at the damper, N/m.' },
-    { key: 'c', label: 'Damping coefficient', kind: 'damping', default: 40, min: 0, max: 1e9, minExclusive: true, required: true, help: 'Linear viscous coefficient at the damper.' },
+    { key: 'm', label: 'Moving mass', kind: 'mass', default: 10, min: 1e-6, max: 1e7, required: true, help: 'Mass carried by the spring and damper.' },
+    { key: 'k', label: 'Spring rate', kind: 'stiffness', default: 4000, min: 1e-6, max: 1e10, required: true, help: 'Linear stiffness at the damper, N/m.' },
+    { key: 'c', label: 'Damping coefficient', kind: 'damping', default: 40, min: 1e-9, max: 1e9, required: true, help: 'Linear viscous coefficient at the damper.' },
     { key: 'x0', label: 'Initial displacement', kind: 'length', default: 0.01, min: -10, max: 10, help: 'Release position measured from static equilibrium.' },
     { key: 'v0', label: 'Initial velocity', kind: 'velocity', default: 0, min: -100, max: 100, help: 'Velocity at release.' },
   ],

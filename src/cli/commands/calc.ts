@@ -4,6 +4,7 @@ import { calculatorIds, getCalculator } from '../../calculators/registry.ts';
 import { InputRangeError } from '../../core/errors.ts';
 import { siSymbol } from '../../core/units/index.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
+import { recordCheck } from './recordCheck.ts';
 
 /** Largest file `--in key=@file` reads (a text input's own maxLength still applies). */
 const MAX_FILE = 20 * 1024 * 1024;
@@ -13,6 +14,7 @@ const MAX_FILE = 20 * 1024 * 1024;
  * invalid input exits non-zero naming the input and its allowed range.
  */
 export function calc(args: ParsedArgs, out: (s: string) => void): number {
+  if (args.flags.has('record')) return recordCheck(args, out);
   const id = args.positionals[1];
   if (!id) throw new UsageError(`calc needs a calculator id: ${calculatorIds().join(', ')}`);
   const def = getCalculator(id);

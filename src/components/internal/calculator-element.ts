@@ -7,10 +7,10 @@
  */
 import { evaluate, inputOrder, isActive } from '../../calculators/evaluate.ts';
 import type { CalculatorDefinition, Outputs, Values } from '../../calculators/types.ts';
-import { DampbookError } from '../../core/errors.ts';
+import { DampbookError, InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, parseQuantity, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from './format.ts';
-import { readField } from './fieldState.ts';
+import { parseTyped, readField } from './fieldState.ts';
 
 type Loader = () => Promise<readonly CalculatorDefinition[]>;
 const loaders: Record<string, Loader> = {
@@ -27,6 +27,9 @@ export class CalculatorElement extends HTMLElement {
   system: UnitSystem = 'SI';
   private charts: { update(specs: ReturnType<NonNullable<CalculatorDefinition['charts']>>, system: UnitSystem): void } | undefined;
   private pending = 0;
+  /** The last valid inputs (SI) and outputs shown; undefined while a field is bad. */
+  values: Values | undefined;
+  outputs: Outputs | undefined;
 
   async connectedCallback(): Promise<void> {
     const list = await loaders[this.dataset.domain ?? '']?.();
@@ -37,6 +40,9 @@ export class CalculatorElement extends HTMLElement {
     this.addEventListener('input', (e) => this.onInput(e));
     this.addEventListener('change', (e) => this.onChange(e));
     this.recompute();
+    // input sets and records: their code (and zod) loads only when the panel is opened
+    const rec = this.querySelector<HTMLDetailsElement>('details.calc-records');
+    rec?.addEventListener('toggle', () => void import('./record-panel.ts').then((m) => m.attachRecords(this, rec)), { once: true });
     this.dataset.ready = '';
   }
 
@@ -74,6 +80,7 @@ export class CalculatorElement extends HTMLElement {
 
   private onInput(e: Event): void {
     const t = e.target as HTMLElement;
+    if (t.closest('.calc-records')) return;
     if (t instanceof HTMLInputElement && t.type === 'file') return;
     if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) return;
     this.schedule();
@@ -81,6 +88,7 @@ export class CalculatorElement extends HTMLElement {
 
   private onChange(e: Event): void {
     const t = e.target as HTMLElement;
+    if (t.closest('.calc-records')) return;
     if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) this.convertField(t);
     else if (t instanceof HTMLInputElement && t.name === 'units') this.setSystem(t.value === 'US' ? 'US' : 'SI');
     else if (t instanceof HTMLInputElement && t.type === 'file') { void this.loadFile(t); return; }
@@ -99,6 +107,41 @@ export class CalculatorElement extends HTMLElement {
     if (!def || def.kind === 'choice' || def.kind === 'text' || !ctl) return;
     const r = readField(def, ctl.value, prev, {});
     if (r.ok && typeof r.value === 'number') ctl.value = formatInput(fromSI(r.value, findUnit(def.kind, sel.value)));
+  }
+
+  /** Each number field as typed: its number and its unit id (for records). */
+  inputsShown(): Record<string, { value: number; unit: string }> {
+    const out: Record<string, { value: number; unit: string }> = {};
+    for (const def of this.calc!.inputs) {
+      if (def.kind === 'choice' || def.kind === 'text') continue;
+      const n = parseTyped(this.control(def.key)?.value ?? '');
+      const unit = this.unitSelect(def.key)?.value;
+      if (Number.isFinite(n) && unit) out[def.key] = { value: n, unit };
+    }
+    return out;
+  }
+
+  /** Fills every field from SI values (or the typed number and unit in `shown`) and recomputes now. */
+  applyInputs(values: Values, shown: Readonly<Record<string, { value: number; unit: string }>>): void {
+    for (const def of this.calc!.inputs) {
+      const v = values[def.key];
+      const ctl = this.control(def.key);
+      if (!ctl) continue;
+      if (def.kind === 'choice' || def.kind === 'text') { if (typeof v === 'string') ctl.value = v; continue; }
+      const sel = this.unitSelect(def.key);
+      const want = shown[def.key]?.unit;
+      if (sel && want && [...sel.options].some((o) => o.value === want) && sel.value !== want) {
+        sel.value = want;
+        sel.dataset.unit = want;
+        const srUnit = this.field(def.key)?.querySelector('.sr-unit');
+        if (srUnit) srUnit.textContent = ` (${sel.selectedOptions[0]?.textContent ?? ''})`;
+      }
+      if (typeof v !== 'number') { ctl.value = ''; continue; }
+      const typed = shown[def.key];
+      // String() of a double parses back to the same double: the field reproduces the value exactly
+      ctl.value = typed && (!sel || sel.value === typed.unit) ? String(typed.value) : String(sel ? fromSI(v, findUnit(def.kind, sel.value)) : v);
+    }
+    this.recompute();
   }
 
   private setSystem(system: UnitSystem): void {
@@ -162,16 +205,22 @@ export class CalculatorElement extends HTMLElement {
     const calc = this.calc!;
     const state = this.querySelector<HTMLElement>('.calc-state');
     const values = this.readValues();
+    this.values = undefined;
+    this.outputs = undefined;
     if (!values) { this.setState(state, 'error', 'Results are held until every highlighted field is valid.'); return; }
     let result;
     try {
       result = evaluate(calc, values);
     } catch (e) {
       const msg = e instanceof DampbookError ? e.message : 'These inputs could not be computed.';
+      // a problem found while computing (e.g. a bad row in a pasted record) is shown at its field too
+      if (e instanceof InputRangeError && this.field(e.input)) this.showFieldMessage(e.input, e.message);
       this.setState(state, 'error', msg);
       return;
     }
     this.renderOutputs(result.outputs);
+    this.values = result.values;
+    this.outputs = result.outputs;
     const warn = this.querySelector('.calc-warnings');
     if (warn) warn.replaceChildren(...result.warnings.map((w) => { const li = document.createElement('li'); li.textContent = w; return li; }));
     this.setState(state, 'ok', '');

@@ -2,17 +2,18 @@
  * Live charts: draws ChartSpec data with chart.js into the figures the server rendered, in the
  * reader's unit system. Loaded only when a calculator with charts recomputes, so prose pages and
  * the first paint never pay for the charting library. Only the chart.js parts we use are
- * registered (tree shaking keeps the page budget).
+ * registered (tree shaking keeps the page budget): the legend is a small HTML list under the
+ * canvas instead of chart.js's Legend and Tooltip plugins (about 8 KB gzip less).
  */
 import {
-  Chart, Legend, LinearScale, LineController, LineElement, LogarithmicScale, PointElement, Tooltip,
+  Chart, LinearScale, LineController, LineElement, LogarithmicScale, PointElement,
   type ChartConfiguration, type ChartDataset,
 } from 'chart.js';
 import type { ChartSpec } from '../../calculators/types.ts';
 import type { UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatNumber, toDisplay } from './format.ts';
 
-Chart.register(LineController, LineElement, PointElement, LinearScale, LogarithmicScale, Legend, Tooltip);
+Chart.register(LineController, LineElement, PointElement, LinearScale, LogarithmicScale);
 
 type Pt = { x: number; y: number };
 
@@ -47,6 +48,7 @@ function config(spec: ChartSpec, system: UnitSystem): ChartConfiguration<'line',
     const x = toDisplay(m.x, ux);
     if (Number.isFinite(yLo)) datasets.push({ label: m.label, data: [{ x, y: yLo }, { x, y: yHi }], borderColor: '#8e877a', borderWidth: 1, borderDash: [2, 3], pointRadius: 0 });
   }
+  const sortedX = datasets.every((d) => d.data.every((p, i) => i === 0 || p.x >= d.data[i - 1]!.x));
   const axisTitle = (label: string, sym: string) => ({ display: true, text: sym ? `${label} [${sym}]` : label });
   return {
     type: 'line',
@@ -55,21 +57,38 @@ function config(spec: ChartSpec, system: UnitSystem): ChartConfiguration<'line',
       animation: false,
       responsive: true,
       maintainAspectRatio: false,
-      parsing: false,
-      normalized: true,
-      interaction: { mode: 'nearest', intersect: false },
+      // unparsed data is taken as sorted in x; loops (force against stroke) are not, so let
+      // chart.js parse those and find out for itself
+      parsing: sortedX ? false : undefined,
+      normalized: sortedX,
+      events: [],
       scales: {
         x: { type: xlog ? 'logarithmic' : 'linear', title: axisTitle(spec.x.label, ux.symbol), min: spec.x.min !== undefined ? toDisplay(spec.x.min, ux) : undefined, max: spec.x.max !== undefined ? toDisplay(spec.x.max, ux) : undefined,
           ticks: { callback: (v) => formatNumber(Number(v), 3) } },
         y: { type: ylog ? 'logarithmic' : 'linear', title: axisTitle(spec.y.label, uy.symbol), min: spec.y.min !== undefined ? toDisplay(spec.y.min, uy) : undefined, max: spec.y.max !== undefined ? toDisplay(spec.y.max, uy) : undefined,
           ticks: { callback: (v) => formatNumber(Number(v), 3) } },
       },
-      plugins: {
-        legend: { labels: { boxWidth: 14, filter: (item) => !String(item.text).startsWith('−') } },
-        tooltip: { callbacks: { label: (c) => `${c.dataset.label}: ${formatNumber(c.parsed.y ?? NaN, 4)}` } },
-      },
     },
   };
+}
+
+/** The legend as an HTML list (text, so it also reads and zooms well); mirror series ('−…') are left out. */
+function legend(fig: HTMLElement, spec: ChartSpec): void {
+  let ul = fig.querySelector<HTMLUListElement>('.chart-legend');
+  if (!ul) {
+    ul = document.createElement('ul');
+    ul.className = 'chart-legend';
+    fig.querySelector('.chart-canvas')!.after(ul);
+  }
+  ul.replaceChildren(...spec.series.filter((s) => !s.label.startsWith('−')).map((s) => {
+    const li = document.createElement('li');
+    const key = document.createElement('span');
+    key.className = `chart-key ${s.style ?? 'line'}`;
+    key.style.setProperty('--key', tone(s.tone ?? 0));
+    key.setAttribute('aria-hidden', 'true');
+    li.append(key, s.label);
+    return li;
+  }));
 }
 
 /** The charts of one calculator: one chart.js instance per server-rendered figure. */
@@ -86,6 +105,7 @@ export class ChartGroup {
       if (summary) summary.textContent = spec.summary;
       let chart = this.charts.get(spec.id);
       const cfg = config(spec, system);
+      legend(fig, spec);
       if (!chart) {
         const canvas = document.createElement('canvas');
         canvas.setAttribute('role', 'img');

@@ -2,7 +2,7 @@
  * Reading and checking one field of the widget, in the reader's units. Pure (no DOM): the
  * element passes the field's text and unit id, and gets an SI value or a message for the field.
  */
-import { checkInput, rangeOf } from '../../calculators/evaluate.ts';
+import { checkInput, MAX_NUMBER_TEXT, rangeOf } from '../../calculators/evaluate.ts';
 import type { InputDef, NumberInput, Values } from '../../calculators/types.ts';
 import { InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, toSI } from '../../core/units/index.ts';
@@ -37,6 +37,7 @@ export function readField(def: InputDef, text: string, unitId: string | undefine
       if (def.optional) return { ok: true, value: undefined };
       return { ok: false, message: `Enter a value: ${describeRange(def, unitId ?? '')}.` };
     }
+    if (text.length > MAX_NUMBER_TEXT) return { ok: false, message: `Too long for a number (${text.length} characters). Type digits, e.g. 12.5 or 1.2e3.` };
     const n = parseTyped(text);
     if (!Number.isFinite(n)) return { ok: false, message: 'Not a number. Type digits, e.g. 12.5 or 1.2e3.' };
     const si = toSI(n, findUnit(def.kind, unitId ?? ''));

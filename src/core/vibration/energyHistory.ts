@@ -68,7 +68,8 @@ export function responseWindow(wn: number, zeta: number): number {
     const decay = zeta > 0 ? Math.log(100) / (zeta * wn) : Infinity;
     return Math.min(Math.max(decay, 3 * period), 30 * period);
   }
-  // slowest root of the characteristic equation sets the creep back
-  const slow = wn * (zeta - Math.sqrt(Math.max(zeta * zeta - 1, 0)));
+  // the slowest root sets the creep back: ωn(ζ − √(ζ²−1)) written as ωn/(ζ + √(ζ²−1)),
+  // which does not cancel for large ζ
+  const slow = wn / (zeta + Math.sqrt(Math.max(zeta * zeta - 1, 0)));
   return Math.log(100) / slow;
 }

@@ -1,0 +1,133 @@
+/**
+ * `npm run bench`: compute latency of every registered calculator (median and p99 of evaluate()
+ * over many random valid inputs, with and without chart data), simulation and CSV throughput,
+ * and bytes per page (gzip) of HTML, CSS and JS on a calculator page and a prose page, measured
+ * in Chromium on the built site (dist/, built first if missing). Writes bench/results/latest.json
+ * and prints a summary. Never part of `npm test`.
+ */
+import { execFileSync } from 'node:child_process';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { cpus, totalmem } from 'node:os';
+import { join, resolve } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import fc from 'fast-check';
+import { evaluate } from '../src/calculators/evaluate.ts';
+import { calculators } from '../src/calculators/registry.ts';
+import type { CalculatorDefinition } from '../src/calculators/types.ts';
+import { serveStatic } from '../src/server/staticServer.ts';
+import { launch } from '../test/helpers/browser.ts';
+import { calculatorPages, prosePages } from '../test/helpers/calcPages.ts';
+import { fileFor } from '../test/helpers/crawl.ts';
+import { validRecord } from '../test/calculators/hostile.arbitraries.ts';
+import { generateCsv } from './lib/csv.ts';
+
+const SAMPLES = Number(process.env.DAMPBOOK_BENCH_SAMPLES ?? 2000);
+const CLOSED_FORM_TARGET_MS = 0.2;
+
+function quantile(sorted: number[], q: number): number {
+  return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? NaN;
+}
+
+/** Times fn over the inputs (after a warm-up pass); returns per-call milliseconds, sorted. */
+function time<T>(inputs: readonly T[], fn: (x: T) => unknown): number[] {
+  for (const x of inputs.slice(0, 200)) fn(x);
+  const t: number[] = [];
+  for (const x of inputs) {
+    const t0 = performance.now();
+    fn(x);
+    t.push(performance.now() - t0);
+  }
+  return t.sort((a, b) => a - b);
+}
+
+function latency(calc: CalculatorDefinition) {
+  const raw = fc.sample(validRecord(calc), { numRuns: SAMPLES * 2, seed: 42 });
+  const ok = raw.filter((r) => { try { evaluate(calc, r, { fillDefaults: false }); return true; } catch { return false; } }).slice(0, SAMPLES);
+  const compute = time(ok, (r) => evaluate(calc, r, { fillDefaults: false }));
+  const withCharts = calc.charts ? time(ok, (r) => { const res = evaluate(calc, r, { fillDefaults: false }); return calc.charts!(res.values, res); }) : undefined;
+  const median = quantile(compute, 0.5);
+  return {
+    id: calc.id,
+    samples: ok.length,
+    rejected: raw.length - ok.length > 0 ? `${Math.min(raw.length - ok.length, raw.length)} of ${raw.length} random records had no answer (typed error)` : undefined,
+    medianMs: Number(median.toPrecision(3)),
+    p99Ms: Number(quantile(compute, 0.99).toPrecision(3)),
+    withChartsMedianMs: withCharts ? Number(quantile(withCharts, 0.5).toPrecision(3)) : undefined,
+    withChartsP99Ms: withCharts ? Number(quantile(withCharts, 0.99).toPrecision(3)) : undefined,
+    class: median <= CLOSED_FORM_TARGET_MS ? 'fast (≤ 0.2 ms median)' : 'simulation-class (> 0.2 ms median)',
+    evaluationsPerSecond: Math.round(1000 / median),
+  };
+}
+
+/** CSV throughput for calculators with a text input: a generated 10,000-row record, when one can be made. */
+function csvThroughput(calc: CalculatorDefinition) {
+  return calc.inputs.filter((d) => d.kind === 'text').map((def) => {
+    if (def.kind !== 'text') return undefined;
+    const csv = generateCsv(def.default, 10_000);
+    if (!csv) return { id: calc.id, input: def.key, skipped: 'default text is not a numeric CSV to extend; no generic 10,000-row record' };
+    if (csv.length > def.maxLength) return { id: calc.id, input: def.key, skipped: `10,000 rows (${csv.length} chars) exceed maxLength ${def.maxLength}` };
+    const raw = Object.fromEntries(calc.inputs.map((d) => [d.key, d.default])) as Record<string, unknown>;
+    raw[def.key] = csv;
+    try { evaluate(calc, raw); } catch (e) { return { id: calc.id, input: def.key, skipped: `generated record refused: ${(e as Error).message.slice(0, 120)}` }; }
+    const t = time(Array.from({ length: 20 }, () => raw), (r) => evaluate(calc, r));
+    const median = quantile(t, 0.5);
+    return { id: calc.id, input: def.key, rows: 10_000, medianMs: Number(median.toPrecision(3)), rowsPerSecond: Math.round(10_000 / (median / 1000)) };
+  }).filter(Boolean);
+}
+
+async function bytesPerPage() {
+  const dist = resolve('dist');
+  if (!existsSync(join(dist, 'index.html'))) execFileSync('npm', ['run', 'build'], { stdio: 'inherit' });
+  const calcPage = calculatorPages(dist, '/')[0]?.path;
+  const prosePage = prosePages(dist, '/').find((p) => p !== '/404.html');
+  const server = await serveStatic(dist, '/');
+  const browser = await launch();
+  const gz = (path: string) => gzipSync(readFileSync(fileFor(dist, '/', path)!)).length;
+  const measure = async (path: string | undefined, live: boolean) => {
+    if (!path) return undefined;
+    const page = await browser.newPage();
+    const seen = new Map<string, string>();
+    page.on('response', (r) => { const u = new URL(r.url()); if (u.origin === server.origin) seen.set(u.pathname, r.request().resourceType()); });
+    await page.goto(`${server.origin}${path}`, { waitUntil: 'networkidle' });
+    if (live) {
+      await page.waitForFunction(() => [...document.querySelectorAll('db-calculator')].every((c) => c.hasAttribute('data-ready')));
+      await page.waitForFunction(() => [...document.querySelectorAll('db-calculator .chart-canvas')].every((c) => c.hasAttribute('data-live')));
+    }
+    await page.close();
+    let html = 0; let css = 0; let js = 0;
+    const scripts: string[] = [];
+    for (const [p, type] of seen) {
+      if (p.startsWith('/pagefind/')) continue; // search engine: loads on first use of the search box
+      if (type === 'document') html += gz(p);
+      else if (p.endsWith('.css')) css += gz(p);
+      else if (p.endsWith('.js') || p.endsWith('.mjs')) { js += gz(p); scripts.push(`${p} ${gz(p)}`); }
+    }
+    return { path, htmlGzBytes: html, cssGzBytes: css, jsGzBytes: js, scripts };
+  };
+  try {
+    return { calculatorPage: await measure(calcPage, true), prosePage: await measure(prosePage ?? '/', false) };
+  } finally {
+    await browser.close();
+    await server.close();
+  }
+}
+
+const lat = calculators.map(latency);
+const csv = calculators.flatMap(csvThroughput);
+const bytes = await bytesPerPage();
+const result = {
+  date: new Date().toISOString(),
+  machine: `${cpus().length} × ${cpus()[0]?.model.trim() ?? 'cpu'}, ${(totalmem() / 2 ** 30).toFixed(0)} GiB, Node ${process.version}`,
+  samplesPerCalculator: SAMPLES,
+  latency: lat,
+  simulationThroughput: lat.filter((l) => l.medianMs > CLOSED_FORM_TARGET_MS).map((l) => ({ id: l.id, evaluationsPerSecond: l.evaluationsPerSecond })),
+  csvThroughput: csv.length ? csv : 'no calculator with a text (CSV) input is registered',
+  bytes,
+};
+mkdirSync('bench/results', { recursive: true });
+writeFileSync('bench/results/latest.json', `${JSON.stringify(result, null, 2)}\n`);
+console.log(`machine: ${result.machine}`);
+for (const l of lat) console.log(`${l.id.padEnd(20)} median ${l.medianMs} ms  p99 ${l.p99Ms} ms${l.withChartsMedianMs !== undefined ? `  (with charts ${l.withChartsMedianMs} / ${l.withChartsP99Ms} ms)` : ''}  ${l.class}`);
+console.log('csv:', JSON.stringify(result.csvThroughput));
+console.log('bytes:', JSON.stringify(bytes));
+console.log('written bench/results/latest.json');

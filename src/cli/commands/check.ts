@@ -1,0 +1,42 @@
+import { existsSync } from 'node:fs';
+import { failureReport, verifyPage } from '../../content/verify.ts';
+import { UsageError, type ParsedArgs } from '../args.ts';
+import { readPages } from '../pages.ts';
+
+/**
+ * `dampbook check [--content dir]`: validates every page's frontmatter with the site's schema
+ * and runs every verification case against the core. Exit 1 on any failure, naming the page,
+ * the case, the expected and the computed values.
+ */
+export function check(args: ParsedArgs, out: (s: string) => void): number {
+  const dir = typeof args.flags.get('content') === 'string' ? (args.flags.get('content') as string) : 'content';
+  if (!existsSync(dir)) throw new UsageError(`no content folder '${dir}'`);
+  const pages = readPages(dir);
+  const lines: string[] = [];
+  let failed = 0;
+  let checks = 0;
+  const ids = new Map<string, string>();
+  for (const p of pages) {
+    if (!p.meta) {
+      failed++;
+      for (const e of p.errors) lines.push(`FAIL ${p.file}: ${e}`);
+      continue;
+    }
+    const dup = ids.get(p.meta.id);
+    if (dup) { failed++; lines.push(`FAIL ${p.file}: id: '${p.meta.id}' is already the id of ${dup}`); }
+    ids.set(p.meta.id, p.file);
+    const v = verifyPage(p.meta);
+    checks += v.rows.length;
+    if (v.failures.length || v.problems.length) {
+      failed++;
+      lines.push(...failureReport(`FAIL ${p.file}`, v).split('\n'));
+    } else {
+      const cases = new Set(v.rows.map((r) => r.case)).size;
+      lines.push(`ok   ${p.file}: ${p.meta.id} rev ${p.meta.revision} ${p.meta.status}; ${cases} case(s), ${v.rows.length} check(s) pass`);
+    }
+  }
+  for (const l of lines) out(l);
+  out(`${pages.length} page(s), ${checks} verification check(s): ${failed === 0 ? 'all pass' : `${failed} page(s) failed`}`);
+  if (pages.length === 0) { out(`no pages found under ${dir}`); return 1; }
+  return failed === 0 ? 0 : 1;
+}

@@ -1,0 +1,106 @@
+import { POSITIVE, requireInRange } from '../errors.ts';
+import { airProperties } from './airProperties.ts';
+import { CHURCHILL_BERNSTEIN_REPR_MIN, churchillBernstein } from './churchillBernstein.ts';
+import { CHURCHILL_CHU_CYLINDER_RA_MAX, churchillChuCylinder } from './churchillChuCylinder.ts';
+import { mixedConvection } from './mixedConvection.ts';
+import { radiationCoefficient } from './radiationCoefficient.ts';
+import { rayleighNumber } from './rayleighNumber.ts';
+import { verticalCylinderSlenderness, verticalPlateNusselt } from './verticalPlate.ts';
+
+export type Orientation = 'horizontal' | 'vertical';
+
+/** A cylindrical damper body in air. SI throughout. */
+export interface Body {
+  readonly D: number; // m, diameter
+  readonly L: number; // m, length
+  readonly orientation: Orientation;
+  /** Include the two flat end faces in the area (at the lateral coefficient). */
+  readonly ends: boolean;
+  readonly eps: number; // emissivity
+  readonly Tamb: number; // K, air far from the body
+  readonly Tsur?: number; // K, radiating surroundings (default Tamb)
+  readonly V: number; // m/s, air speed across the body (0 = still air)
+}
+
+export interface BodyCooling {
+  readonly area: number; // m²
+  readonly Tfilm: number; // K
+  readonly hNatural: number; // W/(m²·K)
+  readonly hForced: number; // W/(m²·K), 0 in still air
+  readonly hConv: number; // W/(m²·K), combined
+  readonly hRad: number; // W/(m²·K)
+  readonly Qconv: number; // W
+  readonly Qrad: number; // W
+  readonly Q: number; // W, heat leaving the body
+  readonly UA: number; // W/K, (hConv + hRad)·area
+  readonly Ra: number; // on D (horizontal) or L (vertical)
+  readonly Re: number; // on D
+  readonly Pr: number;
+  readonly warnings: readonly string[];
+}
+
+/** Temperatures the air table supports for body and air (film temperature stays inside it). */
+export const BODY_T_RANGE = { min: 200, max: 700 } as const;
+
+/**
+ * Heat leaving a cylindrical body at surface temperature Ts by convection and radiation.
+ *
+ * $$Q = h_{conv}A(T_s-T_\infty) + h_r A(T_s-T_{sur}),\quad h_{conv} = (h_F^3 + h_N^3)^{1/3}$$
+ * h_N: Churchill–Chu horizontal cylinder on D, or Churchill–Chu vertical plate on L with the
+ * slenderness test; h_F: Churchill–Bernstein on D; h_r linearised radiation. Properties at
+ * T_f = (T_s + T_∞)/2. End faces, when included, take the lateral coefficients (an approximation:
+ * common practice, no source; they are D/(2L) of the lateral area, 7 % for a 50 × 350 mm body).
+ *
+ * @param body geometry, emissivity, air; D, L (0, 10] m; V [0, 100] m/s; Tamb, Tsur in [200, 700] K
+ * @param Ts surface temperature, K, [200, 700]
+ * @returns coefficients, heat flows, UA, the dimensionless groups and validity warnings
+ * @throws InputRangeError for inputs outside those ranges
+ * @example bodyCooling({D:0.05,L:0.35,orientation:'horizontal',ends:false,eps:0.9,Tamb:298.15,V:0}, 353.15).Q // ≈ 41.0 W
+ * @source incropera2007 eqs. 9.34, 9.26/9.27, 9.33, 7.54, 9.64, 1.9 (from memory)
+ */
+export function bodyCooling(body: Body, Ts: number): BodyCooling {
+  const D = requireInRange('D', body.D, { ...POSITIVE, max: 10 }, 'm');
+  const L = requireInRange('L', body.L, { ...POSITIVE, max: 10 }, 'm');
+  const V = requireInRange('V', body.V, { min: 0, max: 100 }, 'm/s');
+  requireInRange('Ts', Ts, BODY_T_RANGE, 'K');
+  const Tamb = requireInRange('Tamb', body.Tamb, BODY_T_RANGE, 'K');
+  const Tsur = requireInRange('Tsur', body.Tsur ?? Tamb, BODY_T_RANGE, 'K');
+  const warnings: string[] = [];
+  const Tfilm = 0.5 * (Ts + Tamb);
+  const air = airProperties(Tfilm);
+  const dT = Math.abs(Ts - Tamb);
+
+  let hNatural: number;
+  let Ra: number;
+  if (body.orientation === 'horizontal') {
+    Ra = rayleighNumber(air, dT, D).Ra;
+    hNatural = (churchillChuCylinder(Ra, air.Pr) * air.k) / D;
+    if (Ra > CHURCHILL_CHU_CYLINDER_RA_MAX) warnings.push(`Ra_D = ${Ra.toExponential(2)} is above 10¹², the range of the horizontal-cylinder correlation.`);
+  } else {
+    const g = rayleighNumber(air, dT, L);
+    Ra = g.Ra;
+    hNatural = (verticalPlateNusselt(Ra, air.Pr) * air.k) / L;
+    const s = verticalCylinderSlenderness(D, L, g.Gr);
+    if (dT > 0 && !s.ok) {
+      warnings.push(`Vertical body too slender for the vertical-plate correlation: D = ${fmtMm(D)} < 35·L/Gr_L^¼ = ${fmtMm(s.Dmin)}. ` +
+        'A slender cylinder sheds more heat than a plate, so h_N is underestimated (conservative for temperature).');
+    }
+  }
+
+  const Re = (V * D) / air.nu;
+  const hForced = V > 0 ? (churchillBernstein(Re, air.Pr) * air.k) / D : 0;
+  if (V > 0 && Re * air.Pr < CHURCHILL_BERNSTEIN_REPR_MIN) warnings.push(`Re·Pr = ${(Re * air.Pr).toPrecision(2)} is below 0.2, the range of the cross-flow correlation (free convection dominates here).`);
+  if (Re > 1e7) warnings.push(`Re_D = ${Re.toExponential(2)} is beyond the data behind the cross-flow correlation (about 10⁷).`);
+  const hConv = V > 0 ? mixedConvection(hForced, hNatural) : hNatural;
+  const hRad = radiationCoefficient(body.eps, Ts, Tsur);
+
+  const lateral = Math.PI * D * L;
+  const area = body.ends ? lateral + 2 * (Math.PI / 4) * D * D : lateral;
+  const Qconv = hConv * area * (Ts - Tamb);
+  const Qrad = hRad * area * (Ts - Tsur);
+  return { area, Tfilm, hNatural, hForced, hConv, hRad, Qconv, Qrad, Q: Qconv + Qrad, UA: (hConv + hRad) * area, Ra, Re, Pr: air.Pr, warnings };
+}
+
+function fmtMm(x: number): string {
+  return Number.isFinite(x) ? `${(x * 1000).toPrecision(3)} mm` : '∞';
+}

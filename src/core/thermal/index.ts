@@ -1,0 +1,22 @@
+/** Thermal rating of damper bodies: air properties, convection, radiation, steady and transient temperature, oil, fade. */
+export { AIR_TABLE, AIR_T_MIN, AIR_T_MAX, type AirRow } from './airTable.ts';
+export { airProperties } from './airProperties.ts';
+export { STEFAN_BOLTZMANN, STANDARD_GRAVITY } from './stefanBoltzmann.ts';
+export { radiationCoefficient } from './radiationCoefficient.ts';
+export { rayleighNumber } from './rayleighNumber.ts';
+export { churchillChuCylinder, CHURCHILL_CHU_CYLINDER_RA_MAX } from './churchillChuCylinder.ts';
+export { verticalPlateNusselt, verticalCylinderSlenderness } from './verticalPlate.ts';
+export { churchillBernstein, CHURCHILL_BERNSTEIN_REPR_MIN } from './churchillBernstein.ts';
+export { mixedConvection } from './mixedConvection.ts';
+export { bodyCooling, BODY_T_RANGE, type Body, type BodyCooling, type Orientation } from './bodyCooling.ts';
+export { steadyTemperature } from './steadyTemperature.ts';
+export { lumpedWarmUp, type LumpedBody } from './lumpedWarmUp.ts';
+export { onOffDuty } from './onOffDuty.ts';
+export { rk4 } from './rk4.ts';
+export { warmUpWithLoss, timeToLimit } from './warmUpWithLoss.ts';
+export { MATERIALS, material, type Material } from './materials.ts';
+export { biotNumber, BIOT_LUMPED_MAX } from './biotNumber.ts';
+export { waltherFit, waltherViscosity, type WaltherFit } from './walther.ts';
+export { isoViscosityGrade, ISO_VG } from './isoViscosityGrade.ts';
+export { fadeCoefficient, type FadeModel } from './fadeCoefficient.ts';
+export { fadeEquilibrium, dutyPower, type FadeDuty, type FadeEquilibrium } from './fadeEquilibrium.ts';

@@ -1,0 +1,32 @@
+import { ComputationError, NON_NEGATIVE, requireInRange } from '../errors.ts';
+import { brentRoot } from '../numeric/brent.ts';
+import { BODY_T_RANGE, bodyCooling, type Body, type BodyCooling } from './bodyCooling.ts';
+
+/**
+ * Body temperature at which a mean power P leaves the body in steady state: the root of
+ * Q(T_s) − P = 0, with Q from `bodyCooling` (h depends on T_s through the film properties,
+ * the Rayleigh number and radiation, so the equation is nonlinear). Q rises monotonically with
+ * T_s, so the root is unique; it is bracketed between min(T_∞, T_sur) and 700 K and found by
+ * Brent's method to 1e-9 K.
+ *
+ * $$Q(T_s) = h_{conv}(T_s)\,A\,(T_s-T_\infty) + h_r(T_s)\,A\,(T_s-T_{sur}) = P$$
+ *
+ * @param body the body and its air (see `Body`)
+ * @param P mean power to shed, W, [0, ∞)
+ * @returns the steady surface temperature (K) with the cooling figures at that temperature
+ * @throws InputRangeError for bad inputs; ComputationError when the body cannot shed P below 700 K
+ * @example steadyTemperature(body50x350, 41.01).Ts // ≈ 353.15 K
+ * @source incropera2007 eq. 1.12 energy balance (from memory); brent1973 ch. 4
+ */
+export function steadyTemperature(body: Body, P: number): BodyCooling & { readonly Ts: number } {
+  requireInRange('P', P, NON_NEGATIVE, 'W');
+  const lo = Math.min(body.Tamb, body.Tsur ?? body.Tamb);
+  const hi = BODY_T_RANGE.max;
+  const f = (T: number) => bodyCooling(body, T).Q - P;
+  const fHi = f(hi);
+  if (fHi < 0) {
+    throw new ComputationError(`the body cannot shed ${P.toPrecision(4)} W below ${hi} K (${(hi - 273.15).toFixed(0)} °C): at that temperature it sheds only ${(fHi + P).toPrecision(4)} W`);
+  }
+  const Ts = f(lo) >= 0 ? lo : brentRoot(f, lo, hi, { xTol: 1e-9 });
+  return { ...bodyCooling(body, Ts), Ts };
+}

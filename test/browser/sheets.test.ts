@@ -1,0 +1,220 @@
+/**
+ * Vetted pages and calculation sheets in real Chromium: the printed PDF of the oscillator page
+ * (read back with poppler's pdftotext and pdfinfo), A4 and US Letter, draft marks, shared links in
+ * a fresh browser context, record export/import and named input sets.
+ */
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { serveStatic, type Served } from '../../src/server/staticServer.ts';
+import { printSheet } from '../../src/sheets/print.ts';
+import { launch, watchedPage } from '../helpers/browser.ts';
+import { ROOT_BUILD } from '../helpers/site.ts';
+
+let server: Served;
+let browser: Browser;
+const tmp = mkdtempSync(join(tmpdir(), 'dampbook-sheet-'));
+
+beforeAll(async () => {
+  server = await serveStatic(ROOT_BUILD, '/');
+  browser = await launch();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+  rmSync(tmp, { recursive: true, force: true });
+});
+
+const pdfText = (f: string) => execFileSync('pdftotext', ['-layout', f, '-'], { encoding: 'utf8' });
+const pdfInfo = (f: string) => execFileSync('pdfinfo', [f], { encoding: 'utf8' });
+
+async function outputs(page: Page): Promise<Record<string, string>> {
+  return Object.fromEntries(await page.locator('tr[data-out]').evaluateAll((rows) => rows.map((r) => [(r as HTMLElement).dataset.out!, r.querySelector('.value')!.textContent!])));
+}
+
+describe('printed calculation sheet', () => {
+  it('prints the oscillator page on A4 with header fields, inputs, results, verification summary and page 1 of N', async () => {
+    const pdf = join(tmp, 'sdof-a4.pdf');
+    await printSheet({
+      site: ROOT_BUILD, page: 'sdof', pdf, inputs: [['c', '80']],
+      sheet: { project: 'Test bay instrument mounts', no: 'TW-077', calc: 'TW-077-C-003', by: 'Rana Oduya', checker: 'Tobias Quell', date: '2026-12-01' },
+    });
+    const info = pdfInfo(pdf);
+    const pages = Number(/Pages:\s+(\d+)/.exec(info)![1]);
+    expect(info).toMatch(/\(A4\)/);
+    const text = pdfText(pdf);
+    for (const s of ['Tarnwick Works', 'Calculation sheet', 'Test bay instrument mounts', 'TW-077', 'TW-077-C-003', 'Rana Oduya', 'Tobias Quell', '2026-12-01',
+      'Damped single-degree-of-freedom oscillator', 'revision B', 'APPROVED']) expect(text, s).toContain(s);
+    // inputs with units (c = 80 N·s/m from the command) and results with units: ζ = 80/400 = 0.2 (closed form, Rao 6th ed. §2.6)
+    expect(text).toMatch(/Damping coefficient\s+80\s+N·s\/m/);
+    expect(text).toMatch(/Damping ratio ζ\s+0\.2\b/);
+    expect(text).toMatch(/Critical damping coefficient\s+400\s+N·s\/m/);
+    expect(text).toMatch(/Verification[\s\S]*All 8 checks of 2 cases pass/);
+    expect(text).toContain('Stored energy at release');
+    expect(text).toContain(`page 1 of ${pages}`);
+    expect(text).toContain(`page ${pages} of ${pages}`);
+    expect(text).toMatch(/Dampbook \d+\.\d+\.\d+ · content [0-9a-f]{12}/);
+  });
+
+  it('prints on US Letter when asked', async () => {
+    const pdf = join(tmp, 'sdof-letter.pdf');
+    await printSheet({ site: ROOT_BUILD, page: 'oscillators/sdof', pdf, paper: 'letter' });
+    expect(pdfInfo(pdf)).toMatch(/Page size:\s+612(\.\d+)? x 792(\.\d+)? pts \(letter\)/);
+  });
+
+  it('marks a draft page on every printed page', async () => {
+    const pdf = join(tmp, 'draft.pdf');
+    await printSheet({ site: ROOT_BUILD, page: 'printing-sheets', pdf });
+    const text = pdfText(pdf);
+    const pages = Number(/Pages:\s+(\d+)/.exec(pdfInfo(pdf))![1]);
+    expect(text.match(/DRAFT — not for design records/g)?.length).toBe(pages);
+    expect(text).toContain('DRAFT method page');
+  });
+
+  it('refuses an unknown page or input with a message', async () => {
+    await expect(printSheet({ site: ROOT_BUILD, page: 'no-such-page', pdf: join(tmp, 'x.pdf') })).rejects.toThrow(/no page 'no-such-page'/);
+    await expect(printSheet({ site: ROOT_BUILD, page: 'sdof', pdf: join(tmp, 'x.pdf'), inputs: [['mass', '3']] })).rejects.toThrow(/no input 'mass'/);
+    await expect(printSheet({ site: ROOT_BUILD, page: 'sdof', pdf: join(tmp, 'x.pdf'), inputs: [['m', '-3']] })).rejects.toThrow(/invalid input m/);
+  });
+});
+
+describe('vetted page on screen', () => {
+  it('shows status, revision, people and a passing Verification table', async () => {
+    const { page } = await watchedPage(browser, server.origin);
+    await page.goto(`${server.url}oscillators/sdof/`);
+    expect(await page.locator('.record').textContent()).toMatch(/approved[\s\S]*Revision B[\s\S]*Rana Oduya[\s\S]*Tobias Quell[\s\S]*Ines Marrow/);
+    const rows = page.locator('.verification-table tbody tr');
+    expect(await rows.count()).toBe(8);
+    expect(await page.locator('.verification-table .vpass').allTextContents()).toEqual(Array(8).fill('pass'));
+    expect(await page.locator('.verification-table thead').textContent()).toMatch(/Expected[\s\S]*Computed[\s\S]*Difference[\s\S]*Pass/);
+  });
+
+  it('marks draft pages in the page list, on the page and in search results', async () => {
+    const w = await watchedPage(browser, server.origin);
+    const { page } = w;
+    await page.goto(server.url);
+    const item = page.locator('.topic li', { hasText: 'How to use and print a calculation sheet' });
+    expect(await item.locator('.status-draft').textContent()).toBe('draft');
+    await page.goto(`${server.url}handbook/printing-sheets/`);
+    expect(await page.locator('.draft-banner').isVisible()).toBe(true);
+    await page.fill('#finder-q', 'calculation sheet printing');
+    const hit = page.locator('#finder-results li', { has: page.locator('a[href="/handbook/printing-sheets/"]') });
+    await hit.waitFor();
+    expect(await hit.locator('.status-draft').textContent()).toBe('draft');
+    expect(w.consoleErrors).toEqual([]);
+  });
+
+  it('keeps sheet details in the address: a shared link in a fresh context shows the same results and header', async () => {
+    const a = await watchedPage(browser, server.origin);
+    await a.page.goto(`${server.url}oscillators/sdof/`);
+    await a.page.waitForSelector('db-calculator[data-ready]');
+    await a.page.fill('#c-sdof-m', '12.5');
+    await a.page.selectOption('select[name="k.unit"]', 'lbf/in');
+    await a.page.fill('#c-sdof-k', '30');
+    await a.page.fill('#c-sdof-c', '95');
+    await a.page.locator('.sheet-details summary').click();
+    await a.page.fill('[data-sheet-field="calc"]', 'TW-210-C-007');
+    await expect.poll(() => new URL(a.page.url()).searchParams.get('sheet-calc')).toBe('TW-210-C-007');
+    await expect.poll(() => new URL(a.page.url()).searchParams.get('c')).toBe('95');
+    const shown = await outputs(a.page);
+    const link = a.page.url();
+    const b = await watchedPage(browser, server.origin); // a new browser context: no storage, no history
+    await b.page.goto(link);
+    await b.page.waitForSelector('db-calculator[data-ready]');
+    await b.page.waitForSelector('[data-sheet-panel][data-ready]');
+    expect(await outputs(b.page)).toEqual(shown);
+    expect(await b.page.locator('[data-sheet="calc"]').first().textContent()).toBe('TW-210-C-007');
+    expect(b.pageErrors).toEqual([]);
+  });
+});
+
+describe('calculation records in the page', () => {
+  async function openRecords(page: Page, url: string): Promise<void> {
+    await page.goto(url);
+    await page.waitForSelector('db-calculator[data-ready]');
+    await page.locator('.calc-records summary').click();
+    await page.waitForSelector('.calc-records[data-ready]');
+  }
+
+  it('exports a record that re-imports in a fresh context to identical outputs', async () => {
+    const a = await watchedPage(browser, server.origin);
+    await openRecords(a.page, `${server.url}oscillators/sdof/?m=7.3&k=5210&c=61.7&x0=0.004`);
+    await a.page.selectOption('select[name="m.unit"]', 'lb');
+    const before = await outputs(a.page);
+    const [download] = await Promise.all([a.page.waitForEvent('download'), a.page.click('[data-rec="export"]')]);
+    const file = join(tmp, 'record.json');
+    await download.saveAs(file);
+    const rec = JSON.parse(readFileSync(file, 'utf8')) as { calculator: string; page: { id: string; revision: string }; coreVersion: string; inputs: Record<string, { unit: string }>; time: string };
+    expect(rec.calculator).toBe('sdof');
+    expect(rec.page).toEqual({ id: 'sdof', revision: 'B' });
+    expect(rec.coreVersion).toMatch(/^\d+\.\d+\.\d+/);
+    expect(rec.inputs.m!.unit).toBe('lb');
+
+    const b = await watchedPage(browser, server.origin);
+    await openRecords(b.page, `${server.url}oscillators/sdof/`);
+    await b.page.setInputFiles('.rec-file', file);
+    await expect.poll(() => b.page.locator('.rec-msg').textContent()).toMatch(/Record imported: (\d+) of \1 recorded outputs reproduced/);
+    expect(await b.page.locator('.rec-msg').getAttribute('data-kind')).toBe('ok');
+    expect(await outputs(b.page)).toEqual(before);
+    expect(await b.page.locator('select[name="m.unit"]').inputValue()).toBe('lb');
+
+    // an older page revision and core version are imported with a warning
+    const old = join(tmp, 'old.json');
+    writeFileSync(old, JSON.stringify({ ...rec, page: { id: 'sdof', revision: 'A' }, coreVersion: '0.0.9' }));
+    await b.page.setInputFiles('.rec-file', old);
+    await expect.poll(() => b.page.locator('.rec-msg').textContent()).toMatch(/revision A; this page is revision B[\s\S]*core version 0\.0\.9/);
+    expect(await b.page.locator('.rec-msg').getAttribute('data-kind')).toBe('warn');
+  });
+
+  it('rejects malformed and hostile records with a message and changes nothing', async () => {
+    const w = await watchedPage(browser, server.origin);
+    const { page } = w;
+    await openRecords(page, `${server.url}oscillators/sdof/?c=55`);
+    const before = await outputs(page);
+    const url = page.url();
+    const bad: [string, string, RegExp][] = [
+      ['not-json.json', '{"format":', /not JSON/],
+      ['proto.json', '{"format":"dampbook-record","__proto__":{"polluted":1}}', /forbidden key '__proto__'/],
+      ['script.json', JSON.stringify({ format: 'dampbook-record', formatVersion: 1, calculator: 'sdof', coreVersion: '0.1.0', time: '2026-11-30T10:00:00Z', name: '<img src=x onerror=alert(1)>', inputs: { m: { value: '<script>alert(1)</script>' } }, outputs: {} }), /must be a number/],
+      ['types.json', JSON.stringify({ format: 'dampbook-record', formatVersion: 1, calculator: 'sdof', coreVersion: '0.1.0', time: 'yesterday', inputs: {}, outputs: {} }), /time/],
+      ['huge.json', JSON.stringify({ format: 'dampbook-record', formatVersion: 1, calculator: 'sdof', coreVersion: '0.1.0', time: '2026-11-30T10:00:00Z', name: 'x'.repeat(500_000), inputs: {}, outputs: {} }), /name/],
+    ];
+    for (const [name, text, msg] of bad) {
+      const f = join(tmp, name);
+      writeFileSync(f, text);
+      await page.setInputFiles('.rec-file', f);
+      await expect.poll(() => page.locator('.rec-msg').textContent()).toMatch(msg);
+      expect(await page.locator('.rec-msg').textContent()).toMatch(/Nothing was changed/);
+      expect(await outputs(page)).toEqual(before);
+      expect(page.url()).toBe(url);
+    }
+    expect(await page.locator('.calc-records img, .calc-records script').count()).toBe(0);
+    expect(await page.evaluate(() => ({} as Record<string, unknown>).polluted)).toBeUndefined();
+    expect(w.dialogs).toEqual([]);
+    expect(w.pageErrors).toEqual([]);
+  });
+
+  it('saves, loads and deletes named input sets in this browser', async () => {
+    const { page } = await watchedPage(browser, server.origin);
+    await openRecords(page, `${server.url}oscillators/sdof/?c=120`);
+    const soft = await outputs(page);
+    await page.fill('.rec-name', 'TW-077 mount, stiff');
+    await page.click('[data-rec="save"]');
+    await expect.poll(() => page.locator('.rec-msg').textContent()).toMatch(/Saved input set/);
+    await page.fill('#c-sdof-c', '300');
+    await expect.poll(() => page.locator('tr[data-out="zeta"] .value').textContent()).toBe('0.75');
+    await page.selectOption('.rec-sets', 'TW-077 mount, stiff');
+    await page.click('[data-rec="load"]');
+    await expect.poll(() => outputs(page)).toEqual(soft);
+    await page.reload();
+    await page.waitForSelector('db-calculator[data-ready]');
+    await page.locator('.calc-records summary').click();
+    await page.waitForSelector('.calc-records[data-ready]');
+    expect(await page.locator('.rec-sets option').allTextContents()).toEqual(['TW-077 mount, stiff']);
+    await page.click('[data-rec="delete"]');
+    await expect.poll(() => page.locator('.rec-sets option').count()).toBe(0);
+  });
+});
