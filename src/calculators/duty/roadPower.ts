@@ -81,12 +81,18 @@ export const roadPower = defineCalculator({
     const q = { ...s.car, c: result.outputs.ceq as number };
     const f = logGrid(0.1, 100, 241);
     const g = f.map((fi) => ({ fi, h: quarterCarGains(q, fi), gz: roadDisplacementPsd(s.road, fi) }));
-    const speeds = [2.5, 5, 10, 15, 20, 25, 30, 40];
-    const classes = ISO_8608_CLASSES.map((cls, i) => ({
-      label: `class ${cls}`, x: speeds, tone: i % 6, style: i < 6 ? ('line' as const) : ('dash' as const),
-      y: speeds.map((V) => roadDamperPower(s.car, { Gd0: roadRoughness(cls, 'mean').Gd0, w: s.road.w, V }, s.damper)),
-    }));
-    const pC = classes[2]!.y[4]!;
+    const speeds = s.damper.kind === 'linear' || s.road.w === 2 ? [2.5, 5, 10, 20, 30, 40] : [5, 10, 20, 40];
+    const cMean = roadRoughness('C', 'mean').Gd0;
+    // a linear damper's power is proportional to G_d(n0): one sweep serves every class
+    const linearC = s.damper.kind === 'linear' ? speeds.map((V) => roadDamperPower(s.car, { Gd0: cMean, w: s.road.w, V }, s.damper, 1e-5)) : undefined;
+    const classes = ISO_8608_CLASSES.map((cls, i) => {
+      const Gd0 = roadRoughness(cls, 'mean').Gd0;
+      return {
+        label: `class ${cls}`, x: speeds, tone: i % 6, style: i < 6 ? ('line' as const) : ('dash' as const),
+        y: linearC ? linearC.map((p) => (p * Gd0) / cMean) : speeds.map((V) => roadDamperPower(s.car, { Gd0, w: s.road.w, V }, s.damper, 1e-4, 24)),
+      };
+    });
+    const pC = roadDamperPower(s.car, { Gd0: cMean, w: s.road.w, V: 20 }, s.damper, 1e-4, 24);
     return [
       {
         id: 'velocity-psd', title: 'Damper velocity PSD',

@@ -28,24 +28,24 @@ export function quarterCarBand(q: QuarterCar): [number, number] {
  * with the exact quarter-car gains (quarterCarGains) and the ISO 8608 road PSD (roadDisplacementPsd).
  *
  * @param q quarter car (validated); road validated with checkRoad
- * @param which restrict to the damper velocity only (used inside iterations)
+ * @param relTol quadrature tolerance (relative), default 1e-8
  * @example quarterCarRandom(fellrunner, { Gd0: 256e-6, w: 2, V: 20 }).damperVelocity.value // 0.0825016
  * @source newland1993 ch. 7 (response spectra of linear systems; chapter from memory); wong2008 §7.2
  */
-export function quarterCarRandom(q: QuarterCar, road: RoadInput): QuarterCarRandom {
+export function quarterCarRandom(q: QuarterCar, road: RoadInput, relTol = 1e-8): QuarterCarRandom {
   const [f1, f2] = quarterCarBand(q);
   const peaks = quarterCarCharacteristicFrequencies(q);
   const gz = (f: number) => roadDisplacementPsd(road, f);
   return {
-    damperVelocity: spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * gz(f), f1, f2, 1e-9, 120, peaks),
-    travel: spectralIntegral((f) => quarterCarGains(q, f).travel * gz(f), f1, f2, 1e-9, 120, peaks),
-    bodyAcceleration: spectralIntegral((f) => quarterCarGains(q, f).bodyAcceleration * gz(f), f1, f2, 1e-9, 120, peaks),
-    tyreLoad: spectralIntegral((f) => quarterCarGains(q, f).tyreLoad * gz(f), f1, f2, 1e-9, 120, peaks),
+    damperVelocity: spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * gz(f), f1, f2, relTol, 120, peaks),
+    travel: spectralIntegral((f) => quarterCarGains(q, f).travel * gz(f), f1, f2, relTol, 120, peaks),
+    bodyAcceleration: spectralIntegral((f) => quarterCarGains(q, f).bodyAcceleration * gz(f), f1, f2, relTol, 120, peaks),
+    tyreLoad: spectralIntegral((f) => quarterCarGains(q, f).tyreLoad * gz(f), f1, f2, relTol, 120, peaks),
   };
 }
 
 /** Damper-velocity variance alone, (m/s)², with a looser tolerance for iterations. */
-export function damperVelocityVariance(q: QuarterCar, road: RoadInput, relTol = 1e-8): number {
+export function damperVelocityVariance(q: QuarterCar, road: RoadInput, relTol = 1e-8, panels = 60): number {
   const [f1, f2] = quarterCarBand(q);
-  return spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * roadDisplacementPsd(road, f), f1, f2, relTol, 60, quarterCarCharacteristicFrequencies(q)).value;
+  return spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * roadDisplacementPsd(road, f), f1, f2, relTol, panels, quarterCarCharacteristicFrequencies(q)).value;
 }

@@ -76,7 +76,7 @@ export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: Ro
   const tyreLoadRms = Math.sqrt(r.tyreLoad.value);
   let closed: RoadDuty['closed'];
   const v = quarterCarWhiteVariances(q, roadVelocityWhiteLevel(road.Gd0, road.V));
-  const check = road.w === 2 ? r : quarterCarRandom(q, { ...road, w: 2 });
+  const check = road.w === 2 ? r : quarterCarRandom(q, { ...road, w: 2 }, 1e-6);
   const closedFormDiff = Math.max(...KEYS.map((k) => Math.abs(Math.sqrt(check[k].value / v[k]) - 1)));
   if (road.w === 2) {
     closed = {
