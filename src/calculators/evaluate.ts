@@ -135,5 +135,6 @@ export function evaluate(calc: CalculatorDefinition, raw: Readonly<Record<string
 
 /** Default values of every input (SI), as the page pre-fills them. */
 export function defaults(calc: CalculatorDefinition): Values {
-  return Object.fromEntries(calc.inputs.map((d) => [d.key, d.default]));
+  // An optional number input starts empty (compute sees undefined), as the CLI leaves it.
+  return Object.fromEntries(calc.inputs.map((d) => [d.key, d.kind !== 'choice' && d.kind !== 'text' && d.optional ? undefined : d.default]));
 }

@@ -1,3 +1,8 @@
 import type { CalculatorDefinition } from '../types.ts';
+import { harmonicDutyCalc } from './harmonicDutyCalc.ts';
+import { impact } from './impact.ts';
+import { recordedMotionCalc } from './recordedMotionCalc.ts';
+import { roadPower } from './roadPower.ts';
+import { structuralDampers } from './structuralDampersCalc.ts';
 
-export const dutyCalculators: readonly CalculatorDefinition[] = [];
+export const dutyCalculators: readonly CalculatorDefinition[] = [harmonicDutyCalc, roadPower, impact, structuralDampers, recordedMotionCalc];

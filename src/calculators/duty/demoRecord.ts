@@ -1,0 +1,41 @@
+/**
+ * The demo dyno record of the TW-077 test bay (invented data): a damper stroked ±25 mm at 1.2 Hz
+ * on the dynamometer, sampled at 100 Hz with a small deterministic ripple on the force.
+ */
+export function demoDynoRecord(): string {
+  const rows = ['# TW-077 test bay, dyno record D-14 (demo data)', 'time [s],stroke [mm],force [N]'];
+  const X = 0.025;
+  const w = 2 * Math.PI * 1.2;
+  for (let i = 0; i <= 300; i++) {
+    const t = i / 100;
+    const x = X * Math.sin(w * t);
+    const v = X * w * Math.cos(w * t);
+    const a = Math.abs(v);
+    const mag = v >= 0 ? (a <= 0.1 ? 2500 * a : 250 + 1200 * (a - 0.1)) : (a <= 0.1 ? 1200 * a : 120 + 500 * (a - 0.1));
+    const F = Math.sign(v) * mag + 6 * Math.sin(37 * t);
+    rows.push(`${t.toFixed(2)},${(x * 1000).toFixed(3)},${F.toFixed(1)}`);
+  }
+  return rows.join('\n');
+}
+
+/**
+ * A synthetic sinusoidal record x = X·sin(2πft) for verification cases: columns time [s] and
+ * displacement [mm], velocity [m/s], and (txF) the force of a linear damper c·v [N]. Optional
+ * deterministic jitter of the sample times (fraction of the nominal interval).
+ */
+export function sineRecord(o: { X: number; f: number; cycles: number; rate: number; columns: 'tx' | 'tv' | 'txF'; c?: number; jitter?: number }): string {
+  const w = 2 * Math.PI * o.f;
+  const n = Math.round((o.cycles * o.rate) / o.f);
+  const head = o.columns === 'tx' ? 'time [s],x [mm]' : o.columns === 'tv' ? 'time [s],v [m/s]' : 'time [s],x [mm],force [N]';
+  const rows = [head];
+  for (let i = 0; i <= n; i++) {
+    const j = o.jitter && i > 0 && i < n ? o.jitter * Math.sin(12.9898 * i) * 0.5 : 0;
+    const t = (i + j) / o.rate;
+    const x = o.X * Math.sin(w * t);
+    const v = o.X * w * Math.cos(w * t);
+    if (o.columns === 'tx') rows.push(`${t.toPrecision(12)},${(x * 1000).toPrecision(12)}`);
+    else if (o.columns === 'tv') rows.push(`${t.toPrecision(12)},${v.toPrecision(12)}`);
+    else rows.push(`${t.toPrecision(12)},${(x * 1000).toPrecision(12)},${((o.c ?? 1000) * v).toPrecision(12)}`);
+  }
+  return rows.join('\n');
+}
