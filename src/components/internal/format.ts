@@ -9,7 +9,12 @@ export function formatNumber(x: number, digits = 4): string {
   if (!Number.isFinite(x)) return '—';
   if (x === 0) return '0';
   const a = Math.abs(x);
-  if (a >= 1e7 || a < 1e-4) return x.toExponential(Math.max(digits - 1, 0)).replace('e+', 'e');
+  if (a >= 1e7 || a < 1e-4) {
+    // 1.50000e-6 → 1.5e-6: trailing zeros of the mantissa carry no information
+    const [mant, exp] = x.toExponential(Math.max(digits - 1, 0)).split('e');
+    const m = mant!.includes('.') ? mant!.replace(/\.?0+$/, '') : mant!;
+    return `${m}e${exp!.replace('+', '')}`;
+  }
   const s = x.toPrecision(digits);
   return s.includes('e') ? String(Number(s)) : s.includes('.') ? s.replace(/\.?0+$/, '') : s;
 }
