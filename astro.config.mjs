@@ -7,6 +7,23 @@ import rehypeKatex from 'rehype-katex';
 
 const base = process.env.DAMPBOOK_BASE ?? '/';
 
+/**
+ * Display equations scroll sideways when wider than the column; a scrollable region must be
+ * reachable by keyboard, so each display gets tabindex="0" and a label (WCAG 2.1.1).
+ */
+function focusableDisplays() {
+  const walk = (node) => {
+    const cls = node.properties?.className;
+    if (node.type === 'element' && Array.isArray(cls) && cls.includes('katex-display')) {
+      node.properties.tabIndex = 0;
+      node.properties.role = 'group';
+      node.properties.ariaLabel = 'equation';
+    }
+    for (const child of node.children ?? []) walk(child);
+  };
+  return (tree) => walk(tree);
+}
+
 export default defineConfig({
   base,
   outDir: process.env.DAMPBOOK_OUT ?? './dist',
@@ -14,7 +31,7 @@ export default defineConfig({
   cacheDir: process.env.DAMPBOOK_CACHE ?? './node_modules/.astro',
   trailingSlash: 'always',
   build: { format: 'directory' },
-  markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'warn' }]] },
+  markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'warn' }], focusableDisplays] },
   // optimize: without it, math-heavy sites exhaust the heap (hundreds of KaTeX trees per page)
   integrations: [mdx({ optimize: true })],
   devToolbar: { enabled: false },
