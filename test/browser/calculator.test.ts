@@ -1,4 +1,7 @@
 /** Real Chromium against the built site served on 127.0.0.1: the oscillator page end to end. */
+// Sources of the numbers checked here: closed forms of Rao, Mechanical Vibrations, 6th ed., §2.6
+// (ωn = √(k/m), ζ = c/2√(km); provenance: closed form) and NIST SP 811 (2008), Appendix B.8
+// (1 lb = 0.45359237 kg; published).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser } from 'playwright-core';
 import { serveStatic, type Served } from '../../src/server/staticServer.ts';

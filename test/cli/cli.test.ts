@@ -1,4 +1,7 @@
 /** The command line: contract outputs, errors naming the input, no stack traces. */
+// Source of the numbers checked here: closed forms of Rao, Mechanical Vibrations, 6th ed., §2.6
+// (ωn = √(k/m) = 20 rad/s, ζ = c/2√(km) = 0.1 for 10 kg, 4 kN/m, 40 N·s/m; provenance: closed form),
+// and NIST SP 811 (2008) Appendix B.8 for the pound (published).
 import { execFileSync, spawnSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { main } from '../../src/cli/main.ts';

@@ -3,6 +3,7 @@
  * hostile records are refused with one clear message. Reference values are the closed forms of
  * the oscillator (Rao, Mechanical Vibrations, 6th ed., §2.6; closed form).
  */
+// Source of the numbers checked: Rao, Mechanical Vibrations, 6th ed., §2.6 closed forms (see above).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/calculators/evaluate.ts';

@@ -1,3 +1,5 @@
+// Source: the rules of complex arithmetic, Abramowitz & Stegun, Handbook of Mathematical Functions
+// (1964) §3.7 (from memory; provenance: closed form); properties are identities of the field.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { abs, add, arg, complex, div, mul, scale, sub } from '../../../src/core/complex/index.ts';

@@ -1,3 +1,5 @@
+// Source: least-squares line and parabola vertex closed forms, Press et al., Numerical Recipes,
+// 3rd ed. (2007) §15.2 (from memory; provenance: closed form).
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { ComputationError } from '../../../src/core/errors.ts';
