@@ -4,6 +4,7 @@ import { defineConfig } from 'astro/config';
 import mdx from '@astrojs/mdx';
 import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
+import { clientScripts } from './src/build/client-scripts.ts';
 
 const base = process.env.DAMPBOOK_BASE ?? '/';
 
@@ -33,7 +34,8 @@ export default defineConfig({
   build: { format: 'directory' },
   markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'warn' }], focusableDisplays] },
   // optimize: without it, math-heavy sites exhaust the heap (hundreds of KaTeX trees per page)
-  integrations: [mdx({ optimize: true })],
+  // clientScripts: browser code is bundled by esbuild in one pass (src/build/client-scripts.ts)
+  integrations: [mdx({ optimize: true }), clientScripts()],
   devToolbar: { enabled: false },
   vite: {
     // never inline scripts or assets: the Content-Security-Policy allows only same-origin files

@@ -4,7 +4,8 @@
  * (astro build + search index, as `npm run build` does) and the same pages without calculators
  * on a plain Astro + MDX + KaTeX project in the same run, and prints as its LAST line
  * {"pages", "dampbookSeconds", "baselineSeconds", "ratio", "peakRssMB", "searchIndexSeconds"}.
- * Peak memory is getrusage maxrss of each build process (exact, no sampling).
+ * Peak memory is getrusage maxrss of each build process (exact, no sampling). `--repeat R`
+ * (default 3) interleaves R builds of each and reports medians (times) and maxima (memory).
  */
 import { spawn } from 'node:child_process';
 import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
@@ -40,6 +41,12 @@ function runNode(script: string, args: string[], env: NodeJS.ProcessEnv, cwd = R
   });
 }
 
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
+}
+
 function cleanEnv(extra: Record<string, string>): NodeJS.ProcessEnv {
   const env: NodeJS.ProcessEnv = { ...process.env, NODE_ENV: 'production', ...extra };
   for (const k of ['BASE_URL', 'MODE', 'DEV', 'PROD', 'SSR']) delete env[k];
@@ -50,6 +57,8 @@ async function main(): Promise<void> {
   const n = Number(arg('pages', '100'));
   if (!Number.isInteger(n) || n < 1 || n > 5000) throw new Error('--pages must be an integer in [1, 5000]');
   const keep = process.argv.includes('--keep');
+  const repeat = Number(arg('repeat', '3'));
+  if (!Number.isInteger(repeat) || repeat < 1 || repeat > 20) throw new Error('--repeat must be an integer in [1, 20]');
   const tmp = mkdtempSync(join(tmpdir(), 'dampbook-bench-'));
   try {
     // the same generated pages, twice: as Dampbook pages and as plain MDX pages
@@ -68,22 +77,39 @@ async function main(): Promise<void> {
       writeFileSync(join(plain, 'src', 'pages', 'p', `${p.slug}.mdx`), p.plain);
     }
     const out = join(tmp, 'dist-dampbook');
-    const env = cleanEnv({ DAMPBOOK_CONTENT: join(tmp, 'content'), DAMPBOOK_OUT: out });
+    // each build starts cold: its own content cache, removed before every run (baseline: see baselineConfig)
+    const cache = join(tmp, 'cache-dampbook');
+    const env = cleanEnv({ DAMPBOOK_CONTENT: join(tmp, 'content'), DAMPBOOK_OUT: out, DAMPBOOK_CACHE: cache });
     process.stderr.write(`bench:build: ${n} pages in ${tmp} (load average ${loadavg().map((x) => x.toFixed(1)).join(' ')})\n`);
 
-    const astro = await runNode(join(ROOT, 'bench/lib/astro-build-child.mjs'), [ROOT], env);
-    process.stderr.write(`  dampbook astro build ${astro.wallSeconds.toFixed(1)} s (CPU ${astro.cpuSeconds.toFixed(1)} s), peak ${(astro.maxRssKB / 1024).toFixed(0)} MB\n`);
-    const index = await runNode(join(ROOT, 'bench/lib/index-child.mjs'), [], env);
-    process.stderr.write(`  search index ${index.wallSeconds.toFixed(1)} s (CPU ${index.cpuSeconds.toFixed(1)} s, Node side), peak ${(index.maxRssKB / 1024).toFixed(0)} MB\n`);
-    const base = await runNode(join(ROOT, 'bench/lib/astro-build-child.mjs'), [plain], cleanEnv({}), plain);
-    process.stderr.write(`  baseline astro build ${base.wallSeconds.toFixed(1)} s (CPU ${base.cpuSeconds.toFixed(1)} s), peak ${(base.maxRssKB / 1024).toFixed(0)} MB\n`);
+    // Interleaved repeats (Dampbook, index, baseline; again …): a shared or throttled machine
+    // drifts by ±15 % between single builds; medians of interleaved runs compare like with like.
+    const runs: { astro: ChildRun; index: ChildRun; base: ChildRun }[] = [];
+    for (let r = 0; r < repeat; r++) {
+      rmSync(out, { recursive: true, force: true });
+      rmSync(join(plain, 'dist'), { recursive: true, force: true });
+      rmSync(cache, { recursive: true, force: true });
+      rmSync(join(plain, '.astro-cache'), { recursive: true, force: true });
+      const astro = await runNode(join(ROOT, 'bench/lib/astro-build-child.mjs'), [ROOT], env);
+      const index = await runNode(join(ROOT, 'bench/lib/index-child.mjs'), [], env);
+      const base = await runNode(join(ROOT, 'bench/lib/astro-build-child.mjs'), [plain], cleanEnv({}), plain);
+      process.stderr.write(`  run ${r + 1}/${repeat}: dampbook astro build ${astro.wallSeconds.toFixed(1)} s (CPU ${astro.cpuSeconds.toFixed(1)} s, peak ${(astro.maxRssKB / 1024).toFixed(0)} MB) + search index ${index.wallSeconds.toFixed(1)} s; baseline ${base.wallSeconds.toFixed(1)} s (CPU ${base.cpuSeconds.toFixed(1)} s, peak ${(base.maxRssKB / 1024).toFixed(0)} MB)\n`);
+      runs.push({ astro, index, base });
+    }
+    const med = (f: (r: typeof runs[number]) => number) => median(runs.map(f));
+    const astro = { wallSeconds: med((r) => r.astro.wallSeconds), cpuSeconds: med((r) => r.astro.cpuSeconds), maxRssKB: Math.max(...runs.map((r) => r.astro.maxRssKB)) };
+    const index = { wallSeconds: med((r) => r.index.wallSeconds), maxRssKB: Math.max(...runs.map((r) => r.index.maxRssKB)) };
+    const base = { wallSeconds: med((r) => r.base.wallSeconds), cpuSeconds: med((r) => r.base.cpuSeconds), maxRssKB: Math.max(...runs.map((r) => r.base.maxRssKB)) };
+    const ratios = runs.map((r) => (r.astro.wallSeconds + r.index.wallSeconds) / r.base.wallSeconds);
 
-    const dampbookSeconds = astro.wallSeconds + index.wallSeconds;
+    const dampbookSeconds = med((r) => r.astro.wallSeconds + r.index.wallSeconds);
     const result = {
       pages: n,
       dampbookSeconds: Number(dampbookSeconds.toFixed(2)),
       baselineSeconds: Number(base.wallSeconds.toFixed(2)),
       ratio: Number((dampbookSeconds / base.wallSeconds).toFixed(3)),
+      repeats: repeat,
+      ratioPerRun: ratios.map((x) => Number(x.toFixed(3))),
       peakRssMB: Math.round(Math.max(astro.maxRssKB, index.maxRssKB) / 1024),
       searchIndexSeconds: Number(index.wallSeconds.toFixed(2)),
       dampbookAstroSeconds: Number(astro.wallSeconds.toFixed(2)),

@@ -6,5 +6,5 @@ import { pageSchema } from './content/schema.ts';
 // DAMPBOOK_CONTENT builds another content folder (a test builds a deliberately broken copy; the
 // build-scaling benchmark builds generated pages).
 export const collections = {
-  pages: defineCollection({ loader: glob({ pattern: '**/[^_]*.mdx', base: process.env.DAMPBOOK_CONTENT ?? './content' }), schema: pageSchema }),
+  pages: defineCollection({ loader: glob({ pattern: '**/[^_]*.mdx', base: process.env.DAMPBOOK_CONTENT ?? './content', retainBody: false }), schema: pageSchema }),
 };

@@ -6,3 +6,9 @@ declare module '*.astro' {
   const Component: AstroComponentFactory;
   export default Component;
 }
+
+// URLs of the browser bundles (src/build/client-scripts.ts), under the site base.
+declare module 'virtual:dampbook/client' {
+  const urls: Readonly<Record<import('./build/client-scripts.ts').ClientEntry, string>>;
+  export default urls;
+}

@@ -70,6 +70,7 @@ import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
 export default defineConfig({
   outDir: './dist',
+  cacheDir: './.astro-cache',
   markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'warn' }]] },
   integrations: [mdx({ optimize: true })],
   devToolbar: { enabled: false },

@@ -7,7 +7,7 @@ import { dutyCalculators } from './duty/index.ts';
 import { thermalCalculators } from './thermal/index.ts';
 import type { CalculatorDefinition } from './types.ts';
 
-/** Domains are also the client's lazy-loading unit: a page loads only its calculator's domain. */
+/** Domains group the calculators (pages, CLI listing); the browser loads single calculators (loaders.ts). */
 export const domains = { vibration: vibrationCalculators, duty: dutyCalculators, thermal: thermalCalculators } as const;
 export type Domain = keyof typeof domains;
 

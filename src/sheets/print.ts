@@ -34,7 +34,7 @@ export class SheetError extends Error {
 function htmlFiles(dir: string, out: string[] = []): string[] {
   for (const n of readdirSync(dir)) {
     const p = join(dir, n);
-    if (statSync(p).isDirectory()) { if (n !== 'pagefind' && n !== '_astro') htmlFiles(p, out); } else if (n === 'index.html') out.push(p);
+    if (statSync(p).isDirectory()) { if (n !== 'pagefind' && n !== '_astro' && n !== '_db') htmlFiles(p, out); } else if (n === 'index.html') out.push(p);
   }
   return out;
 }

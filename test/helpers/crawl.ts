@@ -15,7 +15,7 @@ export function builtPages(root: string, base: string): string[] {
   const walk = (dir: string): void => {
     for (const n of readdirSync(dir)) {
       const p = join(dir, n);
-      if (statSync(p).isDirectory()) { if (n !== 'pagefind' && n !== '_astro') walk(p); continue; }
+      if (statSync(p).isDirectory()) { if (n !== 'pagefind' && n !== '_astro' && n !== '_db') walk(p); continue; }
       if (!n.endsWith('.html')) continue;
       const rel = relative(root, p).split(sep).join('/');
       out.push(base + (rel === 'index.html' ? '' : rel.endsWith('/index.html') ? rel.slice(0, -'index.html'.length) : rel));
@@ -127,4 +127,26 @@ export async function pool<T, R>(items: readonly T[], n: number, fn: (t: T) => P
     while (next < items.length) { const i = next++; out[i] = await fn(items[i]!); }
   }));
   return out;
+}
+
+/**
+ * Script files a page loads at once: its <script src> and modulepreload links, plus every module
+ * they import statically (followed through the files); dynamic import() chunks load later and are
+ * not counted. Paths are URL paths under `base`.
+ */
+export function loadedScripts(root: string, base: string, pagePath: string): string[] {
+  const html = readFileSync(fileFor(root, base, pagePath)!, 'utf8');
+  const todo = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*rel="modulepreload"[^>]*\shref)="([^"]+)"/g)].map((m) => m[1]!);
+  const seen = new Set<string>();
+  while (todo.length) {
+    const path = todo.pop()!;
+    if (seen.has(path)) continue;
+    seen.add(path);
+    const code = readFileSync(fileFor(root, base, path)!, 'utf8');
+    // static forms only: `import x from "…"`, `import "…"`, `export … from "…"` (not `import(`)
+    for (const m of code.matchAll(/(?:^|[;\s}])(?:import|export)\s*(?:[\w$*{},\s]+?\s*from\s*)?["']([^"']+\.m?js)["']/g)) {
+      todo.push(new URL(m[1]!, `http://x${path}`).pathname);
+    }
+  }
+  return [...seen];
 }

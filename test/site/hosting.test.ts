@@ -8,7 +8,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { gunzipSync, gzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
-import { builtPages, fileFor } from '../helpers/crawl.ts';
+import { builtPages, fileFor, loadedScripts } from '../helpers/crawl.ts';
 import { prosePages } from '../helpers/calcPages.ts';
 import { ROOT_BUILD, SUB_BASE, SUB_BUILD } from '../helpers/site.ts';
 
@@ -60,12 +60,20 @@ describe('search index', () => {
 });
 
 describe('JavaScript a prose page loads', () => {
+  it('is counted with the modules its scripts import statically (the counter follows imports)', () => {
+    const calc = builtPages(ROOT_BUILD, '/').find((p) => readFileSync(fileFor(ROOT_BUILD, '/', p)!, 'utf8').includes('<db-calculator'));
+    expect(calc).toBeDefined();
+    const html = readFileSync(fileFor(ROOT_BUILD, '/', calc!)!, 'utf8');
+    const tags = [...html.matchAll(/<script[^>]*\ssrc="([^"]+)"/g)].length;
+    expect(loadedScripts(ROOT_BUILD, '/', calc!).length).toBeGreaterThan(tags);
+  });
+
+
   it('is only the search loader, at most 5 KB gzip', () => {
     const pages = prosePages(ROOT_BUILD, '/');
     expect(pages.length).toBeGreaterThan(0);
     for (const path of pages) {
-      const html = readFileSync(fileFor(ROOT_BUILD, '/', path)!, 'utf8');
-      const scripts = [...html.matchAll(/<(?:script[^>]*\ssrc|link[^>]*rel="modulepreload"[^>]*\shref)="([^"]+)"/g)].map((m) => m[1]!);
+      const scripts = loadedScripts(ROOT_BUILD, '/', path);
       let gz = 0;
       for (const s of scripts) gz += gzipSync(readFileSync(fileFor(ROOT_BUILD, '/', s)!)).length;
       expect(gz, `${path}: ${scripts.join(', ')}`).toBeLessThanOrEqual(5 * 1024);

@@ -1,4 +1,4 @@
-import { halfPowerDamping, type HalfPowerResponse } from '../../core/vibration/index.ts';
+import { halfPowerDamping, halfPowerPeakFrequency, type HalfPowerResponse } from '../../core/vibration/index.ts';
 import { choice, defineCalculator, num } from '../types.ts';
 
 /** Damping ratio from the half-power bandwidth of a measured resonance. */
@@ -25,7 +25,7 @@ export const halfPowerCalc = defineCalculator({
     const response = choice<HalfPowerResponse>(values, 'response');
     const r = halfPowerDamping(f1, f2, fp, response);
     const warnings: string[] = [];
-    const centre = response === 'velocity' ? Math.sqrt(f1 * f2) : response === 'acceleration' ? 1 / Math.sqrt((1 / (f1 * f1) + 1 / (f2 * f2)) / 2) : Math.sqrt((f1 * f1 + f2 * f2) / 2);
+    const centre = halfPowerPeakFrequency(f1, f2, response);
     if (Math.abs(fp - centre) > 0.1 * (f2 - f1)) {
       warnings.push(`An SDOF resonance would peak at ${centre.toPrecision(4)} Hz for these half-power points, not ${fp.toPrecision(4)} Hz: check the readings, the response type, or a neighbouring mode.`);
     }

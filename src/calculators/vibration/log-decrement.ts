@@ -1,4 +1,4 @@
-import { logDecrementFromPeaks, zetaFromLogDecrement } from '../../core/vibration/index.ts';
+import { logDecrementFromPeaks, naturalFromDampedPeriod, zetaFromLogDecrement } from '../../core/vibration/index.ts';
 import { defineCalculator, num, optNum } from '../types.ts';
 
 /** Damping ratio from two peaks of a free decay n cycles apart. */
@@ -27,7 +27,7 @@ export const logDecrementCalc = defineCalculator({
     const zeta = zetaFromLogDecrement(delta);
     const Td = optNum(values, 'Td');
     const m = optNum(values, 'm');
-    const wn = Td === undefined ? undefined : (2 * Math.PI) / Td / Math.sqrt(1 - zeta * zeta);
+    const wn = Td === undefined ? undefined : naturalFromDampedPeriod(Td, zeta);
     const warnings: string[] = [];
     if (zeta > 0.05) warnings.push(`ζ = ${zeta.toPrecision(3)}: the small-damping form δ/2π is ${((delta / (2 * Math.PI) / zeta - 1) * 100).toPrecision(2)} % high; use the exact value.`);
     if (m !== undefined && Td === undefined) warnings.push('The mass alone does not give k or c: enter the damped period T_d as well.');

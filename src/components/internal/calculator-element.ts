@@ -1,6 +1,6 @@
 /**
  * <db-calculator>: upgrades a server-rendered calculator (inputs, default results, static
- * charts) into a live one. It loads only its calculator's domain, re-reads every field on each
+ * charts) into a live one. It loads only its own calculator's definition, re-reads every field on each
  * change, shows a message at a bad field and leaves the rest of the page alone, keeps the
  * inputs in the page URL, and hands charts to the chart element. No calculator logic here:
  * everything comes from the definition.
@@ -12,12 +12,7 @@ import { findUnit, fromSI, parseQuantity, type UnitSystem } from '../../core/uni
 import { displayUnit, formatInput, formatNumber } from './format.ts';
 import { parseTyped, readField } from './fieldState.ts';
 
-type Loader = () => Promise<readonly CalculatorDefinition[]>;
-const loaders: Record<string, Loader> = {
-  vibration: () => import('../../calculators/vibration/index.ts').then((m) => m.vibrationCalculators),
-  duty: () => import('../../calculators/duty/index.ts').then((m) => m.dutyCalculators),
-  thermal: () => import('../../calculators/thermal/index.ts').then((m) => m.thermalCalculators),
-};
+import { calculatorLoaders } from '../../calculators/loaders.ts';
 
 /** URL parameters longer than this are ignored (untrusted input; no field needs more). */
 const MAX_PARAM = 200;
@@ -32,8 +27,8 @@ export class CalculatorElement extends HTMLElement {
   outputs: Outputs | undefined;
 
   async connectedCallback(): Promise<void> {
-    const list = await loaders[this.dataset.domain ?? '']?.();
-    this.calc = list?.find((c) => c.id === this.dataset.calc);
+    const id = this.dataset.calc ?? '';
+    this.calc = Object.hasOwn(calculatorLoaders, id) ? await calculatorLoaders[id]!() : undefined;
     if (!this.calc) return;
     this.applyUrl();
     this.addEventListener('submit', (e) => e.preventDefault());

@@ -50,3 +50,24 @@ export function halfPowerDamping(f1: number, f2: number, fp: number, response: H
   }
   return { zeta, zetaSmall, fn, Q: 1 / (2 * zeta) };
 }
+
+/**
+ * The peak frequency an SDOF resonance must have for the given half-power points — a check on
+ * the readings (a wrong response type or a neighbouring mode shows as a mismatch). Exact under
+ * the M_max/√2 convention, from the roots $r_{1,2}^2 = 1-2\zeta^2 \mp 2\zeta\sqrt{1-\zeta^2}$:
+ * $$f_p^2 = \tfrac12(f_1^2+f_2^2)\ \text{(displacement)},\qquad f_p^2 = f_1 f_2\ \text{(velocity)},\qquad
+ *   f_p^{-2} = \tfrac12(f_1^{-2}+f_2^{-2})\ \text{(acceleration)}$$
+ *
+ * @param f1 lower half-power frequency, Hz, (0, f2)
+ * @param f2 upper half-power frequency, Hz
+ * @returns the implied peak frequency, Hz
+ * @example halfPowerPeakFrequency(0.946111, 1.046363) // 0.997497
+ * @source rao2017 §3.4 magnification factor, solving M(r) = M_max/√2 for r² (closed form; section from memory)
+ */
+export function halfPowerPeakFrequency(f1: number, f2: number, response: HalfPowerResponse = 'displacement'): number {
+  requireInRange('f1', f1, POSITIVE, 'Hz');
+  requireInRange('f2', f2, POSITIVE, 'Hz');
+  if (response === 'velocity') return Math.sqrt(f1 * f2);
+  if (response === 'acceleration') return 1 / Math.sqrt((1 / (f1 * f1) + 1 / (f2 * f2)) / 2);
+  return Math.sqrt((f1 * f1 + f2 * f2) / 2);
+}

@@ -3,6 +3,7 @@ export { naturalFrequency } from './naturalFrequency.ts';
 export { criticalDamping } from './criticalDamping.ts';
 export { dampingRatio } from './dampingRatio.ts';
 export { dampedFrequency } from './dampedFrequency.ts';
+export { naturalFromDampedPeriod } from './naturalFromDamped.ts';
 export { logDecrementFromZeta, zetaFromLogDecrement } from './logDecrement.ts';
 export { qualityFactor } from './qualityFactor.ts';
 export { dampingRegime, CRITICAL_BAND, type DampingRegime } from './regime.ts';
@@ -13,7 +14,7 @@ export { transmissibility, relativeMotionRatio, baseMotionPhaseLag } from './tra
 export { displacementPeak, transmissibilityPeak } from './peakResponse.ts';
 export { forcedResponse, type Excitation, type ForcedSdof, type ForcedResponse } from './forcedResponse.ts';
 export { logDecrementFromPeaks } from './logDecrementFromPeaks.ts';
-export { halfPowerDamping, type HalfPowerResponse, type HalfPowerResult } from './halfPower.ts';
+export { halfPowerDamping, halfPowerPeakFrequency, type HalfPowerResponse, type HalfPowerResult } from './halfPower.ts';
 export { decayPeaks, type DecayPeak, type DecayPeaks } from './decayPeaks.ts';
 export { ringDown, type RingDownFit } from './ringDown.ts';
 export { tmdTuning, type TmdExcitation, type TmdTuning } from './tmdTuning.ts';

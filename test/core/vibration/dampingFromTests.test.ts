@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { InputRangeError } from '../../../src/core/errors.ts';
-import { halfPowerDamping, logDecrementFromPeaks, logDecrementFromZeta, zetaFromLogDecrement } from '../../../src/core/vibration/index.ts';
+import { dampedFrequency, halfPowerDamping, halfPowerPeakFrequency, logDecrementFromPeaks, logDecrementFromZeta, naturalFromDampedPeriod, zetaFromLogDecrement } from '../../../src/core/vibration/index.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('logDecrementFromPeaks', () => {
@@ -65,5 +65,35 @@ describe('halfPowerDamping', () => {
   it('refuses half-power points that do not bracket the peak', () => {
     expect(() => halfPowerDamping(1.1, 1.2, 1)).toThrow(/'f1'/);
     expect(() => halfPowerDamping(0.9, 0.95, 1)).toThrow(/'f2'/);
+  });
+});
+
+describe('halfPowerPeakFrequency', () => {
+  it('gives the peak of the ζ = 0.05 resonance, 0.997497, from its half-power points (closed form from the magnification factor, Rao 6th ed. §3.4, from memory)', () => {
+    expectClose({ label: 'f_p', computed: halfPowerPeakFrequency(0.946111, 1.046363), expected: 0.997497, tol: 2e-6, why: 'points given to 6 decimals' });
+  });
+  it('is the peak of every SDOF response type the points came from (closed form: r² roots of M = M_max/√2)', () => {
+    fc.assert(fc.property(fc.double({ min: 1e-3, max: 0.38, noNaN: true }), fc.double({ min: 0.1, max: 1e3, noNaN: true }), (z, fn) => {
+      const s = 2 * z * Math.sqrt(1 - z * z);
+      const rp2 = 1 - 2 * z * z;
+      const disp = halfPowerPeakFrequency(fn * Math.sqrt(rp2 - s), fn * Math.sqrt(rp2 + s));
+      const acc = halfPowerPeakFrequency(fn / Math.sqrt(rp2 + s), fn / Math.sqrt(rp2 - s), 'acceleration');
+      const vel = halfPowerPeakFrequency(fn * (Math.sqrt(1 + z * z) - z), fn * (Math.sqrt(1 + z * z) + z), 'velocity');
+      return Math.abs(disp / (fn * Math.sqrt(rp2)) - 1) < 1e-10 && Math.abs(acc / (fn / Math.sqrt(rp2)) - 1) < 1e-10 && Math.abs(vel / fn - 1) < 1e-10;
+    }));
+  });
+});
+
+describe('naturalFromDampedPeriod', () => {
+  it('inverts ω_d = ω_n√(1−ζ²) (Rao 6th ed. §2.6.2, from memory): T_d of ω_n = 20 rad/s at ζ = 0.1 gives 20 rad/s', () => {
+    expectClose({ label: 'ω_n', computed: naturalFromDampedPeriod((2 * Math.PI) / dampedFrequency(20, 0.1), 0.1), expected: 20, tol: 1e-14, why: 'closed form, same arithmetic' });
+  });
+  it('round-trips any ω_n and ζ < 1 through the damped period', () => {
+    fc.assert(fc.property(fc.double({ min: 1e-3, max: 1e4, noNaN: true }), fc.double({ min: 0, max: 0.99, noNaN: true }), (wn, z) =>
+      Math.abs(naturalFromDampedPeriod((2 * Math.PI) / dampedFrequency(wn, z), z) / wn - 1) < 1e-12));
+  });
+  it('refuses a damping ratio of 1 or more (no period) and a non-positive period', () => {
+    expect(() => naturalFromDampedPeriod(1, 1)).toThrow(/'zeta'/);
+    expect(() => naturalFromDampedPeriod(0, 0.1)).toThrow(/'Td'/);
   });
 });
