@@ -42,8 +42,8 @@ export function parsePowerProfile(text: string, input = 'profile'): PowerProfile
     if (entry === '' || entry.startsWith('#')) continue;
     if (end !== undefined) fail(line, entry, 'an entry after the end time (the end time alone must come last)');
     const fields = entry.split(/[\s,]+/);
-    if (fields.length > 2) fail(line, entry, 'expected "time, power" or the end time alone');
     if (!fields.every((f) => NUMBER.test(f))) fail(line, entry, 'not a number (write seconds and watts as digits, e.g. 600, 120)');
+    if (fields.length > 2) fail(line, entry, 'expected "time, power" or the end time alone');
     const [ti, Pi] = fields.map(Number) as [number, number | undefined];
     if (!Number.isFinite(ti) || ti < 0 || ti > MAX_PROFILE_TIME) fail(line, entry, `time must be between 0 and ${MAX_PROFILE_TIME} s`);
     if (t.length === 0 && ti !== 0) fail(line, entry, 'the first entry must start at time 0');
