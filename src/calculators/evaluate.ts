@@ -130,7 +130,18 @@ export function evaluate(calc: CalculatorDefinition, raw: Readonly<Record<string
       throw new ComputationError(`${calc.id}: output '${def.key}' is not finite for these inputs`);
     }
   }
+  checkHandoff(calc, result);
   return { ...result, values };
+}
+
+/** Hand-off strings: declared keys only, text, within the declared length. */
+function checkHandoff(calc: CalculatorDefinition, result: Result): void {
+  if (result.handoff === undefined) return;
+  for (const [key, v] of Object.entries(result.handoff)) {
+    const def = calc.handoffs?.find((h) => h.key === key);
+    if (!def) throw new ComputationError(`${calc.id}: hand-off '${key}' is not declared`);
+    if (typeof v !== 'string' || v.length > def.maxLength) throw new ComputationError(`${calc.id}: hand-off '${key}' is not text of at most ${def.maxLength} characters`);
+  }
 }
 
 /** Default values of every input (SI), as the page pre-fills them. */

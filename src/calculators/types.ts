@@ -56,6 +56,12 @@ export interface TextInput {
   readonly rows?: number;
   readonly required?: boolean;
   readonly when?: { readonly key: string; readonly is: readonly string[] };
+  /**
+   * When true the page fills this input from its address (`?key=…`, as a feed link from another
+   * page does), through the same checks as typing, shown as text. Keep maxLength small (a few
+   * thousand characters) for such inputs. Without it text in the address is ignored.
+   */
+  readonly fromUrl?: boolean;
 }
 
 export type InputDef = NumberInput | ChoiceInput | TextInput;
@@ -74,7 +80,33 @@ export interface OutputDef {
    * Pages whose calculator takes this output as an input: the widget shows a link that opens
    * that page with the value filled in (e.g. a duty page's mean power → the thermal pages).
    */
-  readonly feeds?: readonly { readonly page: string; readonly input: string; readonly label: string }[];
+  readonly feeds?: readonly FeedDef[];
+}
+
+/**
+ * A link from an output to another page's calculator (the query is built by feedQuery in feeds.ts).
+ * `input` receives this output's value; `with` fills more target inputs from this calculator
+ * (target key → a key of this calculator's outputs, inputs or hand-offs, looked up in that order);
+ * `set` fills target inputs with constants (e.g. a choice value). The link is hidden while any
+ * source is absent.
+ */
+export interface FeedDef {
+  readonly page: string;
+  readonly input: string;
+  readonly label: string;
+  readonly with?: Readonly<Record<string, string>>;
+  readonly set?: Readonly<Record<string, string>>;
+}
+
+/**
+ * A value compute hands to other pages but does not display (e.g. a power profile as text for
+ * the warm-up page). Declared so feeds can be checked and evaluate() can bound it.
+ */
+export interface HandoffDef {
+  readonly key: string;
+  readonly help: string;
+  /** Longest value in characters; evaluate() refuses a longer one. */
+  readonly maxLength: number;
 }
 
 /** Values handed to compute: SI numbers, or the chosen option of a choice input. */
@@ -116,6 +148,8 @@ export interface Result {
   readonly outputs: Outputs;
   /** Validity warnings (e.g. a correlation used outside its range). Shown beside the results. */
   readonly warnings: readonly string[];
+  /** Hand-off strings for feeds (declared in `handoffs`); never displayed. */
+  readonly handoff?: Readonly<Record<string, string>>;
 }
 
 export interface VerificationCase {
@@ -141,6 +175,8 @@ export interface CalculatorDefinition {
   charts?(values: Values, result: Result): ChartSpec[];
   readonly verification: readonly VerificationCase[];
   readonly sources: readonly SourceRef[];
+  /** Hand-off values compute may return in `Result.handoff` (see HandoffDef). */
+  readonly handoffs?: readonly HandoffDef[];
 }
 
 /** Identity with checking: keeps the literal types and catches typos in keys at compile time. */

@@ -139,6 +139,87 @@ describe('pasted and uploaded CSV text', () => {
   }
 });
 
+describe('text filled from the page address (fromUrl)', () => {
+  // Text inputs that accept the address, with the choices that show them (e.g. warm-up's profile
+  // under power=profile). Each value goes through the same parser as typing and is shown as text.
+  const fromUrl = pages.flatMap((p) => p.calcs.flatMap((id) => (getCalculator(id)?.inputs ?? [])
+    .filter((d) => d.kind === 'text' && d.fromUrl).map((d) => ({ path: p.path, id, def: d }))));
+  it('exists on the warm-up page (the profile handed over by the duty pages)', () => {
+    expect(fromUrl.some((x) => x.id === 'warm-up' && x.def.key === 'profile')).toBe(true);
+  });
+  for (const { path, id, def } of fromUrl) {
+    const show = def.when ? `${def.when.key}=${encodeURIComponent(def.when.is[0]!)}&` : '';
+    it(`shows ${id}.${def.key} payloads as text with a message naming the line, and leaves the prototype alone, on ${path}`, async () => {
+      const base = await watchedPage(browser, server.origin);
+      await base.page.goto(`${server.origin}${path}?${show}`);
+      await ready(base.page);
+      const expected = await fingerprint(base.page);
+      await base.page.context().close();
+      for (const payload of [...PAYLOADS, '__proto__', '0,1\n<script>alert(6)</script>,2\n5']) {
+        const w = await watchedPage(browser, server.origin);
+        const url = `${server.origin}${path}?${show}${def.key}=${encodeURIComponent(payload)}&__proto__[x]=1&constructor[prototype][y]=1&__proto__.polluted=1`;
+        await w.page.goto(url);
+        await ready(w.page);
+        const field = w.page.locator(`db-calculator[data-calc="${id}"] .field[data-key="${def.key}"]`);
+        expect(await field.locator('textarea').inputValue(), payload).toBe(payload);
+        await expect.poll(() => field.locator('.msg').textContent()).toMatch(/line \d+/);
+        expect(await fingerprint(w.page), payload).toEqual(expected);
+        expect(await w.page.locator('.calc-results').allInnerTexts()).not.toContainEqual(expect.stringMatching(/NaN|Infinity/));
+        clean(w);
+        await w.page.context().close();
+      }
+    });
+
+    it(`ignores an oversized ${id}.${def.key} in the address (1.5 MB by address, 10 MB by a re-read address) on ${path}`, async () => {
+      const w = await watchedPage(browser, server.origin);
+      const { page } = w;
+      try {
+        await page.goto(`${server.origin}${path}?${show}`);
+        await ready(page);
+        const field = page.locator(`db-calculator[data-calc="${id}"] .field[data-key="${def.key}"]`);
+        const dflt = await field.locator('textarea').inputValue();
+        // Node's HTTP server refuses long request lines: serve the page from disk (as above)
+        await page.route((u) => u.search.length > 10_000, (route) => route.fulfill({ path: fileFor(ROOT_BUILD, '/', path)!, contentType: 'text/html' }));
+        await page.goto(`${server.origin}${path}?${show}${def.key}=${'9'.repeat(1_500_000)}`);
+        await ready(page);
+        expect(await field.locator('textarea').inputValue()).toBe(dflt);
+        // Chromium refuses addresses over 2 MB, so a 10 MB value cannot arrive by navigation; put it in
+        // the address in place if the browser allows it, and let a fresh widget read it
+        const took = await page.evaluate(({ key }) => {
+          try { history.replaceState(null, '', `${location.pathname}${location.search.split('&')[0]}&${key}=${'x'.repeat(10_000_000)}`); } catch { return false; }
+          const el = document.querySelector('db-calculator')!;
+          const fresh = el.cloneNode(true) as HTMLElement;
+          fresh.removeAttribute('data-ready');
+          el.replaceWith(fresh);
+          return location.search.length > 1_000_000;
+        }, { key: def.key });
+        await ready(page);
+        expect(await field.locator('textarea').inputValue(), `10 MB in the address: ${took ? 'read and ignored' : 'refused by the browser'}`).toBe(dflt);
+        clean(w);
+      } finally {
+        await page.context().close();
+      }
+    });
+  }
+
+  it('fills the warm-up page from a recorded-motion hand-off link and computes the mean power it carries', async () => {
+    const w = await watchedPage(browser, server.origin);
+    const { page } = w;
+    await page.goto(`${server.origin}/duty/recorded-motion/`);
+    await ready(page);
+    const link = page.locator('a[data-feed-out="P"]', { hasText: 'Warm-up' });
+    const href = await link.getAttribute('href');
+    expect(new URL(href!, server.origin).searchParams.get('power')).toBe('profile');
+    const P = (await page.locator('tr[data-out="P"] .value').textContent())!;
+    await link.click();
+    await ready(page);
+    expect(await page.locator('.field[data-key="power"] select').inputValue()).toBe('profile');
+    await expect.poll(() => page.locator('tr[data-out="Pmean"] .value').textContent()).toBe(P);
+    clean(w);
+    await page.context().close();
+  });
+});
+
 describe('search queries with HTML', () => {
   it('are shown as text in the result list, never as markup', async () => {
     const w = await watchedPage(browser, server.origin);

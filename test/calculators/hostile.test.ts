@@ -10,7 +10,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/calculators/evaluate.ts';
 import { calculators } from '../../src/calculators/registry.ts';
-import type { CalculatorDefinition, ChartSpec, Result } from '../../src/calculators/types.ts';
+import { feedQuery } from '../../src/calculators/feeds.ts';
+import type { CalculatorDefinition, ChartSpec, Result, Values } from '../../src/calculators/types.ts';
 import { DampbookError, InputRangeError } from '../../src/core/errors.ts';
 import { describeValue, HOSTILE_TEXT, HOSTILE_VALUES, validRecord } from './hostile.arbitraries.ts';
 
@@ -38,6 +39,20 @@ function expectClean(calc: CalculatorDefinition, r: Result): void {
     if (typeof v === 'string') expect(v).not.toMatch(/NaN|Infinity|undefined/);
   }
   for (const w of r.warnings) expect(w).not.toMatch(/NaN|Infinity|undefined/);
+  // hand-off strings: declared, text within their length, never NaN; feed links build or stay hidden
+  for (const [k, v] of Object.entries(r.handoff ?? {})) {
+    const def = calc.handoffs?.find((h) => h.key === k);
+    expect(def, `${calc.id} hand-off '${k}' declared`).toBeDefined();
+    expect(typeof v === 'string' && v.length <= def!.maxLength, `${calc.id} hand-off '${k}'`).toBe(true);
+    expect(v).not.toMatch(/NaN|Infinity|undefined/);
+  }
+  const values = (r as Result & { values?: Values }).values ?? {};
+  for (const o of calc.outputs) {
+    for (const f of o.feeds ?? []) {
+      const q = feedQuery(f, o.key, { values, outputs: r.outputs, handoff: r.handoff });
+      if (q !== undefined) expect(q, `${calc.id}.${o.key} → ${f.page}`).not.toMatch(/NaN|Infinity|undefined/);
+    }
+  }
 }
 
 /** Charts drawn from a valid result: no crash, and the text alternative never says NaN. */
@@ -141,6 +156,7 @@ describe.each(calculators.map((c) => [c.id, c] as const))('calculator %s under b
       for (const t of HOSTILE_TEXT) {
         const raw: Record<string, unknown> = Object.fromEntries(calc.inputs.map((d) => [d.key, d.default]));
         raw[def.key] = t;
+        if (def.when) raw[def.when.key] = def.when.is[0]; // a text shown only for some choice is read under that choice
         const r = attempt(calc, raw);
         if (r.ok) expectClean(calc, r.result); else expectNamesInput(calc, r.error);
       }

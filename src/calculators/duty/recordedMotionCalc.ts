@@ -1,4 +1,5 @@
-import { parseRecordedMotion, recordedMotion, type ColumnLayout } from '../../core/duty/index.ts';
+import { blockPower, MAX_POWER_BLOCKS, parseRecordedMotion, recordedMotion, type ColumnLayout } from '../../core/duty/index.ts';
+import { formatPowerProfile } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { demoDynoRecord, sineRecord } from './demoRecord.ts';
 import { lawFromValues, lawInputs } from './lawInputs.ts';
@@ -42,7 +43,10 @@ export const recordedMotionCalc = defineCalculator({
   ],
   outputs: [
     { key: 'P', label: 'Mean power', kind: 'power', help: 'Energy of the record divided by the time it covers (gaps excluded).',
-      feeds: [{ page: 'steady-temperature', input: 'P', label: 'Check damper body temperature' }, { page: 'warm-up', input: 'P', label: 'Warm-up under this duty' }] },
+      feeds: [
+        { page: 'steady-temperature', input: 'P', label: 'Check damper body temperature' },
+        { page: 'warm-up', input: 'P', label: 'Warm-up under this duty (its power profile, repeated)', with: { profile: 'profile' }, set: { power: 'profile', after: 'repeat' } },
+      ] },
     { key: 'E', label: 'Energy of the record', kind: 'energy' },
     { key: 'duration', label: 'Time covered', kind: 'time' },
     { key: 'cycles', label: 'Cycles detected', kind: 'dimensionless', digits: 3 },
@@ -58,6 +62,7 @@ export const recordedMotionCalc = defineCalculator({
     { key: 'forceSource', label: 'Force', kind: 'text' },
     { key: 'sampling', label: 'Sampling', kind: 'text' },
   ],
+  handoffs: [{ key: 'profile', help: `Power of the record averaged over at most ${MAX_POWER_BLOCKS} equal blocks of covered time (energy kept), for the warm-up page.`, maxLength: 6000 }],
   compute(values) {
     const { rec, r } = analyse(values);
     const warnings: string[] = [];
@@ -70,6 +75,12 @@ export const recordedMotionCalc = defineCalculator({
     if (r.segments.gaps) warnings.push(`${r.segments.gaps} gap${r.segments.gaps > 1 ? 's' : ''} in the sampling: the record is treated as ${r.segments.ranges.length} separate pieces.`);
     if (r.flipped) warnings.push('The recorded force had the opposite sign to the velocity (negative mean power), so its sign was reversed.');
     if (!rec.v) warnings.push('Velocity is differentiated from displacement: noise in the displacement raises the peaks; the energy is less sensitive.');
+    // hand-off: block-averaged power (energy kept on any sampling); a block where stored energy was
+    // returned (negative mean F·v) hands over 0 W, since the damper cannot take heat back
+    const blocks = blockPower(r.t, r.p, r.segments.ranges, MAX_POWER_BLOCKS);
+    const negative = blocks.P.filter((p) => p < 0).length;
+    if (negative > 0) warnings.push(`${negative} of ${blocks.P.length} time blocks have a negative mean power (energy returned by a spring or gas force); the profile handed to the warm-up page takes them as 0 W.`);
+    const profile = formatPowerProfile({ t: blocks.t, P: blocks.P.map((p) => Math.max(0, p)) });
     const ce = r.cycleEnergies;
     const s = r.segments;
     const even = s.dtMax - s.dtMin <= 1e-6 * s.dtMedian;
@@ -84,6 +95,7 @@ export const recordedMotionCalc = defineCalculator({
         sampling: even ? `even, ${s.dtMedian.toPrecision(4)} s` : `uneven, ${s.dtMin.toPrecision(3)}–${s.dtMax.toPrecision(3)} s (median ${s.dtMedian.toPrecision(3)} s)`,
       },
       warnings,
+      handoff: { profile },
     };
   },
   charts(values, result): ChartSpec[] {

@@ -1,5 +1,6 @@
 import { adiabaticRise, storeyDampers } from '../../core/duty/index.ts';
 import { InputRangeError } from '../../core/errors.ts';
+import { formatPowerProfile } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
 
 function setup(values: Values) {
@@ -43,12 +44,17 @@ export const structuralDampers = defineCalculator({
     { key: 'betaSup', label: 'Supplemental damping ratio', kind: 'dimensionless', digits: 3 },
     { key: 'betaEff', label: 'Effective damping ratio', kind: 'dimensionless', digits: 3 },
     { key: 'P', label: 'Mean power per damper while oscillating', kind: 'power',
-      feeds: [{ page: 'warm-up', input: 'P', label: 'Damper temperature over the event' }, { page: 'steady-temperature', input: 'P', label: 'Steady temperature (long wind event)' }] },
+      feeds: [
+        { page: 'warm-up', input: 'P', label: 'Damper temperature over the event', with: { profile: 'profile', Cth: 'Cdamper' }, set: { power: 'profile', after: 'off' } },
+        { page: 'steady-temperature', input: 'P', label: 'Steady temperature (long wind event)' },
+      ] },
     { key: 'cycles', label: 'Cycles in the event', kind: 'dimensionless', digits: 3 },
     { key: 'Eevent', label: 'Energy per damper per event', kind: 'energy' },
     { key: 'dT', label: 'Adiabatic temperature rise per event', kind: 'temperatureDifference' },
     { key: 'shear', label: 'Storey shear from the dampers at peak velocity', kind: 'force' },
+    { key: 'Cdamper', label: 'Heat capacity of one damper', kind: 'heatCapacity', help: 'm_steel·c_steel + m_fluid·c_fluid (handed to the warm-up page).' },
   ],
+  handoffs: [{ key: 'profile', help: 'The event as a power profile for the warm-up page: P for the duration, then off.', maxLength: 200 }],
   compute(values) {
     const s = setup(values);
     const r = storeyDampers(s);
@@ -63,9 +69,10 @@ export const structuralDampers = defineCalculator({
       outputs: {
         stroke: r.stroke, vPeak: r.vPeak, Fpeak: r.Fpeak, Wj: r.Wj, Wtotal: s.n * r.Wj, Wk: r.Wk,
         betaSup: r.betaSup, betaEff: num(values, 'beta0') + r.betaSup, P: r.Pdamper, cycles, Eevent, dT,
-        shear: s.n * r.Fpeak * Math.cos(s.theta),
+        shear: s.n * r.Fpeak * Math.cos(s.theta), Cdamper: heat,
       },
       warnings,
+      handoff: { profile: formatPowerProfile({ t: [0, num(values, 'duration')], P: [r.Pdamper] }) },
     };
   },
   charts(values, result): ChartSpec[] {

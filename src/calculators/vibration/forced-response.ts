@@ -41,9 +41,11 @@ export const forcedResponseCalc = defineCalculator({
     { key: 'X', label: 'Mass amplitude X (absolute)', kind: 'length' },
     { key: 'phase', label: 'Phase lag of X behind the excitation', kind: 'angle' },
     { key: 'TR', label: 'Transmissibility T_R', kind: 'dimensionless', help: 'Force case: force to the base / F₀. Base case: X / Y.' },
-    { key: 'Z', label: 'Damper stroke amplitude Z (relative)', kind: 'length' },
+    { key: 'Z', label: 'Damper stroke amplitude Z (relative)', kind: 'length',
+      feeds: [{ page: 'harmonic-duty', input: 'X', label: 'Damper power under this stroke (other damper laws)', with: { f: 'f', c: 'c' }, set: { law: 'linear' } }] },
     { key: 'vrel', label: 'Damper velocity amplitude ωZ', kind: 'velocity' },
-    { key: 'P', label: 'Mean damper power ½cω²Z²', kind: 'power', feeds: [{ page: 'steady-temperature', input: 'P', label: 'Check damper body temperature' }] },
+    { key: 'P', label: 'Mean damper power ½cω²Z²', kind: 'power',
+      feeds: [{ page: 'steady-temperature', input: 'P', label: 'Check damper body temperature' }, { page: 'warm-up', input: 'P', label: 'Warm-up at this power', set: { power: 'steady' } }] },
     { key: 'Ft', label: 'Force through spring and damper', kind: 'force', help: 'Force case: T_R·F₀ (to the base). Base case: Z·√(k² + (cω)²) (to the mass).' },
   ],
   compute(values) {

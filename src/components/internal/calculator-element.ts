@@ -6,16 +6,14 @@
  * everything comes from the definition.
  */
 import { evaluate, inputOrder, isActive } from '../../calculators/evaluate.ts';
-import type { CalculatorDefinition, Outputs, Values } from '../../calculators/types.ts';
+import { feedQuery, urlValue } from '../../calculators/feeds.ts';
+import type { CalculatorDefinition, Outputs, Result, Values } from '../../calculators/types.ts';
 import { DampbookError, InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, parseQuantity, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from './format.ts';
 import { parseTyped, readField } from './fieldState.ts';
 
 import { calculatorLoaders } from '../../calculators/loaders.ts';
-
-/** URL parameters longer than this are ignored (untrusted input; no field needs more). */
-const MAX_PARAM = 200;
 
 export class CalculatorElement extends HTMLElement {
   calc: CalculatorDefinition | undefined;
@@ -58,10 +56,12 @@ export class CalculatorElement extends HTMLElement {
     const params = new URLSearchParams(location.search);
     if (params.get('units') === 'US') this.setSystem('US');
     for (const def of this.calc!.inputs) {
-      const raw = params.get(def.key);
-      if (raw === null || raw.length > MAX_PARAM || def.kind === 'text') continue;
+      // text only where the definition allows it (fromUrl), then checked like typing
+      const raw = urlValue(def, params.get(def.key));
+      if (raw === undefined) continue;
       const ctl = this.control(def.key);
       if (!ctl) continue;
+      if (def.kind === 'text') { ctl.value = raw; continue; }
       if (def.kind === 'choice') {
         if (def.options.some((o) => o.value === raw)) ctl.value = raw;
         continue;
@@ -214,6 +214,7 @@ export class CalculatorElement extends HTMLElement {
       return;
     }
     this.renderOutputs(result.outputs);
+    this.renderFeeds(result);
     this.values = result.values;
     this.outputs = result.outputs;
     const warn = this.querySelector('.calc-warnings');
@@ -244,11 +245,20 @@ export class CalculatorElement extends HTMLElement {
       const u = displayUnit(def.kind, this.system);
       cell.textContent = formatNumber(fromSI(v, u), def.digits ?? 4);
       unitCell.textContent = u.symbol;
-      for (const a of this.querySelectorAll<HTMLAnchorElement>(`a[data-feed-out="${CSS.escape(def.key)}"]`)) {
-        const url = new URL(a.href, location.href);
-        url.search = new URLSearchParams({ [a.dataset.feed!]: formatInput(v) }).toString();
-        a.href = url.pathname + url.search;
-      }
+    }
+  }
+
+  /** Rewrites each feed link from the new result (feedQuery); hides it while a source is absent. */
+  private renderFeeds(result: Result & { values: Values }): void {
+    for (const a of this.querySelectorAll<HTMLAnchorElement>('a[data-feed-out]')) {
+      const out = a.dataset.feedOut ?? '';
+      const feed = this.calc!.outputs.find((o) => o.key === out)?.feeds?.[Number(a.dataset.feedIndex)];
+      const query = feed ? feedQuery(feed, out, result) : undefined;
+      a.hidden = query === undefined;
+      if (query === undefined) continue;
+      const url = new URL(a.href, location.href);
+      url.search = query;
+      a.href = url.pathname + url.search;
     }
   }
 
@@ -256,7 +266,7 @@ export class CalculatorElement extends HTMLElement {
     const params = new URLSearchParams(location.search);
     for (const def of this.calc!.inputs) {
       const v = values[def.key];
-      if (def.kind === 'text' || v === undefined) params.delete(def.key);
+      if ((def.kind === 'text' && !def.fromUrl) || v === undefined) params.delete(def.key);
       else params.set(def.key, typeof v === 'number' ? formatInput(v) : v);
     }
     if (this.system === 'US') params.set('units', 'US'); else params.delete('units');

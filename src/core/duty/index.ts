@@ -14,5 +14,6 @@ export { storeyDampers, adiabaticRise, type StoreyDampers, type StoreyDamperResu
 export { parseRecordedMotion, type ParsedRecord, type RejectedRow } from './recordedMotionCsv.ts';
 export { mapColumns, splitNameUnit, type ColumnLayout, type ColumnMap, type Role } from './recordedMotionHeader.ts';
 export { findSegments, differentiate, type Segments } from './recordSegments.ts';
+export { blockPower, MAX_POWER_BLOCKS, type BlockPower } from './blockPower.ts';
 export { recordedMotion, type RecordedMotionResult } from './recordedMotion.ts';
 export { roadDamperPower } from './roadDamperPower.ts';
