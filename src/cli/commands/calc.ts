@@ -36,7 +36,8 @@ export function calc(args: ParsedArgs, out: (s: string) => void): number {
   const r = evaluate(def, raw, { fillDefaults: false });
   const outputs = Object.fromEntries(def.outputs.filter((o) => r.outputs[o.key] !== undefined).map((o) => [o.key, r.outputs[o.key]]));
   if (args.flags.has('json')) {
-    out(JSON.stringify({ id, outputs, warnings: r.warnings, inputs: r.values }));
+    // handoff: strings another calculator takes (e.g. recorded-motion's power profile for warm-up's `profile`)
+    out(JSON.stringify({ id, outputs, warnings: r.warnings, inputs: r.values, ...(r.handoff ? { handoff: r.handoff } : {}) }));
     return 0;
   }
   out(`${def.title} (${id})`);
