@@ -5,6 +5,10 @@
 import type { ChartSpec } from '../../calculators/types.ts';
 import type { UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, escapeHtml, formatNumber, toDisplay } from './format.ts';
+import { simplifyPolyline } from './polyline.ts';
+
+/** Largest shift of a drawn line, in viewBox units (the chart is ~480 px wide on screen). */
+const LINE_TOLERANCE = 0.25;
 
 const W = 480;
 const H = 256;
@@ -42,18 +46,21 @@ export function svgChart(spec: ChartSpec, system: UnitSystem): string {
     if (mx >= PAD.l && mx <= W - PAD.r) parts.push(`<line class="svg-marker" x1="${mx.toFixed(1)}" x2="${mx.toFixed(1)}" y1="${PAD.t}" y2="${H - PAD.b}"/>`);
   }
   for (const s of spec.series) {
-    const pts: string[] = [];
-    const step = Math.max(1, Math.floor(s.x.length / 400));
-    for (let i = 0; i < s.x.length; i += step) {
+    const px: number[] = [];
+    const py: number[] = [];
+    for (let i = 0; i < Math.min(s.x.length, s.y.length); i++) {
       const dx = toDisplay(s.x[i]!, ux);
       const dy = toDisplay(s.y[i]!, uy);
       if (!Number.isFinite(dx) || !Number.isFinite(dy) || (xlog && dx <= 0) || (ylog && dy <= 0)) continue;
-      pts.push(`${sx(dx).toFixed(1)},${Math.min(Math.max(sy(dy), PAD.t), H - PAD.b).toFixed(1)}`);
+      px.push(sx(dx));
+      py.push(Math.min(Math.max(sy(dy), PAD.t), H - PAD.b));
     }
     const tone = `tone-${s.tone ?? 0}`;
     if (s.style === 'points') {
-      for (const p of pts) { const [a, b] = p.split(','); parts.push(`<circle class="${tone}" cx="${a}" cy="${b}" r="3.5" fill="none" stroke-width="2"/>`); }
+      for (let i = 0; i < px.length; i++) parts.push(`<circle class="${tone}" cx="${px[i]!.toFixed(1)}" cy="${py[i]!.toFixed(1)}" r="3.5" fill="none" stroke-width="2"/>`);
     } else {
+      // every sample enters the simplification, so narrow peaks are kept (no every-n-th thinning)
+      const pts = simplifyPolyline(px, py, LINE_TOLERANCE).map((i) => `${px[i]!.toFixed(1)},${py[i]!.toFixed(1)}`);
       parts.push(`<polyline class="svg-line ${tone}${s.style === 'dash' ? ' dash' : ''}" points="${pts.join(' ')}"/>`);
     }
   }
