@@ -13,7 +13,7 @@ export const harmonicDutyCalc = defineCalculator({
   summary: 'Mean power, energy per cycle, RMS velocity and peak force of a damper driven through a sinusoidal stroke, for linear, power-law, friction, bilinear and hysteretic damper laws.',
   inputs: [
     { key: 'X', label: 'Stroke amplitude (half of peak-to-peak)', kind: 'length', default: 0.025, min: 0, max: 10, minExclusive: true, required: true, help: 'Displacement amplitude across the damper: x = X·sin ωt.' },
-    { key: 'f', label: 'Frequency', kind: 'frequency', default: 1.5, min: 0, max: 1e4, minExclusive: true, required: true, help: 'Cycles per second of the stroke.' },
+    { key: 'f', label: 'Frequency', kind: 'frequency', default: 1.5, min: 1e-6, max: 1e4, required: true, help: 'Cycles per second of the stroke (from 10⁻⁶ Hz: slower motion makes no heat worth checking).' },
     ...lawInputs(DAMPER_LAW_KINDS, { law: 'linear', c: 1500, Fref: 800, vref: 1, alpha: 0.5 }),
   ],
   outputs: [
@@ -37,7 +37,8 @@ export const harmonicDutyCalc = defineCalculator({
     const x = th.map((t) => X * Math.sin(t));
     const F = th.map((t) => damperForce(law, X * omega * Math.cos(t), omega));
     const f0 = omega / (2 * Math.PI);
-    const fs = Array.from({ length: 41 }, (_, i) => f0 * 10 ** (-1 + i / 20));
+    // a decade either side; frequencies so small that ω underflows to 0 are left out
+    const fs = Array.from({ length: 41 }, (_, i) => f0 * 10 ** (-1 + i / 20)).filter((f) => 2 * Math.PI * f > 0);
     const Pf = fs.map((f) => harmonicDuty(law, X, 2 * Math.PI * f).P);
     return [
       {
@@ -51,7 +52,7 @@ export const harmonicDutyCalc = defineCalculator({
         x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
         series: [{ label: describeLaw(law), x: fs, y: Pf, tone: 0 }],
         markers: [{ x: f0, label: 'this frequency' }],
-        summary: `Mean power from ${Pf[0]!.toPrecision(3)} W at ${fs[0]!.toPrecision(3)} Hz to ${Pf[40]!.toPrecision(3)} W at ${fs[40]!.toPrecision(3)} Hz; ${(result.outputs.P as number).toPrecision(4)} W at ${f0.toPrecision(3)} Hz.`,
+        summary: `Mean power from ${Pf[0]!.toPrecision(3)} W at ${fs[0]!.toPrecision(3)} Hz to ${Pf[Pf.length - 1]!.toPrecision(3)} W at ${fs[fs.length - 1]!.toPrecision(3)} Hz; ${(result.outputs.P as number).toPrecision(4)} W at ${f0.toPrecision(3)} Hz.`,
       },
     ];
   },
