@@ -4,5 +4,7 @@
 import { register } from 'tsx/esm/api';
 
 register();
+// a reader that stops early (`dampbook calc … | head`) closes the pipe: end quietly, no stack trace
+process.stdout.on('error', (e) => { if (e.code === 'EPIPE') process.exit(process.exitCode ?? 0); throw e; });
 const { main } = await import('../src/cli/main.ts');
 process.exitCode = await main(process.argv.slice(2));

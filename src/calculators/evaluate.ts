@@ -27,6 +27,13 @@ export function rangeOf(def: Extract<InputDef, { min: number }>): Range {
 }
 
 /** True when an input applies under the current choices (see `when`). */
+/** True when a number input accepts only SI base units for the current choices (see `siOnlyWhen`). */
+export function siOnly(def: InputDef, values: Values): boolean {
+  if (def.kind === 'choice' || def.kind === 'text' || !def.siOnlyWhen) return false;
+  const v = values[def.siOnlyWhen.key];
+  return typeof v === 'string' && def.siOnlyWhen.is.includes(v);
+}
+
 export function isActive(def: InputDef, values: Values): boolean {
   if (!def.when) return true;
   const v = values[def.when.key];
@@ -69,6 +76,9 @@ export function checkInput(def: InputDef, v: unknown, values: Values, fill: bool
   if (typeof v === 'number') n = v;
   else if (typeof v === 'string') {
     if (v.length > MAX_NUMBER_TEXT) throw new InputRangeError(def.key, `${v.length} characters`, r, unit, 'too long for a number');
+    if (siOnly(def, values) && !/^\s*[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?\s*$/.test(v)) {
+      throw new InputRangeError(def.key, v, r, unit, `give a plain number in SI base units here: ${def.siOnlyWhen!.why}`);
+    }
     try {
       n = parseQuantity(v, def.kind);
     } catch (e) {

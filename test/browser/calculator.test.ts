@@ -78,6 +78,22 @@ describe('oscillator page in Chromium', () => {
     expect(w.pageErrors).toEqual([]);
   });
 
+  it('keeps the power-law coefficient in SI units when the calculator switches to US units, and refuses a US unit for it with a message', async () => {
+    // C of F = C·|v|^α is in N·(s/m)^α: lbf·s/in would convert it correctly only at α = 1
+    const w = await watchedPage(browser, server.origin);
+    const { page } = w;
+    await page.goto(`${server.url}damper-laws/energy-per-cycle/?law=power&c=800&alpha=0.5&X=0.025&f=1.5`);
+    await page.waitForSelector('db-calculator[data-ready]');
+    const E = page.locator('tr[data-out="E"] .value');
+    await expect.poll(() => E.textContent()).toBe('33.94'); // λ(0.5)·C·ω^α·X^1.5, λ(0.5) = 3.49608 (FEMA 274 §9.3, from memory)
+    await page.check('input[name="units"][value="US"]');
+    expect(await page.inputValue('select[name="c.unit"]')).toBe('N.s/m');
+    await expect.poll(() => page.locator('tr[data-out="E"] .unit').textContent()).not.toBe('J');
+    await page.selectOption('select[name="c.unit"]', 'lbf.s/in');
+    await expect.poll(() => page.locator('.field[data-key="c"] .msg').textContent()).toMatch(/SI unit/);
+    expect(w.pageErrors).toEqual([]);
+  });
+
   it('reproduces results from a shared link', async () => {
     const w = await watchedPage(browser, server.origin);
     await w.page.goto(`${server.url}oscillators/sdof/?m=10&k=4000&c=120`);

@@ -34,7 +34,8 @@ const LAW_CHOICE: InputDef & { kind: 'choice' } = {
 const LAW_PARAMETERS: readonly InputDef[] = [
   {
     key: 'c', label: 'Damping coefficient c', kind: 'damping', default: 1500, min: 0, max: 1e9, minExclusive: true, required: true, when: { key: 'law', is: viscous },
-    help: 'Linear law: N·s/m. Power law: C in N·(s/m)^α, entered in SI base units (unit conversion of other damping units is exact only at α = 1).',
+    siOnlyWhen: { key: 'law', is: ['power'], why: 'the power-law C is in N·(s/m)^α, and a conversion from other units depends on α.' },
+    help: 'Linear law: N·s/m (any damping unit). Power law: C in N·(s/m)^α, SI base units only (other units would convert correctly only at α = 1).',
   },
   { key: 'alpha', label: 'Velocity exponent α', kind: 'dimensionless', default: 0.5, min: 0, max: 2, minExclusive: true, when: { key: 'law', is: ['power'] }, help: 'Fluid viscous dampers in buildings: typically 0.3–1.' },
   { key: 'Ff', label: 'Friction (slip) force F_f', kind: 'force', default: 200, min: 0, max: 1e8, minExclusive: true, required: true, when: { key: 'law', is: ['coulomb'] }, help: 'Constant force opposing sliding.' },

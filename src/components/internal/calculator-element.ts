@@ -146,7 +146,10 @@ export class CalculatorElement extends HTMLElement {
     for (const def of this.calc!.inputs) {
       if (def.kind === 'choice' || def.kind === 'text') continue;
       const sel = this.unitSelect(def.key);
-      const want = displayUnit(def.kind, system).id;
+      // a field that takes SI base units only for the current choice (siOnlyWhen) stays in SI
+      const gate = def.siOnlyWhen;
+      const pinned = gate !== undefined && gate.is.includes(this.control(gate.key)?.value ?? '');
+      const want = pinned ? displayUnit(def.kind, 'SI').id : displayUnit(def.kind, system).id;
       if (sel && sel.value !== want && [...sel.options].some((o) => o.value === want)) {
         sel.value = want;
         this.convertField(sel);

@@ -2,7 +2,7 @@
  * Reading and checking one field of the widget, in the reader's units. Pure (no DOM): the
  * element passes the field's text and unit id, and gets an SI value or a message for the field.
  */
-import { checkInput, MAX_NUMBER_TEXT, rangeOf } from '../../calculators/evaluate.ts';
+import { checkInput, MAX_NUMBER_TEXT, rangeOf, siOnly } from '../../calculators/evaluate.ts';
 import type { InputDef, NumberInput, Values } from '../../calculators/types.ts';
 import { InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, toSI } from '../../core/units/index.ts';
@@ -40,7 +40,11 @@ export function readField(def: InputDef, text: string, unitId: string | undefine
     if (text.length > MAX_NUMBER_TEXT) return { ok: false, message: `Too long for a number (${text.length} characters). Type digits, e.g. 12.5 or 1.2e3.` };
     const n = parseTyped(text);
     if (!Number.isFinite(n)) return { ok: false, message: 'Not a number. Type digits, e.g. 12.5 or 1.2e3.' };
-    const si = toSI(n, findUnit(def.kind, unitId ?? ''));
+    const unit = findUnit(def.kind, unitId ?? '');
+    if (siOnly(def, values) && def.siOnlyWhen && unit.factor !== 1) {
+      return { ok: false, message: `Choose the SI unit for this field: ${def.siOnlyWhen.why}` };
+    }
+    const si = toSI(n, unit);
     return { ok: true, value: checkInput(def, si, values, true) };
   } catch (e) {
     if (e instanceof InputRangeError && def.kind !== 'choice' && def.kind !== 'text') return { ok: false, message: `Out of range: ${describeRange(def, unitId ?? '')}.` };
