@@ -4,6 +4,7 @@
  * or an InputRangeError naming the input.
  */
 import { ComputationError, InputRangeError, type Range } from '../core/errors.ts';
+import { isPlainNumber } from '../core/numeric/plainNumber.ts';
 import { parseQuantity, siSymbol, UnitError } from '../core/units/index.ts';
 import type { CalculatorDefinition, InputDef, Result, Values } from './types.ts';
 
@@ -26,7 +27,6 @@ export function rangeOf(def: Extract<InputDef, { min: number }>): Range {
   return { min: def.min, max: def.max, minExclusive: def.minExclusive, maxExclusive: def.maxExclusive };
 }
 
-/** True when an input applies under the current choices (see `when`). */
 /** True when a number input accepts only SI base units for the current choices (see `siOnlyWhen`). */
 export function siOnly(def: InputDef, values: Values): boolean {
   if (def.kind === 'choice' || def.kind === 'text' || !def.siOnlyWhen) return false;
@@ -34,6 +34,7 @@ export function siOnly(def: InputDef, values: Values): boolean {
   return typeof v === 'string' && def.siOnlyWhen.is.includes(v);
 }
 
+/** True when an input applies under the current choices (see `when`). */
 export function isActive(def: InputDef, values: Values): boolean {
   if (!def.when) return true;
   const v = values[def.when.key];
@@ -76,7 +77,7 @@ export function checkInput(def: InputDef, v: unknown, values: Values, fill: bool
   if (typeof v === 'number') n = v;
   else if (typeof v === 'string') {
     if (v.length > MAX_NUMBER_TEXT) throw new InputRangeError(def.key, `${v.length} characters`, r, unit, 'too long for a number');
-    if (siOnly(def, values) && !/^\s*[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?\s*$/.test(v)) {
+    if (siOnly(def, values) && !isPlainNumber(v)) {
       throw new InputRangeError(def.key, v, r, unit, `give a plain number in SI base units here: ${def.siOnlyWhen!.why}`);
     }
     try {

@@ -1,4 +1,4 @@
-import { blockPower, MAX_POWER_BLOCKS, parseRecordedMotion, recordedMotion, type ColumnLayout } from '../../core/duty/index.ts';
+import { MAX_POWER_BLOCKS, parseRecordedMotion, recordedMotion, type ColumnLayout } from '../../core/duty/index.ts';
 import { formatPowerProfile } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { demoDynoRecord, sineRecord } from './demoRecord.ts';
@@ -77,7 +77,7 @@ export const recordedMotionCalc = defineCalculator({
     if (!rec.v) warnings.push('Velocity is differentiated from displacement: noise in the displacement raises the peaks; the energy is less sensitive.');
     // hand-off: block-averaged power (energy kept on any sampling); a block where stored energy was
     // returned (negative mean F·v) hands over 0 W, since the damper cannot take heat back
-    const blocks = blockPower(r.t, r.p, r.segments.ranges, MAX_POWER_BLOCKS);
+    const blocks = r.summary.profile!;
     const negative = blocks.P.filter((p) => p < 0).length;
     if (negative > 0) warnings.push(`${negative} of ${blocks.P.length} time blocks have a negative mean power (energy returned by a spring or gas force); the profile handed to the warm-up page takes them as 0 W.`);
     const profile = formatPowerProfile({ t: blocks.t, P: blocks.P.map((p) => Math.max(0, p)) });

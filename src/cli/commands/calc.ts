@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { evaluate } from '../../calculators/evaluate.ts';
 import { calculatorIds, getCalculator } from '../../calculators/registry.ts';
 import { InputRangeError } from '../../core/errors.ts';
+import { isPlainNumber } from '../../core/numeric/plainNumber.ts';
 import { siSymbol } from '../../core/units/index.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
 import { recordCheck } from './recordCheck.ts';
@@ -29,7 +30,7 @@ export function calc(args: ParsedArgs, out: (s: string) => void): number {
       try { text = readFileSync(file, 'utf8'); } catch { throw new InputRangeError(key, value, undefined, '', `cannot read file ${file}`); }
       if (text.length > MAX_FILE) throw new InputRangeError(key, value, undefined, '', 'file too large');
       raw[key] = text;
-    } else if (input.kind !== 'choice' && input.kind !== 'text' && /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(value.trim())) {
+    } else if (input.kind !== 'choice' && input.kind !== 'text' && isPlainNumber(value)) {
       raw[key] = Number(value);
     } else raw[key] = value;
   }

@@ -5,7 +5,7 @@
  * inputs in the page URL, and hands charts to the chart element. No calculator logic here:
  * everything comes from the definition.
  */
-import { evaluate, inputOrder, isActive } from '../../calculators/evaluate.ts';
+import { evaluate, inputOrder, isActive, siOnly } from '../../calculators/evaluate.ts';
 import { feedQuery, urlValue } from '../../calculators/feeds.ts';
 import type { CalculatorDefinition, Outputs, Result, Values } from '../../calculators/types.ts';
 import { DampbookError, InputRangeError } from '../../core/errors.ts';
@@ -148,7 +148,7 @@ export class CalculatorElement extends HTMLElement {
       const sel = this.unitSelect(def.key);
       // a field that takes SI base units only for the current choice (siOnlyWhen) stays in SI
       const gate = def.siOnlyWhen;
-      const pinned = gate !== undefined && gate.is.includes(this.control(gate.key)?.value ?? '');
+      const pinned = gate !== undefined && siOnly(def, { [gate.key]: this.control(gate.key)?.value });
       const want = pinned ? displayUnit(def.kind, 'SI').id : displayUnit(def.kind, system).id;
       if (sel && sel.value !== want && [...sel.options].some((o) => o.value === want)) {
         sel.value = want;

@@ -5,6 +5,7 @@
 import { checkInput, MAX_NUMBER_TEXT, rangeOf, siOnly } from '../../calculators/evaluate.ts';
 import type { InputDef, NumberInput, Values } from '../../calculators/types.ts';
 import { InputRangeError } from '../../core/errors.ts';
+import { isPlainNumber } from '../../core/numeric/plainNumber.ts';
 import { findUnit, fromSI, toSI } from '../../core/units/index.ts';
 import { formatNumber } from './format.ts';
 
@@ -27,7 +28,7 @@ export function describeRange(def: NumberInput, unitId: string): string {
 export function parseTyped(text: string): number {
   const t = text.trim().replace(/\s+/g, '');
   const normal = !t.includes('.') && /^[-+]?\d+,\d+(e[-+]?\d+)?$/i.test(t) ? t.replace(',', '.') : t;
-  return /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(normal) ? Number(normal) : NaN;
+  return isPlainNumber(normal) ? Number(normal) : NaN;
 }
 
 export function readField(def: InputDef, text: string, unitId: string | undefined, values: Values): FieldRead {

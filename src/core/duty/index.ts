@@ -7,7 +7,7 @@ export { quarterCarRandom, quarterCarBand, damperVelocityVariance, type QuarterC
 export { quarterCarWhiteVariances, whiteRoadDamperPower, type QuarterCarVariances } from './quarterCarWhite.ts';
 export { statisticalLinearisation, type Linearised } from './statisticalLinearisation.ts';
 export { roadDuty, type RoadDamper, type RoadDuty } from './roadDuty.ts';
-export { thinProfile, type DutySummary } from './dutySummary.ts';
+export { type DutySummary } from './dutySummary.ts';
 export { impactEnergy, STANDARD_GRAVITY, type ImpactInput, type ImpactEnergy } from './impactEnergy.ts';
 export { linearStop, type LinearStop } from './linearStop.ts';
 export { storeyDampers, adiabaticRise, type StoreyDampers, type StoreyDamperResult } from './structuralDampers.ts';

@@ -4,7 +4,8 @@
  */
 import { damperForce, validateLaw, type DamperLaw } from '../dampers/index.ts';
 import { ComputationError } from '../errors.ts';
-import { thinProfile, type DutySummary } from './dutySummary.ts';
+import { blockPower, MAX_POWER_BLOCKS } from './blockPower.ts';
+import type { DutySummary } from './dutySummary.ts';
 import type { ParsedRecord } from './recordedMotionCsv.ts';
 import { differentiate, findSegments } from './recordSegments.ts';
 
@@ -91,6 +92,6 @@ export function recordedMotion(rec: ParsedRecord, law: DamperLaw | undefined, ga
   const meanPower = E / duration;
   return {
     t, v, F, p, E, duration, meanPower, cycleEnergies, Fpeak, vPeak, vRms, flipped, segments: seg,
-    summary: { meanPower, profile: thinProfile(Array.from(t), Array.from(p)) },
+    summary: { meanPower, profile: blockPower(t, p, seg.ranges, MAX_POWER_BLOCKS) },
   };
 }

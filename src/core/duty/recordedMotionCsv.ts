@@ -4,6 +4,7 @@
  * reason and its row number. Nothing is dropped silently.
  */
 import { ComputationError, InputRangeError } from '../errors.ts';
+import { PLAIN_NUMBER } from '../numeric/plainNumber.ts';
 import { mapColumns, type ColumnLayout, type ColumnMap, type Role } from './recordedMotionHeader.ts';
 
 export interface RejectedRow {
@@ -23,7 +24,6 @@ export interface ParsedRecord {
   readonly skipped: number;
 }
 
-const NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/;
 
 function detectDelimiter(line: string): { split: (s: string) => string[]; decimalComma: boolean } {
   const count = (c: string) => line.split(c).length - 1;
@@ -63,7 +63,7 @@ export function parseRecordedMotion(text: string, layout: ColumnLayout = 'auto')
     }
     return cells;
   };
-  const isNum = (c: string) => NUMBER.test(delim.decimalComma ? c.replace(',', '.') : c);
+  const isNum = (c: string) => PLAIN_NUMBER.test(delim.decimalComma ? c.replace(',', '.') : c);
   let header: string[] | undefined;
   let units: string[] | undefined;
   let headerRow = i + 1;
@@ -95,7 +95,7 @@ export function parseRecordedMotion(text: string, layout: ColumnLayout = 'auto')
       const c = cells[columns.index[r]!];
       if (c === undefined || c === '') { bad = `missing value in column ${columns.index[r]! + 1}`; break; }
       const s = delim.decimalComma ? c.replace(',', '.') : c;
-      if (!NUMBER.test(s)) { bad = `'${c.slice(0, 20)}' in column ${columns.index[r]! + 1} is not a number`; break; }
+      if (!PLAIN_NUMBER.test(s)) { bad = `'${c.slice(0, 20)}' in column ${columns.index[r]! + 1} is not a number`; break; }
       vals[r] = Number(s) * columns.factor[r]!;
     }
     if (!bad && !(vals.t! > lastT)) bad = `time ${vals.t} does not increase (previous ${lastT})`;

@@ -3,3 +3,4 @@ export { adaptiveSimpson } from './adaptiveSimpson.ts';
 export { gamma } from './gamma.ts';
 export { brentRoot, type BrentOptions } from './brent.ts';
 export { bracketRoots, type Crossing } from './bracketRoots.ts';
+export { PLAIN_NUMBER, isPlainNumber } from './plainNumber.ts';

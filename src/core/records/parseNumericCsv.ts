@@ -5,6 +5,7 @@
  * row is named by its 1-based line number so a reader can fix the file.
  */
 import { InputRangeError } from '../errors.ts';
+import { PLAIN_NUMBER } from '../numeric/plainNumber.ts';
 
 export type Delimiter = ',' | ';' | '\t' | ' ';
 
@@ -33,7 +34,6 @@ export interface ParseOptions {
   readonly maxHeaderLines?: number;
 }
 
-const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 const COMMENT = /^(?:#|%|\/\/)/;
 const DATA_START = /^["']?[+\-.\d]/;
 
@@ -42,7 +42,7 @@ export function parseNumberField(raw: string, decimalComma: boolean): number | u
   let s = raw.trim();
   if (s.length >= 2 && (s[0] === '"' || s[0] === "'") && s[s.length - 1] === s[0]) s = s.slice(1, -1).trim();
   if (decimalComma && !s.includes('.')) s = s.replace(',', '.');
-  if (!NUMBER.test(s)) return undefined;
+  if (!PLAIN_NUMBER.test(s)) return undefined;
   const v = Number(s);
   return Number.isFinite(v) ? v : undefined;
 }

@@ -9,12 +9,12 @@
  *     1200
  */
 import { InputRangeError } from '../errors.ts';
+import { PLAIN_NUMBER } from '../numeric/plainNumber.ts';
 import { checkProfile, MAX_PROFILE_POWER, MAX_PROFILE_SEGMENTS, MAX_PROFILE_TIME, type PowerProfile } from './powerProfile.ts';
 
 /** Longest profile text read, characters (a page's field has its own, smaller maxLength). */
 export const MAX_PROFILE_TEXT = 200_000;
 
-const NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/;
 
 /**
  * Parses the text form. Each problem names its line (1-based, counting ';'-separated entries
@@ -42,7 +42,7 @@ export function parsePowerProfile(text: string, input = 'profile'): PowerProfile
     if (entry === '' || entry.startsWith('#')) continue;
     if (end !== undefined) fail(line, entry, 'an entry after the end time (the end time alone must come last)');
     const fields = entry.split(/[\s,]+/);
-    if (!fields.every((f) => NUMBER.test(f))) fail(line, entry, 'not a number (write seconds and watts as digits, e.g. 600, 120)');
+    if (!fields.every((f) => PLAIN_NUMBER.test(f))) fail(line, entry, 'not a number (write seconds and watts as digits, e.g. 600, 120)');
     if (fields.length > 2) fail(line, entry, 'expected "time, power" or the end time alone');
     const [ti, Pi] = fields.map(Number) as [number, number | undefined];
     if (!Number.isFinite(ti) || ti < 0 || ti > MAX_PROFILE_TIME) fail(line, entry, `time must be between 0 and ${MAX_PROFILE_TIME} s`);
