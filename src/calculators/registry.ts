@@ -23,9 +23,3 @@ export function getCalculator(id: string): CalculatorDefinition | undefined {
 export function calculatorIds(): string[] {
   return calculators.map((c) => c.id);
 }
-
-/** The domain whose list holds a calculator. */
-export function domainOf(id: string): Domain | undefined {
-  for (const [d, list] of Object.entries(domains) as [Domain, readonly CalculatorDefinition[]][]) if (list.some((c) => c.id === id)) return d;
-  return undefined;
-}
