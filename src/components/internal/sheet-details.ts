@@ -1,14 +1,18 @@
 /**
  * Sheet details: the project, numbers, names and date the reader types for the printed sheet
  * header, and the paper size. Values come from the page address first, then this browser's
- * storage; every change updates the header, the address and the storage. Untrusted text only
+ * storage for THIS page; every change updates the header, the address and the storage. The storage
+ * is keyed by the page's path so the details typed on one page's sheet never print on another's
+ * (a power-rating sheet once carried the ring-down job's calculation number). Untrusted text only
  * ever reaches the page through textContent and cssString().
  */
 import { pageCss, type Paper } from '../../sheets/pageCss.ts';
 
 const KEYS = ['project', 'no', 'calc', 'by', 'checker', 'date'] as const;
 type Key = (typeof KEYS)[number];
-const STORE = 'dampbook:sheet';
+/** The shared key of earlier versions, removed on load so its values cannot reappear anywhere. */
+const LEGACY_STORE = 'dampbook:sheet';
+const STORE = `dampbook:sheet:${location.pathname}`;
 const MAX = 120;
 
 const panel = document.querySelector<HTMLElement>('[data-sheet-panel]');
@@ -55,6 +59,7 @@ function render(write: boolean): void {
 }
 
 if (panel) {
+  try { localStorage.removeItem(LEGACY_STORE); } catch { /* storage blocked: nothing to remove */ }
   const params = new URLSearchParams(location.search);
   const saved = stored();
   const fromUrl = KEYS.some((k) => params.has(`sheet-${k}`));
