@@ -1,0 +1,66 @@
+/**
+ * The import direction written in DEVELOPERS.md, checked: the core imports nothing above it (and no
+ * Node, DOM or package code), calculators never import page, CLI, sheet or server code, and the CLI
+ * never imports browser components. A rule nobody checks drifts; this one fails `npm test`.
+ */
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { dirname, join, relative, resolve, sep } from 'node:path';
+import { describe, expect, it } from 'vitest';
+
+const SRC = resolve('src');
+
+/** Every module specifier a file imports or re-exports, static or dynamic. */
+export function specifiers(source: string): string[] {
+  const out: string[] = [];
+  const re = /(?:^|[\s;])(?:import|export)\s[^'"`;]*?from\s*['"]([^'"]+)['"]|(?:^|[\s;(])import\s*\(\s*['"]([^'"]+)['"]\s*\)|(?:^|[\s;])import\s*['"]([^'"]+)['"]/gm;
+  for (const m of source.matchAll(re)) out.push((m[1] ?? m[2] ?? m[3])!);
+  return out;
+}
+
+function files(dir: string): string[] {
+  return readdirSync(dir).flatMap((name) => {
+    const p = join(dir, name);
+    return statSync(p).isDirectory() ? files(p) : /\.(ts|mjs|astro)$/.test(name) ? [p] : [];
+  });
+}
+
+/** The top folder under src/ a specifier resolves to ('core', 'calculators', …), 'package' or 'node'. */
+function layerOf(fromFile: string, spec: string): string {
+  if (spec.startsWith('node:')) return 'node';
+  if (!spec.startsWith('.')) return 'package';
+  const target = relative(SRC, resolve(dirname(fromFile), spec));
+  return target.startsWith('..') ? 'outside' : target.split(sep)[0]!;
+}
+
+/** Layers each layer must never import (the direction is one-way: pages → components → calculators → core). */
+const FORBIDDEN: Readonly<Record<string, readonly string[]>> = {
+  core: ['calculators', 'components', 'cli', 'content', 'layouts', 'pages', 'records', 'server', 'sheets', 'build', 'studies', 'node', 'package', 'outside'],
+  calculators: ['components', 'cli', 'layouts', 'pages', 'server', 'sheets', 'build', 'node', 'outside'],
+  records: ['components', 'cli', 'layouts', 'pages', 'server', 'build'],
+  cli: ['components', 'layouts', 'pages'],
+};
+
+export function violations(file: string, source: string): string[] {
+  const layer = relative(SRC, file).split(sep)[0]!;
+  const banned = FORBIDDEN[layer] ?? [];
+  return specifiers(source)
+    .filter((s) => banned.includes(layerOf(file, s)))
+    .map((s) => `${relative(SRC, file)} imports '${s}' (${layerOf(file, s)}), which ${layer} must not import`);
+}
+
+describe('import direction', () => {
+  it('finds static, re-exported and dynamic imports (the checker itself can fail)', () => {
+    const bad = "import { x } from '../../components/internal/format.ts';\nexport * from '../../cli/args.ts';\nconst m = await import('node:fs');\nimport 'chart.js';";
+    const found = violations(join(SRC, 'core', 'thermal', 'fake.ts'), bad);
+    expect(found).toHaveLength(4);
+    expect(found[0]).toContain("imports '../../components/internal/format.ts' (components)");
+    expect(violations(join(SRC, 'core', 'thermal', 'fake.ts'), "import { air } from './air.ts';\nimport type { Q } from '../units/index.ts';")).toEqual([]);
+    expect(violations(join(SRC, 'calculators', 'x.ts'), "import { h } from '../components/internal/format.ts';")).toHaveLength(1);
+    expect(violations(join(SRC, 'cli', 'x.ts'), "import { h } from '../components/internal/format.ts';")).toHaveLength(1);
+  });
+
+  it('holds for every file under src/', () => {
+    const all = files(SRC).flatMap((f) => violations(f, readFileSync(f, 'utf8')));
+    expect(all).toEqual([]);
+  });
+});
