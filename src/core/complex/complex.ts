@@ -11,7 +11,7 @@ export interface Complex {
 
 /**
  * Builds re + i·im.
- * @example abs(div(complex(5, 5), complex(3, -1))) // |1 + 2i| = √5
+ * @example abs(div(complex(5, 5), complex(3, -1))) // 2.236068 (|1 + 2i| = √5)
  * @source common practice, no source (complex arithmetic; division after smith1962)
  */
 export function complex(re: number, im = 0): Complex {

@@ -29,7 +29,7 @@ export interface BlockPower {
  * @param ranges index ranges [start, end) of the segments between gaps (findSegments)
  * @param blocks number of blocks N (1 … MAX_POWER_BLOCKS); fewer when the record has fewer intervals
  * @throws ComputationError when no segment covers any time
- * @example blockPower([0, 1, 3], [0, 2, 2], [[0, 3]], 2).P // [1.5, 2]: 1.5 J in [0, 1.5), 3 J in [1.5, 3)
+ * @example blockPower([0, 1, 3], [0, 2, 2], [[0, 3]], 2).P // [1.333333, 2] (2 J in [0, 1.5) over 1.5 s, 3 J in [1.5, 3))
  * @source common practice, no source (block averaging of a sampled signal; trapezoid rule)
  */
 export function blockPower(t: ArrayLike<number>, p: ArrayLike<number>, ranges: readonly (readonly [number, number])[], blocks = MAX_POWER_BLOCKS): BlockPower {

@@ -50,7 +50,7 @@ export interface QuarterCarGains {
  *
  * @param q quarter car (call checkQuarterCar first)
  * @param f frequency, Hz, ≥ 0
- * @example quarterCarGains(fellrunner, 0).travel // 0 (static road offset moves the car bodily)
+ * @example quarterCarGains({ ms: 240, mu: 36, ks: 16000, kt: 160000, c: 980 }, 0).travel // 0 (static road offset moves the car bodily)
  * @source wong2008 §7.2 quarter-car equations of motion (section from memory); closed form
  */
 export function quarterCarGains(q: QuarterCar, f: number): QuarterCarGains {

@@ -29,7 +29,7 @@ export function quarterCarBand(q: QuarterCar): [number, number] {
  *
  * @param q quarter car (validated); road validated with checkRoad
  * @param relTol quadrature tolerance (relative), default 1e-8
- * @example quarterCarRandom(fellrunner, { Gd0: 256e-6, w: 2, V: 20 }).damperVelocity.value // 0.0825016
+ * @example quarterCarRandom({ ms: 240, mu: 36, ks: 16000, kt: 160000, c: 980 }, { Gd0: 256e-6, w: 2, V: 20 }).damperVelocity.value // 0.082502 (m/s)², quadrature; closed form 0.0825018
  * @source newland1993 ch. 7 (response spectra of linear systems; chapter from memory); wong2008 §7.2
  */
 export function quarterCarRandom(q: QuarterCar, road: RoadInput, relTol = 1e-8): QuarterCarRandom {

@@ -26,7 +26,7 @@ export interface QuarterCarVariances {
  *
  * @param q quarter car (validated)
  * @param G0 one-sided road velocity PSD level, (m/s)²/Hz
- * @example quarterCarWhiteVariances(fellrunner, 2.021295e-3).damperVelocity // 0.0825016 (m/s)²
+ * @example quarterCarWhiteVariances({ ms: 240, mu: 36, ks: 16000, kt: 160000, c: 980 }, 2.021295e-3).damperVelocity // 0.0825018 (m/s)²
  * @source gobbi2001 (same closed forms, equation numbers from memory); zuo2013 (power independent
  *   of suspension parameters, published abstract); derived here with the Lyapunov equation
  *   (closed form, checked by quadrature)

@@ -17,7 +17,7 @@ import { statisticalLinearisation } from './statisticalLinearisation.ts';
  *
  * @param car masses and rates (validated by the caller); road validated with checkRoad
  * @param relTol quadrature tolerance, default 1e-6 (a chart needs no more); panels: equal log panels, default 60
- * @example roadDamperPower(fellrunnerCar, { Gd0: 256e-6, w: 2, V: 20 }, { kind: 'linear', c: 980 }) // 80.85 W
+ * @example roadDamperPower({ ms: 240, mu: 36, ks: 16000, kt: 160000 }, { Gd0: 256e-6, w: 2, V: 20 }, { kind: 'linear', c: 980 }) // 80.85 W
  * @source roberts2003 ch. 5 (from memory); newland1993 ch. 7 (from memory)
  */
 export function roadDamperPower(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: RoadDamper, relTol = 1e-6, panels = 60): number {

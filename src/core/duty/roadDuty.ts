@@ -52,7 +52,7 @@ const G_N = 9.80665;
  * @param road G_d(n0) m³, w, V m/s
  * @param damper law at the wheel
  * @throws InputRangeError naming the input out of range
- * @example roadDuty(fellrunner, { Gd0: 256e-6, w: 2, V: 20 }, { kind: 'linear', c: 980 }).P // 80.85 W
+ * @example roadDuty({ ms: 240, mu: 36, ks: 16000, kt: 160000, c: 980 }, { Gd0: 256e-6, w: 2, V: 20 }, { kind: 'linear', c: 980 }).P // 80.85 W
  * @source zuo2013; gobbi2001; roberts2003 ch. 5 (from memory); iso8608
  */
 export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: RoadDamper): RoadDuty {

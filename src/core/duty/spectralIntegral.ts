@@ -57,7 +57,7 @@ function slope(g: (f: number) => number, f: number): number {
  * @param peaks frequencies (Hz) of expected narrow peaks, bracketed by extra panel edges
  * @param maxDepth recursion limit of adaptive Simpson in each panel (bounds the work), default 10
  * @throws ComputationError when a tail does not decay (the variance is infinite)
- * @example spectralIntegral((f) => 1 / (1 + f * f), 1e-4, 1e4).value // π/2
+ * @example spectralIntegral((f) => 1 / (1 + f * f), 1e-4, 1e4).value // 1.570796 (π/2 less the tails beyond the band, 1e-4 each)
  * @source lyness1969 (adaptive Simpson); tails: closed form of ∫ f^p df
  */
 export function spectralIntegral(g: (f: number) => number, f1: number, f2: number, relTol = 1e-9, panels = 120, peaks: readonly number[] = [], maxDepth = 10): SpectralIntegral {

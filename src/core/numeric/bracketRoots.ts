@@ -19,7 +19,7 @@ export interface Crossing {
  * @param n panels, integer ≥ 1 (default 200)
  * @returns the crossings in increasing x
  * @throws ComputationError when the interval is empty or f is not finite
- * @example bracketRoots(Math.sin, 1, 10) // x ≈ π, 2π, 3π
+ * @example bracketRoots(Math.sin, 1, 10).map((r) => r.x) // [3.14159, 6.28319, 9.42478] (π, 2π, 3π)
  * @source brent1973 ch. 4 (refinement; from memory)
  */
 export function bracketRoots(f: (x: number) => number, a: number, b: number, n = 200, xTol = 1e-10): Crossing[] {

@@ -21,7 +21,7 @@ export interface BrentOptions {
  * @param b other end; f(a)·f(b) ≤ 0
  * @returns x with |x − x*| ≤ 2·(1e-15·|x| + xTol/2), x* a root in [a, b]
  * @throws ComputationError when f(a) and f(b) have the same sign, f is not finite, or maxEval is hit
- * @example brentRoot((x) => x * x - 2, 0, 2) // 1.4142135623730951
+ * @example brentRoot((x) => x * x - 2, 0, 2) // 1.414214 (√2, to the default tolerance)
  * @source brent1973 ch. 4 (algorithm zero; from memory)
  */
 export function brentRoot(f: (x: number) => number, a: number, b: number, opts: BrentOptions = {}): number {

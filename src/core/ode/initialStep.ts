@@ -20,7 +20,7 @@ function rmsScaled(v: Float64Array, y: Float64Array, rtol: number, atol: Float64
  * @param order p of the propagated solution
  * @param hMax largest allowed step, s
  * @returns a positive step size, s
- * @example for y' = −y, y0 = 1 at rtol 1e-6, atol 1e-9: 0.046 s
+ * @example initialStep({ dim: 1, f: (t, y, d) => { d[0] = -y[0]; } }, 0, Float64Array.of(1), Float64Array.of(-1), 5, 1e-6, Float64Array.of(1e-9), Infinity) // 0.046 s (y' = −y, y0 = 1, rtol 1e-6, atol 1e-9)
  * @source hairer1993 §II.4, "Starting step size" algorithm (from memory)
  */
 export function initialStep(

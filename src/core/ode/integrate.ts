@@ -55,7 +55,7 @@ export interface AdaptiveSolution {
  * @param tEnd end time, s, > t0
  * @throws InputRangeError for bad tolerances; ComputationError when the step size underflows or
  *   `maxSteps` is exceeded (the problem is stiff or singular at these tolerances)
- * @example integrateAdaptive({ dim: 1, f: (t, y, d) => { d[0] = -y[0]!; } }, 0, [1], 1, { rtol: 1e-10, atol: 1e-12 }).y[0] // e^{-1} = 0.367879…
+ * @example integrateAdaptive({ dim: 1, f: (t, y, d) => { d[0] = -y[0]; } }, 0, [1], 1, { rtol: 1e-10, atol: 1e-12 }).y[0] // 0.3678794 (e^{-1})
  * @source hairer1993 §II.4, eqs. (4.12)–(4.13) (from memory); dormand1980
  */
 export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<number>, tEnd: number, opts: AdaptiveOptions): AdaptiveSolution {

@@ -36,7 +36,7 @@ export function stepWork(tableau: EmbeddedTableau, dim: number): StepWork {
  *   y_{new} = y + h\sum_i b_i k_i,\quad \mathrm{err} = h\sum_i (b_i - \hat b_i) k_i$$
  *
  * @returns the number of right-hand-side evaluations made (s − 1)
- * @example one DOPRI5 step of y' = y from y = 1 with h = 0.1 gives 1.1051709183 (e^{0.1} = 1.1051709181)
+ * @example ((w) => { w.k[0][0] = 1; rkStep(DORMAND_PRINCE_54, { dim: 1, f: (t, y, d) => { d[0] = y[0]; } }, 0, Float64Array.of(1), 0.1, w); return w.yNew[0]; })(stepWork(DORMAND_PRINCE_54, 1)) // 1.1051709183 (one step of y' = y, h = 0.1; e^{0.1} = 1.1051709181)
  * @source hairer1993 §II.1, eq. (1.8) (from memory)
  */
 export function rkStep(tab: EmbeddedTableau, sys: OdeSystem, t: number, y: Float64Array, h: number, w: StepWork): number {

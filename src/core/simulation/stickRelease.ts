@@ -13,7 +13,7 @@ import { ComputationError } from '../errors.ts';
  * @param t0 start of sticking, s
  * @param tEnd end of the simulation, s
  * @param dt scan step, s, > 0
- * @example stickRelease((t) => 10 * Math.sin(t), 5, 0, 10, 0.01) // π/6 ≈ 0.5236 s
+ * @example stickRelease((t) => 10 * Math.sin(t), 5, 0, 10, 0.01) // 0.5236 s (π/6)
  * @source denHartog1956 §8.6, Coulomb damping and stick-slip (section from memory); rao2017 §2.9 (from memory)
  */
 /** Largest number of scan steps while stuck (bounds the work of one simulation). */

@@ -91,7 +91,7 @@ function equilibrium(t: readonly number[], y: readonly number[], coarse: readonl
  * @param t times, s, strictly increasing (uneven spacing allowed)
  * @param y recorded displacement, velocity or acceleration
  * @throws ComputationError for a flat record or one without two complete half cycles
- * @example decayPeaks(t, y).peaks.length // one extremum per usable half cycle
+ * @example ((t) => decayPeaks(t, t.map((s) => Math.exp(-2 * s) * Math.cos(Math.sqrt(96) * s))))(Array.from({ length: 400 }, (_, i) => i * 0.005)).peaks.length // 5 (one extremum per usable half cycle of 2 s at T_d = 0.641 s)
  * @source common practice, no source (hysteresis crossing detection); press2007 §15.4 (parabola fit)
  */
 export function decayPeaks(t: readonly number[], y: readonly number[]): DecayPeaks {

@@ -7,7 +7,7 @@ import { requireInRange } from '../errors.ts';
  *
  * @param zeta damping ratio, [0, 1)
  * @returns δ per cycle, dimensionless
- * @example logDecrementFromZeta(0.1) // 0.631483
+ * @example logDecrementFromZeta(0.1) // 0.631484
  * @source rao2017 §2.6.3 (section from memory)
  */
 export function logDecrementFromZeta(zeta: number): number {

@@ -11,7 +11,7 @@ import { InputRangeError, POSITIVE, requireInRange } from '../errors.ts';
  * @returns δ per cycle, dimensionless
  * @throws InputRangeError naming 'xn' when the later peak is not smaller (no decay), naming 'n'
  *   when n is not a whole number ≥ 1
- * @example logDecrementFromPeaks(1, 1 / 16, 1) // ln 16 = 2.772589
+ * @example logDecrementFromPeaks(1, 1 / 16, 1) // 2.772589 (ln 16)
  * @source rao2017 §2.6, logarithmic decrement (section from memory)
  */
 export function logDecrementFromPeaks(x1: number, xn: number, n: number): number {

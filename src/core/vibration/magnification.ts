@@ -30,7 +30,7 @@ export function magnificationFactor(r: number, zeta: number): number {
  * @param r frequency ratio, [0, ∞)
  * @param zeta damping ratio, [0, ∞)
  * @returns φ in rad (π/2 at resonance for any ζ > 0)
- * @example phaseLag(1, 0.1) // π/2
+ * @example phaseLag(1, 0.1) // 1.570796 (π/2 at resonance)
  * @source rao2017 §3.4, phase angle (section from memory)
  */
 export function phaseLag(r: number, zeta: number): number {

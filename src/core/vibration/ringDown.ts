@@ -31,7 +31,7 @@ export interface RingDownFit {
  * @param y signal samples
  * @throws ComputationError naming the cause: fewer than 4 usable extrema (3 half-cycle amplitudes),
  *   or amplitudes that do not decay significantly
- * @example ringDown(t, x).zeta // 0.2000 for the free response of m = 1 kg, k = 100 N/m, c = 4 N·s/m
+ * @example ((t) => ringDown(t, t.map((s) => Math.exp(-2 * s) * Math.cos(Math.sqrt(96) * s))))(Array.from({ length: 400 }, (_, i) => i * 0.005)).zeta // 0.2000 (m = 1 kg, k = 100 N/m, c = 4 N·s/m: σ = 2, ω_d = √96)
  * @source rao2017 §2.6.3 (logarithmic decrement, section from memory); press2007 §15.2 (weighted line)
  */
 export function ringDown(t: readonly number[], y: readonly number[]): RingDownFit {

@@ -24,7 +24,7 @@ export interface TmdPhasors {
  * @param s the system (μ > 0, f > 0, ζ ≥ 0, ζ_1 ≥ 0; not validated here: callers validate)
  * @param beta frequency ratio ω/ω_1, > 0
  * @param load 'force' or 'base'
- * @example abs(tmdResponse({ mu: 0.1, f: 1 / 1.1, zeta: 0.1679, zeta1: 0 }, 1, 'force').x1)
+ * @example abs(tmdResponse({ mu: 0.1, f: 1 / 1.1, zeta: 0.1679, zeta1: 0 }, 1, 'force').x1) // 3.985796 (|X_1| in units of F_0/k_1 at β = 1)
  * @source denHartog1956 ch. 3, the damped vibration absorber (same system written as a matrix; from memory)
  */
 export function tmdResponse(s: TmdSystem, beta: number, load: 'force' | 'base'): TmdPhasors {

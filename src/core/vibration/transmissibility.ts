@@ -41,7 +41,7 @@ export function relativeMotionRatio(r: number, zeta: number): number {
  * @param r frequency ratio, [0, ∞)
  * @param zeta damping ratio, [0, ∞)
  * @returns φ in rad
- * @example baseMotionPhaseLag(1, 0.1) // atan2(0.2, 0.04) = 1.373401
+ * @example baseMotionPhaseLag(1, 0.1) // 1.373401 (atan2(0.2, 0.04))
  * @source rao2017 §3.6, base excitation, phase of the absolute motion (section from memory)
  */
 export function baseMotionPhaseLag(r: number, zeta: number): number {
