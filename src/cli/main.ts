@@ -4,6 +4,7 @@
  */
 import { DampbookError } from '../core/errors.ts';
 import { SheetError } from '../sheets/print.ts';
+import { escapeControls } from './escape.ts';
 import { parseArgs, UsageError, type ParsedArgs } from './args.ts';
 import { calc } from './commands/calc.ts';
 import { check } from './commands/check.ts';
@@ -21,20 +22,23 @@ export const commands: Record<string, { run: Command; help: string }> = {
   sheet: { run: sheet, help: 'sheet <page> [--in k=v …] [--paper a4|letter] [--project … --project-no … --calc-no … --prepared-by … --checked-by … --date …] [--site dist] --pdf out.pdf' },
 };
 
-function usage(): string {
-  return ['usage: dampbook <command> …', ...Object.values(commands).map((c) => `  dampbook ${c.help}`)].join('\n');
+function usage(): string[] {
+  return ['usage: dampbook <command> …', ...Object.values(commands).flatMap((c) => `  dampbook ${c.help}`.split('\n'))];
 }
 
-export async function main(argv: readonly string[], out = (s: string) => console.log(s), err = (s: string) => console.error(s)): Promise<number> {
+export async function main(argv: readonly string[], rawOut = (s: string) => console.log(s), rawErr = (s: string) => console.error(s)): Promise<number> {
+  // every message is one line with control characters escaped (inputs, records and pages are untrusted)
+  const out = (s: string) => rawOut(escapeControls(s));
+  const err = (s: string) => rawErr(escapeControls(s));
   try {
     const args = parseArgs(argv);
     const name = args.positionals[0];
-    if (!name || name === 'help' || args.flags.has('help')) { out(usage()); return name ? 0 : 2; }
+    if (!name || name === 'help' || args.flags.has('help')) { for (const l of usage()) out(l); return name ? 0 : 2; }
     const cmd = commands[name];
     if (!cmd) throw new UsageError(`unknown command '${name}'; commands: ${Object.keys(commands).join(', ')} (dampbook help shows usage)`);
     return await cmd.run(args, out);
   } catch (e) {
-    if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) err(e.stack ?? e.message);
+    if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) rawErr(e.stack ?? e.message);
     else if (e instanceof DampbookError || e instanceof UsageError || e instanceof SheetError) err(`dampbook: ${e.message}`);
     else err(`dampbook: internal error: ${e instanceof Error ? e.message : String(e)} (set DAMPBOOK_DEBUG=1 for details)`);
     return e instanceof UsageError ? 2 : 1;
