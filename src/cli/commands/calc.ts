@@ -9,7 +9,11 @@ import { recordCheck } from './recordCheck.ts';
  * invalid input exits non-zero naming the input and its allowed range.
  */
 export function calc(args: ParsedArgs, out: (s: string) => void): number {
-  if (args.flags.has('record')) return recordCheck(args, out);
+  if (args.flags.has('record')) {
+    if (args.inputs.length) throw new UsageError('--in is not read with --record (the record holds the inputs)');
+    return recordCheck(args, out);
+  }
+  if (args.flags.has('content')) throw new UsageError('calc reads --content only with --record');
   const id = args.positionals[1];
   if (!id) throw new UsageError(`calc needs a calculator id: ${calculatorIds().join(', ')}`);
   const def = getCalculator(id);
