@@ -42,7 +42,7 @@ export async function main(argv: readonly string[], rawOut = (s: string) => cons
     requireKnownOptions(name, args, cmd.options, cmd.inputs);
     return await cmd.run(args, out);
   } catch (e) {
-    if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) rawErr(e.stack ?? e.message);
+    if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) for (const l of (e.stack ?? e.message).split('\n')) err(l);
     else if (e instanceof DampbookError || e instanceof UsageError || e instanceof SheetError) err(`dampbook: ${e.message}`);
     else err(`dampbook: internal error: ${e instanceof Error ? e.message : String(e)} (set DAMPBOOK_DEBUG=1 for details)`);
     return e instanceof UsageError ? 2 : 1;

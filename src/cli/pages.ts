@@ -3,10 +3,11 @@
  * pages, as in src/content.config.ts), its YAML frontmatter validated with the same schema the
  * site build uses. YAML 1.2 core rules, as Astro's js-yaml parser applies them (`n`, `y`, `on` stay strings; dates are coerced by the schema).
  */
-import { lstatSync, readdirSync, readFileSync, realpathSync, statSync } from 'node:fs';
+import { lstatSync, readdirSync, realpathSync, statSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { parse } from 'yaml';
 import { pageSchema, type PageMeta } from '../content/schema.ts';
+import { FileReadError, readBoundedFile } from './readFile.ts';
 
 export interface PageFile {
   /** Path as given (relative to the working directory when the content dir is relative). */
@@ -52,12 +53,15 @@ function walk(dir: string, out: Entry[], seen: Set<string>): void {
   }
 }
 
+/** Largest page file read (a page is text; a bigger file is reported, not read). */
+const MAX_PAGE_BYTES = 16 * 1024 * 1024;
+
 const FRONTMATTER = /^---\r?\n([\s\S]*?)\r?\n---(?:\r?\n|$)/;
 
 export function readPage(file: string, contentDir: string): PageFile {
   const entry = relative(contentDir, file).split(sep).join('/').replace(/\.mdx$/, '').toLowerCase();
   let text: string;
-  try { text = readFileSync(file, 'utf8'); } catch (e) { return { file, entry, errors: [why(e)] }; }
+  try { text = readBoundedFile(file, MAX_PAGE_BYTES).text; } catch (e) { return { file, entry, errors: [e instanceof FileReadError ? e.message : why(e)] }; }
   return { file, entry, ...parsePage(text) };
 }
 

@@ -57,7 +57,10 @@ export function checkBase(base: string): string {
 function htmlFiles(dir: string, out: string[] = []): string[] {
   for (const n of readdirSync(dir)) {
     const p = join(dir, n);
-    if (statSync(p).isDirectory()) { if (n !== 'pagefind' && n !== '_astro' && n !== '_db') htmlFiles(p, out); } else if (n === 'index.html') out.push(p);
+    let st;
+    try { st = statSync(p); } catch { continue; } // a dangling link in the built site is not a page
+    // only regular files are read (a FIFO or device named index.html would block or never end)
+    if (st.isDirectory()) { if (n !== 'pagefind' && n !== '_astro' && n !== '_db') htmlFiles(p, out); } else if (n === 'index.html' && st.isFile()) out.push(p);
   }
   return out;
 }

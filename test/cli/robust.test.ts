@@ -48,6 +48,18 @@ describe('check on awkward folders', () => {
     expect(r.out.match(/oscillators\/sdof\.mdx/g)).toHaveLength(1);
   });
 
+  it('reports a page name that is a FIFO or a device instead of blocking on it', async () => {
+    const dir = copy('fifo');
+    const { execFileSync } = await import('node:child_process');
+    execFileSync('mkfifo', [join(dir, 'oscillators', 'pipe.mdx')]);
+    symlinkSync('/dev/zero', join(dir, 'oscillators', 'zero.mdx'));
+    const r = await run('check', '--content', dir);
+    expect(r.err).toBe('');
+    expect(r.out).toMatch(/FAIL .*pipe\.mdx: .*not a regular file/);
+    expect(r.out).toMatch(/FAIL .*zero\.mdx: .*not a regular file/);
+    expect(r.out).toMatch(/ok {3}.*oscillators\/sdof\.mdx: sdof rev B approved/);
+  }, 20_000);
+
   it('checks a page saved with a UTF-8 byte-order mark as the build reads it', async () => {
     const dir = copy('bom');
     const f = join(dir, 'oscillators', 'sdof.mdx');
