@@ -10,6 +10,8 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { createHash } from 'node:crypto';
+import { defaults, isActive } from '../../src/calculators/evaluate.ts';
+import { getCalculator } from '../../src/calculators/registry.ts';
 import { main } from '../../src/cli/main.ts';
 import { formatNumber } from '../../src/components/internal/format.ts';
 import { serveStatic, type Served } from '../../src/server/staticServer.ts';
@@ -118,6 +120,18 @@ describe('dampbook sheet prints the data it was given', () => {
     expect(text).toContain(`mount-7.csv, ${rows.length} rows, ${csvText.length} characters, sha256 ${sha}`);
     expect(text).toContain(`Damping ratio ζ ${formatNumber(computed)}`);
     expect(text).toContain('TW-077-C-011');
+  }, 90_000);
+
+  it('names a text input left at the page default on the sheet', async () => {
+    const pdf = join(tmp, 'profile.pdf');
+    // every required input that applies with a profile, at its definition default (design values of the demo)
+    const def = getCalculator('recorded-motion')!;
+    const given = defaults(def);
+    const ins = def.inputs.filter((d) => d.required && d.kind !== 'text' && isActive(d, given)).flatMap((d) => ['--in', `${d.key}=${String(d.default)}`]);
+    const s = await cli('sheet', 'recorded-motion', ...ins, '--site', ROOT_BUILD, '--pdf', pdf);
+    expect(s.code, s.err).toBe(0);
+    const text = execFileSync('pdftotext', ['-raw', pdf, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+    expect(text).toMatch(/page default, \d+ rows, \d+ characters, sha256 [0-9a-f]{12}/);
   }, 90_000);
 
   it('computes with the value calc computes with (a 212-character m equal to 25)', async () => {

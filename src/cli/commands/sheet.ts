@@ -3,7 +3,7 @@ import { join, resolve } from 'node:path';
 import { getCalculator } from '../../calculators/registry.ts';
 import { checkBase, findPage, printSheet, SheetError, type SheetFields, type SheetText } from '../../sheets/print.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
-import { evaluateInputs, readInputs, textLabel } from '../inputs.ts';
+import { evaluateInputs, readInputs, summariseText, textLabel } from '../inputs.ts';
 
 /**
  * `dampbook sheet <page> [--in key=value …] [--paper a4|letter] [--project …] [--project-no …]
@@ -51,6 +51,12 @@ export async function sheet(args: ParsedArgs, out: (s: string) => void): Promise
         const t = read.texts.find((x) => x.key === k)!;
         texts.push({ key: k, text: String(v), label: `${input.label}: ${textLabel(t)}` });
       } else if (!address.some(([a]) => a === k)) address.push([k, String(v)]); // SI number (round-trips exactly) or choice
+    }
+    // a text input left at the page's own default is named as such, so every text on the sheet is identified
+    for (const input of def.inputs) {
+      const v = r.values[input.key];
+      if (input.kind !== 'text' || typeof v !== 'string' || mine.some(([k]) => k === input.key) || texts.some((t) => t.key === input.key)) continue;
+      texts.push({ key: input.key, text: v, label: `${input.label}: ${textLabel({ ...summariseText(input.key, v), file: 'page default' })}` });
     }
   }
   const { url } = await printSheet({ site, base, page, inputs: address, texts, expect, sheet: fields, paper, pdf: resolve(pdf) });
