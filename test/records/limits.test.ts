@@ -64,3 +64,31 @@ describe('record size limits', () => {
     expect(p.ok, p.ok ? '' : p.message).toBe(true);
   });
 });
+
+describe('record replay and SI-only inputs', () => {
+  // the power-law C is accepted in SI base units only (siOnlyWhen): a record giving it in another
+  // unit is refused as the page and calc refuse "1500 lbf·s/in" (behaviour; no reference value)
+  const epc = getCalculator('energy-per-cycle')!;
+  const base = evaluate(epc, { law: 'power', c: 1500 });
+  const rec = makeRecord(epc, base.values, base.outputs, {}, { coreVersion: '0.1.0' }, new Date('2026-12-02T10:00:00Z'));
+
+  it('replays a power-law record in SI', () => {
+    const r = replayRecord(epc, rec, { coreVersion: '0.1.0' });
+    expect(r.ok && r.diffs).toEqual([]);
+  });
+
+  it('refuses a power-law C recorded in lbf·s/in, naming c', () => {
+    const bad = { ...rec, inputs: { ...rec.inputs, c: { value: 1500, unit: 'lbf.s/in' } } };
+    const r = replayRecord(epc, bad, { coreVersion: '0.1.0' });
+    expect(r.ok).toBe(false);
+    expect(!r.ok && r.message).toMatch(/'c'.*SI base units/);
+  });
+
+  it('still converts a linear c recorded in lbf·s/in', () => {
+    const lin = evaluate(epc, { law: 'linear', c: '10 lbf·s/in' });
+    const r0 = makeRecord(epc, lin.values, lin.outputs, { c: { value: 10, unit: 'lbf.s/in' } }, { coreVersion: '0.1.0' }, new Date('2026-12-02T10:00:00Z'));
+    expect(r0.inputs.c).toEqual({ value: 10, unit: 'lbf.s/in' });
+    const r = replayRecord(epc, r0, { coreVersion: '0.1.0' });
+    expect(r.ok && r.diffs).toEqual([]);
+  });
+});
