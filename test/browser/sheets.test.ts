@@ -17,7 +17,7 @@ import { formatNumber } from '../../src/components/internal/format.ts';
 import { serveStatic, type Served } from '../../src/server/staticServer.ts';
 import { printSheet } from '../../src/sheets/print.ts';
 import { launch, watchedPage } from '../helpers/browser.ts';
-import { ROOT_BUILD } from '../helpers/site.ts';
+import { ROOT_BUILD, SUB_BASE, SUB_BUILD } from '../helpers/site.ts';
 
 let server: Served;
 let browser: Browser;
@@ -147,6 +147,14 @@ describe('dampbook sheet prints the data it was given', () => {
     expect(text).toMatch(/Moving mass\s+25\s+kg/);
     // ωn = √(4000/25) = 12.65 rad/s (closed form, Rao 6th ed. §2.6)
     expect(text).toMatch(/12\.65/);
+  }, 90_000);
+
+  it('says the base does not match for the real sub-path build', async () => {
+    const s = await cli('sheet', 'sdof', '--in', 'm=10', '--in', 'k=4000', '--in', 'c=40', '--site', SUB_BUILD, '--pdf', join(tmp, 'sub.pdf'));
+    expect(s.code).toBe(1);
+    expect(s.err).toBe(`dampbook: the site in ${SUB_BUILD} was built for the base ${SUB_BASE}, not /: give --base ${SUB_BASE}`);
+     const ok = await cli('sheet', 'sdof', '--in', 'm=10', '--in', 'k=4000', '--in', 'c=40', '--site', SUB_BUILD, '--base', SUB_BASE, '--pdf', join(tmp, 'sub.pdf'));
+    expect(ok.code, ok.err).toBe(0);
   }, 90_000);
 
   it('refuses an invalid choice like calc, without printing', async () => {
