@@ -149,11 +149,11 @@ describe('dampbook sheet prints the data it was given', () => {
     expect(text).toMatch(/12\.65/);
   }, 90_000);
 
-  it('says the base does not match for the real sub-path build', async () => {
+  it('says the base does not match for the real sub-path build, and prints it with --base', async () => {
     const s = await cli('sheet', 'sdof', '--in', 'm=10', '--in', 'k=4000', '--in', 'c=40', '--site', SUB_BUILD, '--pdf', join(tmp, 'sub.pdf'));
     expect(s.code).toBe(1);
     expect(s.err).toBe(`dampbook: the site in ${SUB_BUILD} was built for the base ${SUB_BASE}, not /: give --base ${SUB_BASE}`);
-     const ok = await cli('sheet', 'sdof', '--in', 'm=10', '--in', 'k=4000', '--in', 'c=40', '--site', SUB_BUILD, '--base', SUB_BASE, '--pdf', join(tmp, 'sub.pdf'));
+    const ok = await cli('sheet', 'sdof', '--in', 'm=10', '--in', 'k=4000', '--in', 'c=40', '--site', SUB_BUILD, '--base', SUB_BASE, '--pdf', join(tmp, 'sub.pdf'));
     expect(ok.code, ok.err).toBe(0);
   }, 90_000);
 
