@@ -1,11 +1,17 @@
 /**
  * Identity of this build, printed in every page footer and sheet: the package version (the core
  * version a result is traceable to) and a hash of the handbook's content and core sources.
- * Server-only (reads files at build time).
+ * The content hashed is the folder actually built (`DAMPBOOK_CONTENT`, as src/content.config.ts
+ * reads it; default ./content). Server-only (reads files at build time).
  */
 import { createHash } from 'node:crypto';
 import { readdirSync, readFileSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { join, relative, sep } from 'node:path';
+
+/** The content folder a build reads (the same rule as src/content.config.ts). */
+export function contentDir(): string {
+  return process.env.DAMPBOOK_CONTENT ?? './content';
+}
 
 function walk(dir: string, out: string[] = []): string[] {
   for (const name of readdirSync(dir).sort()) {
@@ -16,9 +22,13 @@ function walk(dir: string, out: string[] = []): string[] {
   return out;
 }
 
-function hashTree(dirs: readonly string[]): string {
+/**
+ * SHA-256 (first 12 hex) over each folder's files: the name `label/relative-path` and the bytes,
+ * so the same files give the same hash wherever the folder is.
+ */
+function hashTree(dirs: readonly (readonly [label: string, dir: string])[]): string {
   const h = createHash('sha256');
-  for (const d of dirs) for (const f of walk(d)) h.update(f).update(readFileSync(f));
+  for (const [label, d] of dirs) for (const f of walk(d)) h.update([label, ...relative(d, f).split(sep)].join('/')).update(readFileSync(f));
   return h.digest('hex').slice(0, 12);
 }
 
@@ -26,6 +36,6 @@ const pkg = JSON.parse(readFileSync('package.json', 'utf8')) as { version: strin
 
 export const buildInfo = {
   version: pkg.version,
-  contentHash: hashTree(['content', 'src/core', 'src/calculators']),
+  contentHash: hashTree([['content', contentDir()], ['src/core', 'src/core'], ['src/calculators', 'src/calculators']]),
   built: new Date().toISOString().slice(0, 10),
 } as const;

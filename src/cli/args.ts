@@ -9,6 +9,22 @@ export class UsageError extends Error {
   override name = 'UsageError';
 }
 
+/** Options that take a value (`--pdf out.pdf` or `--pdf=out.pdf`). */
+export const VALUE_FLAGS: readonly string[] = ['record', 'pdf', 'paper', 'base', 'site', 'content', 'title', 'by', 'calc', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date'];
+
+/**
+ * Refuses any option the command does not read (a typo or an option of another command would
+ * otherwise be ignored silently), and `--in` where the command takes no inputs.
+ */
+export function requireKnownOptions(command: string, args: ParsedArgs, options: readonly string[], takesInputs: boolean): void {
+  for (const k of args.flags.keys()) {
+    if (k === 'help' || options.includes(k)) continue;
+    const list = options.length ? options.map((o) => `--${o}`).join(', ') : 'none';
+    throw new UsageError(`${command} does not take --${k}; its options: ${list}${takesInputs ? ', --in key=value' : ''}`);
+  }
+  if (!takesInputs && args.inputs.length) throw new UsageError(`${command} does not take --in`);
+}
+
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positionals: string[] = [];
   const flags = new Map<string, string | true>();
@@ -26,8 +42,9 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
       if (eq > 0) flags.set(a.slice(2, eq), a.slice(eq + 1));
       else {
         const next = argv[i + 1];
-        const takesValue = ['record', 'pdf', 'paper', 'out', 'base', 'site', 'content', 'title', 'by', 'calc', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date'].includes(a.slice(2));
-        if (takesValue && next !== undefined) { flags.set(a.slice(2), next); i++; } else flags.set(a.slice(2), true);
+        const takesValue = VALUE_FLAGS.includes(a.slice(2));
+        if (takesValue && next === undefined) throw new UsageError(`${a} needs a value`);
+        if (takesValue) { flags.set(a.slice(2), next!); i++; } else flags.set(a.slice(2), true);
       }
     } else positionals.push(a);
   }

@@ -4,7 +4,8 @@
  */
 import { DampbookError } from '../core/errors.ts';
 import { SheetError } from '../sheets/print.ts';
-import { parseArgs, UsageError, type ParsedArgs } from './args.ts';
+import { escapeControls } from './escape.ts';
+import { parseArgs, requireKnownOptions, UsageError, type ParsedArgs } from './args.ts';
 import { calc } from './commands/calc.ts';
 import { check } from './commands/check.ts';
 import { list } from './commands/list.ts';
@@ -13,28 +14,35 @@ import { sheet } from './commands/sheet.ts';
 
 type Command = (args: ParsedArgs, out: (s: string) => void) => number | Promise<number>;
 
-export const commands: Record<string, { run: Command; help: string }> = {
-  list: { run: list, help: 'list [--json]                      every calculator with its inputs and outputs (SI units)' },
-  calc: { run: calc, help: 'calc <id> --in key=value … [--json] evaluate a calculator (SI values, or "25 lb")\n  dampbook calc --record file.json [--json]   recompute a saved record and report differences' },
-  check: { run: check, help: 'check [--content dir]               validate every page and run every verification case' },
-  new: { run: newPage, help: 'new <folder/id> [--title …] [--by …] [--calc id]   scaffold a draft page' },
-  sheet: { run: sheet, help: 'sheet <page> [--in k=v …] [--paper a4|letter] [--project … --project-no … --calc-no … --prepared-by … --checked-by … --date …] [--site dist] --pdf out.pdf' },
+/** Each command's options (besides --help) and whether it reads --in. */
+interface CommandSpec { run: Command; help: string; options: readonly string[]; inputs: boolean }
+
+export const commands: Record<string, CommandSpec> = {
+  list: { run: list, options: ['json'], inputs: false, help: 'list [--json]                      every calculator with its inputs and outputs (SI units)' },
+  calc: { run: calc, options: ['json', 'record', 'content'], inputs: true, help: 'calc <id> --in key=value … [--json] evaluate a calculator (SI values, or "25 lb")\n  dampbook calc --record file.json [--json]   recompute a saved record and report differences' },
+  check: { run: check, options: ['content'], inputs: false, help: 'check [--content dir]               validate every page and run every verification case' },
+  new: { run: newPage, options: ['title', 'by', 'calc', 'content'], inputs: false, help: 'new <folder/id> [--title …] [--by …] [--calc id]   scaffold a draft page' },
+  sheet: { run: sheet, options: ['pdf', 'paper', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date', 'site', 'base'], inputs: true, help: 'sheet <page> [--in k=v …] [--paper a4|letter] [--project … --project-no … --calc-no … --prepared-by … --checked-by … --date …] [--site dist] --pdf out.pdf' },
 };
 
-function usage(): string {
-  return ['usage: dampbook <command> …', ...Object.values(commands).map((c) => `  dampbook ${c.help}`)].join('\n');
+function usage(): string[] {
+  return ['usage: dampbook <command> …', ...Object.values(commands).flatMap((c) => `  dampbook ${c.help}`.split('\n'))];
 }
 
-export async function main(argv: readonly string[], out = (s: string) => console.log(s), err = (s: string) => console.error(s)): Promise<number> {
+export async function main(argv: readonly string[], rawOut = (s: string) => console.log(s), rawErr = (s: string) => console.error(s)): Promise<number> {
+  // every message is one line with control characters escaped (inputs, records and pages are untrusted)
+  const out = (s: string) => rawOut(escapeControls(s));
+  const err = (s: string) => rawErr(escapeControls(s));
   try {
     const args = parseArgs(argv);
     const name = args.positionals[0];
-    if (!name || name === 'help' || args.flags.has('help')) { out(usage()); return name ? 0 : 2; }
+    if (!name || name === 'help' || args.flags.has('help')) { for (const l of usage()) out(l); return name ? 0 : 2; }
     const cmd = commands[name];
     if (!cmd) throw new UsageError(`unknown command '${name}'; commands: ${Object.keys(commands).join(', ')} (dampbook help shows usage)`);
+    requireKnownOptions(name, args, cmd.options, cmd.inputs);
     return await cmd.run(args, out);
   } catch (e) {
-    if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) err(e.stack ?? e.message);
+    if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) for (const l of (e.stack ?? e.message).split('\n')) err(l);
     else if (e instanceof DampbookError || e instanceof UsageError || e instanceof SheetError) err(`dampbook: ${e.message}`);
     else err(`dampbook: internal error: ${e instanceof Error ? e.message : String(e)} (set DAMPBOOK_DEBUG=1 for details)`);
     return e instanceof UsageError ? 2 : 1;

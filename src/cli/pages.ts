@@ -3,10 +3,11 @@
  * pages, as in src/content.config.ts), its YAML frontmatter validated with the same schema the
  * site build uses. YAML 1.2 core rules, as Astro's js-yaml parser applies them (`n`, `y`, `on` stay strings; dates are coerced by the schema).
  */
-import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { lstatSync, readdirSync, realpathSync, statSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { parse } from 'yaml';
 import { pageSchema, type PageMeta } from '../content/schema.ts';
+import { FileReadError, readBoundedFile } from './readFile.ts';
 
 export interface PageFile {
   /** Path as given (relative to the working directory when the content dir is relative). */
@@ -18,32 +19,70 @@ export interface PageFile {
   readonly errors: readonly string[];
 }
 
-function walk(dir: string, out: string[] = []): string[] {
-  for (const name of readdirSync(dir).sort()) {
-    const p = join(dir, name);
-    if (statSync(p).isDirectory()) walk(p, out);
-    else if (name.endsWith('.mdx') && !name.startsWith('_')) out.push(p);
-  }
-  return out;
+/** A folder entry that cannot be read (dangling link, link loop, no permission): reported, not fatal. */
+interface Entry { readonly file: string; readonly reason?: string }
+
+function why(e: unknown): string {
+  const code = (e as { code?: string }).code;
+  if (code === 'ENOENT') return 'dangling symbolic link (its target does not exist)';
+  if (code === 'ELOOP') return 'symbolic link loop';
+  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
+  return `cannot be read (${code ?? 'unknown error'})`;
 }
+
+/**
+ * Every page file under `dir`. A folder reached twice (a link back to a parent) is walked once;
+ * an entry that cannot be read is listed with its reason and the walk goes on.
+ */
+function walk(dir: string, out: Entry[], seen: Set<string>): void {
+  let real: string;
+  try { real = realpathSync(dir); } catch (e) { out.push({ file: dir, reason: why(e) }); return; }
+  if (seen.has(real)) return;
+  seen.add(real);
+  let names: string[];
+  try { names = readdirSync(dir).sort(); } catch (e) { out.push({ file: dir, reason: why(e) }); return; }
+  for (const name of names) {
+    const p = join(dir, name);
+    let isDir: boolean;
+    try { isDir = statSync(p).isDirectory(); } catch (e) {
+      if (name.endsWith('.mdx') || lstatSync(p).isSymbolicLink()) out.push({ file: p, reason: why(e) });
+      continue;
+    }
+    if (isDir) walk(p, out, seen);
+    else if (name.endsWith('.mdx') && !name.startsWith('_')) out.push({ file: p });
+  }
+}
+
+/** Largest page file read (a page is text; a bigger file is reported, not read). */
+const MAX_PAGE_BYTES = 16 * 1024 * 1024;
 
 const FRONTMATTER = /^---\r?\n([\s\S]*?)\r?\n---(?:\r?\n|$)/;
 
 export function readPage(file: string, contentDir: string): PageFile {
   const entry = relative(contentDir, file).split(sep).join('/').replace(/\.mdx$/, '').toLowerCase();
-  const m = FRONTMATTER.exec(readFileSync(file, 'utf8'));
-  if (!m) return { file, entry, errors: ['no frontmatter: the file must start with a --- block'] };
+  let text: string;
+  try { text = readBoundedFile(file, MAX_PAGE_BYTES).text; } catch (e) { return { file, entry, errors: [e instanceof FileReadError ? e.message : why(e)] }; }
+  return { file, entry, ...parsePage(text) };
+}
+
+/** A page's frontmatter checked with the site's schema: the metadata, or problems naming each field. */
+export function parsePage(text: string): { meta?: PageMeta; errors: string[] } {
+  // a byte-order mark is not part of the page (the site build ignores it too)
+  const m = FRONTMATTER.exec(text.replace(/^\uFEFF/, ''));
+  if (!m) return { errors: ['no frontmatter: the file must start with a --- block'] };
   let data: unknown;
   try {
     data = parse(m[1]!, { schema: 'core' });
   } catch (e) {
-    return { file, entry, errors: [`frontmatter is not valid YAML: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`] };
+    return { errors: [`frontmatter is not valid YAML: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`] };
   }
   const r = pageSchema.safeParse(data ?? {});
-  if (!r.success) return { file, entry, errors: r.error.issues.map((i) => `${i.path.join('.') || '(frontmatter)'}: ${i.message}`) };
-  return { file, entry, meta: r.data, errors: [] };
+  if (!r.success) return { errors: r.error.issues.map((i) => `${i.path.join('.') || '(frontmatter)'}: ${i.message}`) };
+  return { meta: r.data, errors: [] };
 }
 
 export function readPages(contentDir: string): PageFile[] {
-  return walk(contentDir).map((f) => readPage(f, contentDir));
+  const entries: Entry[] = [];
+  walk(contentDir, entries, new Set());
+  return entries.map((e) => (e.reason === undefined ? readPage(e.file, contentDir) : { file: e.file, entry: relative(contentDir, e.file).split(sep).join('/'), errors: [e.reason] }));
 }

@@ -6,10 +6,32 @@
  * anything on the page or in a file changes, and failures are one clear message.
  */
 import { z } from 'zod';
+import type { CalculatorDefinition } from '../calculators/types.ts';
 
 export const RECORD_FORMAT = 'dampbook-record';
-/** Largest record accepted, in characters (a long pasted CSV input fits; a flood does not). */
-export const MAX_RECORD_CHARS = 2_000_000;
+/**
+ * Room for everything in a record but its text inputs (numbers, units, names, outputs, hand-offs),
+ * in characters.
+ */
+const RECORD_OVERHEAD = 100_000;
+
+/**
+ * Largest record text of one calculator, in characters: its text inputs at their own maxLength
+ * (the one limit on a text's length, checked again by evaluate() on replay), each written by
+ * JSON.stringify with at most 6 characters per character (`\u001f`), plus the rest.
+ */
+export function recordCharLimit(calc: CalculatorDefinition): number {
+  let text = 0;
+  for (const d of calc.inputs) if (d.kind === 'text') text += d.maxLength;
+  return 6 * text + RECORD_OVERHEAD;
+}
+
+/**
+ * Largest record accepted before its calculator is known, in characters: a flood guard at least
+ * recordCharLimit() of every calculator (test/records/limits.test.ts keeps it so), so a record of
+ * a valid calculation is never refused by size.
+ */
+export const MAX_RECORD_CHARS = 32_000_000;
 /** Keys that could reach an object's prototype: refused anywhere in a record. */
 const FORBIDDEN_KEYS = new Set(['__proto__', 'constructor', 'prototype']);
 const MAX_DEPTH = 6;
@@ -17,7 +39,8 @@ const KEY = /^[A-Za-z][A-Za-z0-9_]{0,39}$/;
 
 const quantity = z
   .object({
-    value: z.union([z.number().finite(), z.string().max(1_000_000)]),
+    // a text's length is limited by its input's own maxLength (checked by evaluate() on replay)
+    value: z.union([z.number().finite(), z.string()]),
     unit: z.string().max(32).regex(/^[^<>&"]*$/, 'plain unit text').optional(),
   })
   .strict();
@@ -69,10 +92,16 @@ export function validateRecord(data: unknown): RecordParse {
   return { ok: false, message: `Not a valid record: ${where}: ${issue.message}.` };
 }
 
-/** Parses record text (a file or a stored string). Never throws. */
-export function parseRecord(text: string): RecordParse {
+/**
+ * Parses record text (a file or a stored string); a leading UTF-8 byte-order mark is ignored, as
+ * the browser's File.text() does. With `calc`, the size limit is that calculator's own
+ * (recordCharLimit). Never throws.
+ */
+export function parseRecord(text: string, calc?: CalculatorDefinition): RecordParse {
   if (typeof text !== 'string') return { ok: false, message: 'Not a valid record: not text.' };
-  if (text.length > MAX_RECORD_CHARS) return { ok: false, message: `Not a valid record: ${text.length} characters; at most ${MAX_RECORD_CHARS}.` };
+  const limit = calc ? recordCharLimit(calc) : MAX_RECORD_CHARS;
+  if (text.length > limit) return { ok: false, message: `Not a valid record: ${text.length} characters; at most ${limit}.` };
+  if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
   let data: unknown;
   try {
     data = JSON.parse(text);

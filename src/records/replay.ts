@@ -3,10 +3,10 @@
  * SI, recomputes through the same evaluate() as the page and the CLI, and compares every
  * recorded output. Differences in page revision or core version become warnings.
  */
-import { evaluate } from '../calculators/evaluate.ts';
-import type { CalculatorDefinition, Outputs, Values } from '../calculators/types.ts';
-import { DampbookError } from '../core/errors.ts';
-import { findUnit, fromSI, siUnit, toSI } from '../core/units/index.ts';
+import { evaluate, rangeOf, siOnly } from '../calculators/evaluate.ts';
+import type { CalculatorDefinition, InputDef, Outputs, Values } from '../calculators/types.ts';
+import { DampbookError, InputRangeError } from '../core/errors.ts';
+import { findUnit, fromSI, siSymbol, siUnit, toSI } from '../core/units/index.ts';
 import { RECORD_FORMAT, type CalcRecord, type Quantity } from './record.ts';
 
 /**
@@ -65,6 +65,8 @@ export type Replay =
 function rawInputs(calc: CalculatorDefinition, rec: CalcRecord): { raw: Record<string, number | string>; shown: Record<string, Shown> } {
   const raw: Record<string, number | string> = Object.create(null);
   const shown: Record<string, Shown> = Object.create(null);
+  // the record's choices, for inputs accepted in SI base units only under some choices (siOnlyWhen)
+  const choices: Values = Object.fromEntries(Object.entries(rec.inputs).filter(([k, q]) => calc.inputs.some((d) => d.key === k && d.kind === 'choice') && typeof q.value === 'string').map(([k, q]) => [k, q.value]));
   for (const [key, q] of Object.entries(rec.inputs)) {
     const def = calc.inputs.find((d) => d.key === key);
     if (!def) throw new Error(`input '${key}' is not an input of ${calc.id}`);
@@ -75,6 +77,9 @@ function rawInputs(calc: CalculatorDefinition, rec: CalcRecord): { raw: Record<s
     }
     if (typeof q.value !== 'number') throw new Error(`input '${key}' must be a number`);
     const u = q.unit === undefined ? siUnit(def.kind) : findUnit(def.kind, q.unit);
+    if (u.id !== siUnit(def.kind).id && siOnly(def, choices)) {
+      throw new InputRangeError(key, `${q.value} ${u.symbol}`, rangeOf(def as Extract<InputDef, { min: number }>), siSymbol(def.kind), `give a plain number in SI base units here: ${def.siOnlyWhen!.why}`);
+    }
     raw[key] = toSI(q.value, u);
     shown[key] = { value: q.value, unit: u.id };
   }

@@ -9,10 +9,15 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
+import { createHash } from 'node:crypto';
+import { defaults, isActive } from '../../src/calculators/evaluate.ts';
+import { getCalculator } from '../../src/calculators/registry.ts';
+import { main } from '../../src/cli/main.ts';
+import { formatNumber } from '../../src/components/internal/format.ts';
 import { serveStatic, type Served } from '../../src/server/staticServer.ts';
 import { printSheet } from '../../src/sheets/print.ts';
 import { launch, watchedPage } from '../helpers/browser.ts';
-import { ROOT_BUILD } from '../helpers/site.ts';
+import { ROOT_BUILD, SUB_BASE, SUB_BUILD } from '../helpers/site.ts';
 
 let server: Served;
 let browser: Browser;
@@ -78,6 +83,86 @@ describe('printed calculation sheet', () => {
     await expect(printSheet({ site: ROOT_BUILD, page: 'no-such-page', pdf: join(tmp, 'x.pdf') })).rejects.toThrow(/no page 'no-such-page'/);
     await expect(printSheet({ site: ROOT_BUILD, page: 'sdof', pdf: join(tmp, 'x.pdf'), inputs: [['mass', '3']] })).rejects.toThrow(/no input 'mass'/);
     await expect(printSheet({ site: ROOT_BUILD, page: 'sdof', pdf: join(tmp, 'x.pdf'), inputs: [['m', '-3']] })).rejects.toThrow(/invalid input m/);
+  });
+});
+
+async function cli(...argv: string[]): Promise<{ code: number; out: string; err: string }> {
+  const out: string[] = [];
+  const err: string[] = [];
+  const code = await main(argv, (x) => out.push(x), (x) => err.push(x));
+  return { code, out: out.join('\n'), err: err.join('\n') };
+}
+
+describe('dampbook sheet prints the data it was given', () => {
+  // a free decay x = e^(−ζωn t)·cos(ωd t) with ζ = 0.05 and fn = 2 Hz, 200 samples/s for 5 s
+  // (closed form, Rao, Mechanical Vibrations, 6th ed., §2.6): a record unlike the built-in demo
+  const zeta = 0.05;
+  const wn = 2 * Math.PI * 2;
+  const wd = wn * Math.sqrt(1 - zeta * zeta);
+  const rows = ['time [s], x [mm]'];
+  for (let i = 0; i <= 1000; i++) { const t = i / 200; rows.push(`${t.toFixed(3)}, ${(10 * Math.exp(-zeta * wn * t) * Math.cos(wd * t)).toFixed(6)}`); }
+  const csvText = `${rows.join('\n')}\n`;
+
+  it('reads --in record=@file.csv like calc and prints its results, file name, rows and SHA-256', async () => {
+    const csv = join(tmp, 'mount-7.csv');
+    writeFileSync(csv, csvText);
+    const c = await cli('calc', 'ring-down', '--in', `record=@${csv}`, '--json');
+    expect(c.code, c.err).toBe(0);
+    const computed = (JSON.parse(c.out) as { outputs: { zeta: number } }).outputs.zeta;
+    // ζ from the peaks of the closed-form decay: 0.05 (closed form; the fit reproduces it to 1 %)
+    expect(Math.abs(computed - zeta) / zeta).toBeLessThan(0.01);
+    const pdf = join(tmp, 'ring.pdf');
+    const s = await cli('sheet', 'ring-down', '--in', `record=@${csv}`, '--site', ROOT_BUILD, '--calc-no', 'TW-077-C-011', '--pdf', pdf);
+    expect(s.code, s.err).toBe(0);
+    // reading order (not layout): the summary line wraps inside the inputs column
+    const text = execFileSync('pdftotext', ['-raw', pdf, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+    const sha = createHash('sha256').update(csvText, 'utf8').digest('hex').slice(0, 12);
+    expect(text).toContain(`mount-7.csv, ${rows.length} rows, ${csvText.length} characters, sha256 ${sha}`);
+    expect(text).toContain(`Damping ratio ζ ${formatNumber(computed)}`);
+    expect(text).toContain('TW-077-C-011');
+  }, 90_000);
+
+  it('names a text input left at the page default on the sheet', async () => {
+    const pdf = join(tmp, 'profile.pdf');
+    // every required input that applies with a profile, at its definition default (design values of the demo)
+    const def = getCalculator('recorded-motion')!;
+    const given = defaults(def);
+    const ins = def.inputs.filter((d) => d.required && d.kind !== 'text' && isActive(d, given)).flatMap((d) => ['--in', `${d.key}=${String(d.default)}`]);
+    const s = await cli('sheet', 'recorded-motion', ...ins, '--site', ROOT_BUILD, '--pdf', pdf);
+    expect(s.code, s.err).toBe(0);
+    const text = execFileSync('pdftotext', ['-raw', pdf, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+    expect(text).toMatch(/page default, \d+ rows, \d+ characters, sha256 [0-9a-f]{12}/);
+  }, 90_000);
+
+  it('computes with the value calc computes with (a 212-character m equal to 25)', async () => {
+    const m = `${'0'.repeat(210)}25`;
+    expect(m).toHaveLength(212);
+    const c = await cli('calc', 'sdof', '--in', `m=${m}`, '--in', 'k=4000', '--in', 'c=40', '--json');
+    expect(c.code, c.err).toBe(0);
+    expect((JSON.parse(c.out) as { inputs: { m: number } }).inputs.m).toBe(25);
+    const pdf = join(tmp, 'm212.pdf');
+    const s = await cli('sheet', 'sdof', '--in', `m=${m}`, '--in', 'k=4000', '--in', 'c=40', '--site', ROOT_BUILD, '--pdf', pdf);
+    expect(s.code, s.err).toBe(0);
+    const text = pdfText(pdf);
+    expect(text).toMatch(/Moving mass\s+25\s+kg/);
+    // ωn = √(4000/25) = 12.65 rad/s (closed form, Rao 6th ed. §2.6)
+    expect(text).toMatch(/12\.65/);
+  }, 90_000);
+
+  it('says the base does not match for the real sub-path build, and prints it with --base', async () => {
+    const s = await cli('sheet', 'sdof', '--in', 'm=10', '--in', 'k=4000', '--in', 'c=40', '--site', SUB_BUILD, '--pdf', join(tmp, 'sub.pdf'));
+    expect(s.code).toBe(1);
+    expect(s.err).toBe(`dampbook: the site in ${SUB_BUILD} was built for the base ${SUB_BASE}, not /: give --base ${SUB_BASE}`);
+    const ok = await cli('sheet', 'sdof', '--in', 'm=10', '--in', 'k=4000', '--in', 'c=40', '--site', SUB_BUILD, '--base', SUB_BASE, '--pdf', join(tmp, 'sub.pdf'));
+    expect(ok.code, ok.err).toBe(0);
+  }, 90_000);
+
+  it('refuses an invalid choice like calc, without printing', async () => {
+    const pdf = join(tmp, 'power.pdf');
+    const c = await cli('calc', 'energy-per-cycle', '--in', 'law=Power', '--in', 'c=1500');
+    const s = await cli('sheet', 'energy-per-cycle', '--in', 'law=Power', '--in', 'c=1500', '--site', ROOT_BUILD, '--pdf', pdf);
+    expect(s.code).not.toBe(0);
+    expect(s.err).toBe(c.err);
   });
 });
 

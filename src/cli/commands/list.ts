@@ -15,7 +15,7 @@ export function list(args: ParsedArgs, out: (s: string) => void): number {
     })),
     outputs: c.outputs.map((o) => ({ key: o.key, kind: o.kind, unit: o.kind === 'text' ? null : siSymbol(o.kind), label: o.label, optional: Boolean(o.optional) })),
   }));
-  if (args.flags.has('json')) { out(JSON.stringify(data, null, 2)); return 0; }
+  if (args.flags.has('json')) { for (const l of JSON.stringify(data, null, 2).split('\n')) out(l); return 0; }
   for (const c of data) {
     out(`${c.id} — ${c.title}`);
     out(`  in:  ${c.inputs.map((i) => `${i.key}${i.unit ? ` [${i.unit}]` : i.kind === 'choice' ? ` (${(i.options ?? []).join('|')})` : ''}`).join(', ')}`);

@@ -3,6 +3,7 @@ import { dirname, join } from 'node:path';
 import { getCalculator } from '../../calculators/registry.ts';
 import { TOPICS } from '../../content/schema.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
+import { parsePage } from '../pages.ts';
 
 const TOPIC_OF_FOLDER: Record<string, (typeof TOPICS)[number]> = {
   oscillators: 'Oscillators', 'damping-tests': 'Damping from tests', 'damper-laws': 'Damper laws', duty: 'Duty cycles', thermal: 'Thermal rating', handbook: 'Handbook',
@@ -67,6 +68,9 @@ ${calcId ? `<Calculator id="${calcId}" />` : `{/* <Calculator id="…" />  — s
 
 A worked example from one of the demo projects (DEVELOPERS.md, "The demo scenario").
 `;
+  // what `check` (and the build) would refuse is refused here, before anything is written
+  const problems = parsePage(text).errors;
+  if (problems.length) throw new UsageError(`not written: the page would fail check: ${problems.join('; ')}${problems.some((p) => p.startsWith('title')) ? ' (give --title "…")' : ''}`);
   mkdirSync(dirname(file), { recursive: true });
   writeFileSync(file, text, { flag: 'wx' });
   out(`wrote ${file} (draft, revision A); fill the frontmatter, then run: npx dampbook check`);

@@ -1,9 +1,10 @@
-import { existsSync, readFileSync, statSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { getCalculator } from '../../calculators/registry.ts';
 import { MAX_RECORD_CHARS, parseRecord } from '../../records/record.ts';
 import { replayRecord } from '../../records/replay.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
 import { readPages } from '../pages.ts';
+import { FileReadError, readBoundedFile } from '../readFile.ts';
 
 function coreVersion(): string {
   return (JSON.parse(readFileSync(new URL('../../../package.json', import.meta.url), 'utf8')) as { version: string }).version;
@@ -17,13 +18,16 @@ function coreVersion(): string {
 export function recordCheck(args: ParsedArgs, out: (s: string) => void): number {
   const file = args.flags.get('record');
   if (typeof file !== 'string') throw new UsageError('--record needs a file: dampbook calc --record record.json');
-  if (!existsSync(file)) throw new UsageError(`cannot read ${file}`);
-  if (statSync(file).size > MAX_RECORD_CHARS * 4) throw new UsageError(`${file}: too large for a record`);
-  const parsed = parseRecord(readFileSync(file, 'utf8'));
+  let text: string;
+  // regular files only, at most the limit + 1 bytes read (a UTF-16 unit is at most 3 UTF-8 bytes)
+  try { text = readBoundedFile(file, MAX_RECORD_CHARS * 3 + 3).text; } catch (e) { throw e instanceof FileReadError ? new UsageError(e.message) : e; }
+  const parsed = parseRecord(text);
   if (!parsed.ok) throw new UsageError(`${file}: ${parsed.message}`);
   const rec = parsed.record;
   const calc = getCalculator(rec.calculator);
   if (!calc) throw new UsageError(`${file}: no calculator has the id '${rec.calculator}'`);
+  const own = parseRecord(text, calc);
+  if (!own.ok) throw new UsageError(`${file}: ${own.message}`);
   const dir = typeof args.flags.get('content') === 'string' ? (args.flags.get('content') as string) : 'content';
   const page = rec.page && existsSync(dir) ? readPages(dir).find((p) => p.meta?.id === rec.page!.id)?.meta : undefined;
   const r = replayRecord(calc, rec, { coreVersion: coreVersion(), page: page ? { id: page.id, revision: page.revision } : undefined });
