@@ -76,7 +76,7 @@ async function sheet(args: ParsedArgs, out: (s: string) => void): Promise<number
   const site = typeof args.flags.get('site') === 'string' ? (args.flags.get('site') as string) : 'dist';
   const id = basename(file).replace(/\.json$/, '');
   const base = typeof args.flags.get('base') === 'string' ? (args.flags.get('base') as string) : process.env.DAMPBOOK_BASE ?? '/';
-  const { url } = await printSheet({ site, base, page: `studies/${id}`, paper, pdf: resolve(pdf) });
+  const { url } = await printSheet({ site, base, page: paper === 'letter' ? `studies/letter/${id}` : `studies/${id}`, paper, pdf: resolve(pdf) });
   out(`wrote ${pdf} (${paper === 'letter' ? 'US Letter' : 'A4'}) from ${url}`);
   return 0;
 }
