@@ -4,9 +4,9 @@
  * method, sources and limits.
  */
 export const KEY_FORMULAS: Readonly<Record<string, readonly string[]>> = {
-  'road-power': ['\\bar P = c\\,\\sigma_{\\dot z}^2 \\;\\text{(linear, or equivalent linear } c\\text{)}', '\\bar P = \\pi^2 k_t\\,G_d(n_0)\\,n_0^2\\,V \\quad (w = 2)'],
+  'road-power': ['\\bar P = c_{eq}\\,\\sigma_{\\dot z}^2', '\\bar P = \\pi^2 k_t\\,G_d(n_0)\\,n_0^2\\,V \\quad (w = 2)'],
   'harmonic-duty': ['E = \\oint F\\,\\mathrm{d}x', '\\bar P = E\\,f'],
-  impact: ['E = \\tfrac12 m v^2 + F_p\\,s + m g s\\;(\\text{vertical})', '\\bar P = E\\,n/3600\\,\\text{s}'],
+  impact: ['E = \\tfrac12 m v^2 + F_p\\,s\\;(+\\,m g s)', '\\bar P = E\\,n/3600\\,\\text{s}'],
   'forced-response': ['\\bar P = \\tfrac12 c\\,\\omega^2 Z^2'],
   'steady-temperature': ['P = h_{conv} A (T_s - T_\\infty) + \\varepsilon\\sigma A (T_s^4 - T_{sur}^4)', 'UA = (h_{conv} + h_r) A'],
   'body-cooling': ['Q = h_{conv} A (T_s - T_\\infty) + \\varepsilon\\sigma A (T_s^4 - T_{sur}^4)', 'UA = (h_{conv} + h_r) A'],
