@@ -183,6 +183,18 @@ export interface CalculatorDefinition {
   readonly sources: readonly SourceRef[];
   /** Hand-off values compute may return in `Result.handoff` (see HandoffDef). */
   readonly handoffs?: readonly HandoffDef[];
+  /** Study vocabulary: inputs that take a study quantity, outputs that publish one (see StudyBindings). */
+  readonly study?: StudyBindings;
+}
+
+/**
+ * How a calculator joins a study (src/studies/): `inputs` maps an input key to the study quantity
+ * it takes, `publishes` maps an output key to the study quantity it sets for later steps. Names
+ * come from src/studies/quantities.ts; a quantity name means one physical thing in one kind.
+ */
+export interface StudyBindings {
+  readonly inputs?: Readonly<Record<string, string>>;
+  readonly publishes?: Readonly<Record<string, string>>;
 }
 
 /** Identity with checking: keeps the literal types and catches typos in keys at compile time. */

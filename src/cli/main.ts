@@ -11,6 +11,7 @@ import { check } from './commands/check.ts';
 import { list } from './commands/list.ts';
 import { newPage } from './commands/new.ts';
 import { sheet } from './commands/sheet.ts';
+import { study } from './commands/study.ts';
 
 type Command = (args: ParsedArgs, out: (s: string) => void) => number | Promise<number>;
 
@@ -23,6 +24,7 @@ export const commands: Record<string, CommandSpec> = {
   check: { run: check, options: ['content'], inputs: false, help: 'check [--content dir]               validate every page and run every verification case' },
   new: { run: newPage, options: ['title', 'by', 'calc', 'content'], inputs: false, help: 'new <folder/id> [--title …] [--by …] [--calc id]   scaffold a draft page' },
   sheet: { run: sheet, options: ['pdf', 'paper', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date', 'site', 'base'], inputs: true, help: 'sheet <page> [--in k=v …] [--paper a4|letter] [--project … --project-no … --calc-no … --prepared-by … --checked-by … --date …] [--site dist] --pdf out.pdf' },
+  study: { run: study, options: ['json', 'pdf', 'paper', 'site', 'base'], inputs: false, help: 'study run <study.json> [--json] | study check <study.json> | study sheet <study.json> --pdf out.pdf [--paper a4|letter]' },
 };
 
 function usage(): string[] {

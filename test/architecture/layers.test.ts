@@ -38,6 +38,7 @@ const FORBIDDEN: Readonly<Record<string, readonly string[]>> = {
   calculators: ['components', 'cli', 'layouts', 'pages', 'server', 'sheets', 'build', 'node', 'outside'],
   records: ['components', 'cli', 'layouts', 'pages', 'server', 'build'],
   cli: ['components', 'layouts', 'pages'],
+  studies: ['components', 'cli', 'layouts', 'pages', 'server', 'sheets', 'build'],
 };
 
 export function violations(file: string, source: string): string[] {

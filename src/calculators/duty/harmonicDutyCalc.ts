@@ -94,4 +94,8 @@ export const harmonicDutyCalc = defineCalculator({
     { key: 'chopra2017', locator: 'eq. 3.8.1; §3.9–3.10 (from memory)' },
     { key: 'fema274', locator: '§9.3 (from memory)' },
   ],
+  study: {
+    inputs: { X: 'strokeAmplitude', f: 'strokeFrequency', law: 'damperLaw', c: 'dampingCoefficient', Fref: 'powerLawForce', vref: 'powerLawVelocity', alpha: 'powerLawExponent' },
+    publishes: { P: 'meanPower' },
+  },
 });

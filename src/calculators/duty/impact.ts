@@ -105,4 +105,8 @@ export const impact = defineCalculator({
   sources: [
     { key: 'meriam2012', locator: '§3/5–3/6 (from memory)' },
   ],
+  study: {
+    inputs: { m: 'movingMass', v: 'impactSpeed', s: 'stopStroke' },
+    publishes: { P: 'meanPower' },
+  },
 });

@@ -155,4 +155,8 @@ export const roadPower = defineCalculator({
     { key: 'roberts2003', locator: 'ch. 5 (from memory)' },
     { key: 'newland1993', locator: 'ch. 7 (from memory)' },
   ],
+  study: {
+    inputs: { V: 'vehicleSpeed', ms: 'sprungMass', mu: 'unsprungMass', ks: 'springRate', kt: 'tyreRate', law: 'damperLaw', c: 'dampingCoefficient', Fref: 'powerLawForce', vref: 'powerLawVelocity', alpha: 'powerLawExponent' },
+    publishes: { P: 'meanPower' },
+  },
 });

@@ -92,4 +92,8 @@ export const bodyCoolingCalc = defineCalculator({
     { key: 'churchillBernstein1977', locator: 'cross flow' },
     { key: 'codata2018', locator: 'Stefan–Boltzmann constant' },
   ],
+  study: {
+    inputs: { Ts: 'steadyTemperature', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+    publishes: { UA: 'conductance' },
+  },
 });

@@ -133,4 +133,7 @@ export const dampingFadeCalc = defineCalculator({
     { key: 'dixon2007thermal', locator: 'fade rates 0.2–2 %/K (from memory)' },
     { key: 'brent1973', locator: 'ch. 4 (root refinement)' },
   ],
+  study: {
+    inputs: { cRef: 'dampingCoefficient', nu40: 'oilViscosity40', nu100: 'oilViscosity100', X: 'strokeAmplitude', f: 'strokeFrequency', P: 'meanPower', Tlimit: 'allowedTemperature', Cth: 'heatCapacity', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+  },
 });

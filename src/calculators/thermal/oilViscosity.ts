@@ -83,4 +83,7 @@ export const oilViscosityCalc = defineCalculator({
     { key: 'astmD341', locator: 'viscosity–temperature equation (from memory)' },
     { key: 'iso3448', locator: 'Table 1 (from memory)' },
   ],
+  study: {
+    inputs: { nu40: 'oilViscosity40', nu100: 'oilViscosity100' },
+  },
 });

@@ -77,4 +77,7 @@ export const powerRatingCalc = defineCalculator({
     },
   ],
   sources: [{ key: 'incropera2007', locator: 'eqs. 9.34, 9.26/9.27, 7.54, 9.64, 1.9; Table A.4 (from memory)' }],
+  study: {
+    inputs: { Tmax: 'allowedTemperature', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+  },
 });

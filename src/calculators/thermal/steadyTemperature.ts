@@ -83,4 +83,8 @@ export const steadyTemperatureCalc = defineCalculator({
     { key: 'incropera2007', locator: 'eqs. 9.34, 9.26/9.27, 7.54, 9.64, 1.9; Table A.4 (from memory)' },
     { key: 'brent1973', locator: 'ch. 4 (root finder)' },
   ],
+  study: {
+    inputs: { P: 'meanPower', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+    publishes: { Ts: 'steadyTemperature', UA: 'conductance' },
+  },
 });

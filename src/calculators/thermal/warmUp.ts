@@ -220,4 +220,8 @@ export const warmUpCalc = defineCalculator({
     { key: 'incropera2007', locator: '§5.1–5.3 lumped capacitance, eq. 5.10 Biot number; Tables A.1, A.3, A.5 (from memory)' },
     { key: 'hairer1993', locator: '§II.1 classical Runge–Kutta' },
   ],
+  study: {
+    inputs: { P: 'meanPower', Cth: 'heatCapacity', UA: 'conductance', Tamb: 'airTemperature', Tlimit: 'allowedTemperature', t: 'dutyLength', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+    publishes: { CthTotal: 'heatCapacity' },
+  },
 });

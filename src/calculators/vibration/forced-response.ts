@@ -143,4 +143,8 @@ export const forcedResponseCalc = defineCalculator({
     { key: 'rao2017', locator: '§3.4 response to harmonic force, §3.6 base excitation, §9.10 vibration isolation (from memory)' },
     { key: 'chopra2017', locator: 'Eq. (3.8.1) energy dissipated per cycle (mean power = E_D·f)' },
   ],
+  study: {
+    inputs: { c: 'dampingCoefficient', f: 'strokeFrequency' },
+    publishes: { P: 'meanPower', Z: 'strokeAmplitude' },
+  },
 });
