@@ -53,6 +53,8 @@ export function checkInput(def: InputDef, v: unknown, values: Values, fill: bool
       if (def.required && !fill) throw new InputRangeError(def.key, undefined, undefined, '', `choose one of ${allowed}`);
       v = def.default;
     }
+    // a choice whose options are numerals ('0'/'1') also takes the number (records and cases from before it was a choice)
+    if (typeof v === 'number' && def.options.some((o) => o.value === String(v))) v = String(v);
     if (typeof v !== 'string' || !def.options.some((o) => o.value === v)) throw new InputRangeError(def.key, shown(v), undefined, '', `choose one of ${allowed}`);
     return v;
   }

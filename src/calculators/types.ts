@@ -148,6 +148,8 @@ export interface ChartSeries {
   readonly style?: 'line' | 'dash' | 'points' | 'thin';
   /** Palette slot 0..5 (colours live in CSS, not here). */
   readonly tone?: number;
+  /** false: drawn but not listed in the legend (e.g. the mirror half of an envelope). */
+  readonly legend?: false;
 }
 
 export interface Result {

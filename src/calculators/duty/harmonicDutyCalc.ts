@@ -1,6 +1,7 @@
 import { damperForce, DAMPER_LAW_KINDS, harmonicDuty } from '../../core/dampers/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
 import { describeLaw, lawFromValues, lawInputs } from './lawInputs.ts';
+import { q } from '../quantityText.ts';
 
 function setup(values: Values) {
   return { law: lawFromValues(values), X: num(values, 'X'), omega: 2 * Math.PI * num(values, 'f') };
@@ -45,14 +46,14 @@ export const harmonicDutyCalc = defineCalculator({
         id: 'loop', title: 'Force against stroke over one cycle',
         x: { label: 'Stroke', kind: 'length' }, y: { label: 'Force', kind: 'force' },
         series: [{ label: describeLaw(law), x, y: F, tone: 0 }],
-        summary: `The loop encloses ${(result.outputs.E as number).toPrecision(4)} J per cycle; peak force ${(result.outputs.Fpeak as number).toPrecision(4)} N.`,
+        summary: `The loop encloses ${q(result.outputs.E as number, 'energy')} per cycle; peak force ${q(result.outputs.Fpeak as number, 'force')}.`,
       },
       {
         id: 'power-frequency', title: 'Mean power against frequency at this stroke',
         x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
         series: [{ label: describeLaw(law), x: fs, y: Pf, tone: 0 }],
         markers: [{ x: f0, label: 'this frequency' }],
-        summary: `Mean power from ${Pf[0]!.toPrecision(3)} W at ${fs[0]!.toPrecision(3)} Hz to ${Pf[Pf.length - 1]!.toPrecision(3)} W at ${fs[fs.length - 1]!.toPrecision(3)} Hz; ${(result.outputs.P as number).toPrecision(4)} W at ${f0.toPrecision(3)} Hz.`,
+        summary: `Mean power from ${q(Pf[0]!, 'power', 3)} at ${q(fs[0]!, 'frequency', 3)} to ${q(Pf[Pf.length - 1]!, 'power', 3)} at ${q(fs[fs.length - 1]!, 'frequency', 3)}; ${q(result.outputs.P as number, 'power')} at ${f0.toPrecision(3)} Hz.`,
       },
     ];
   },

@@ -1,11 +1,10 @@
 import { InputRangeError } from '../../core/errors.ts';
 import { impactEnergy, linearStop, STANDARD_GRAVITY } from '../../core/duty/index.ts';
-import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
+import { choice, defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
+import { q } from '../quantityText.ts';
 
 function setup(values: Values) {
-  const vert = num(values, 'vertical');
-  if (vert !== 0 && vert !== 1) throw new InputRangeError('vertical', vert, { min: 0, max: 1 }, '', '0 = horizontal, 1 = vertical travel downward onto the stop');
-  const i = { m: num(values, 'm'), v: num(values, 'v'), Fp: num(values, 'Fp'), s: num(values, 's'), cph: num(values, 'cph'), vertical: vert === 1 };
+  const i = { m: num(values, 'm'), v: num(values, 'v'), Fp: num(values, 'Fp'), s: num(values, 's'), cph: num(values, 'cph'), vertical: choice(values, 'vertical') === '1' };
   const F0 = i.Fp + (i.vertical ? i.m * STANDARD_GRAVITY : 0);
   const ratio = num(values, 'vEndRatio');
   if (ratio === 0 && F0 > 0) throw new InputRangeError('vEndRatio', 0, { min: 0, max: 0.9, minExclusive: true }, '', 'a mass that is pushed on (drive force or gravity) is never stopped by a dashpot alone');
@@ -22,8 +21,9 @@ export const impact = defineCalculator({
     { key: 'v', label: 'Impact speed', kind: 'velocity', default: 1.5, min: 0, max: 20, minExclusive: true, required: true, help: 'Speed when the mass meets the stop.' },
     { key: 'Fp', label: 'Propelling force', kind: 'force', default: 60, min: 0, max: 1e7, required: true, help: 'Cylinder or drive force that keeps pushing through the stroke (0 if the drive is off).' },
     { key: 's', label: 'Stop stroke', kind: 'length', default: 0.025, min: 0, max: 2, minExclusive: true, required: true, help: 'Working stroke of the end-stop damper.' },
-    { key: 'cph', label: 'Impacts per hour', kind: 'dimensionless', default: 1200, min: 0, max: 1e6, required: true, help: 'Strokes of this stop per hour (cycles per hour).' },
-    { key: 'vertical', label: 'Vertical travel (0 or 1)', kind: 'dimensionless', default: 0, min: 0, max: 1, help: '0 = horizontal; 1 = vertical, moving down onto the stop, so gravity works through the stroke.' },
+    { key: 'cph', label: 'Impact rate', kind: 'eventRate', default: 1200, min: 0, max: 1e6, required: true, help: 'Strokes of this stop per hour (cycles per hour).' },
+    // option values stay '0'/'1' so the CLI contract `--in vertical=1` is unchanged
+    { key: 'vertical', label: 'Direction of travel', kind: 'choice', options: [{ value: '0', label: 'Horizontal' }, { value: '1', label: 'Vertical, moving down onto the stop' }], default: '0', help: 'Vertical travel downward lets gravity work through the stroke.' },
     { key: 'vEndRatio', label: 'Residual speed at end of stroke / impact speed (dashpot)', kind: 'dimensionless', default: 0.05, min: 0, max: 0.9, help: 'A dashpot cannot stop a mass that is pushed on; the linear stop is sized to leave this fraction of the impact speed for the hard stop (0 only without drive force or gravity).' },
   ],
   outputs: [
@@ -73,7 +73,7 @@ export const impact = defineCalculator({
         { label: 'linear dashpot c·v', x: t, y: v.map((vi) => lin.c * vi), tone: 0 },
         { label: 'ideal constant-force stop', x: [0, (2 * i.s) / i.v], y: [Favg, Favg], style: 'dash', tone: 1 },
       ],
-      summary: `The dashpot peaks at ${lin.Fpeak.toPrecision(3)} N on contact and falls as the mass slows; an ideal stop holds ${Favg.toPrecision(3)} N for ${((2 * i.s) / i.v * 1000).toPrecision(3)} ms.`,
+      summary: `The dashpot peaks at ${q(lin.Fpeak, 'force', 3)} on contact and falls as the mass slows; an ideal stop holds ${q(Favg, 'force', 3)} for ${((2 * i.s) / i.v * 1000).toPrecision(3)} ms.`,
     }];
   },
   verification: [

@@ -3,6 +3,7 @@ import { formatPowerProfile } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { demoDynoRecord, sineRecord } from './demoRecord.ts';
 import { lawFromValues, lawInputs } from './lawInputs.ts';
+import { q } from '../quantityText.ts';
 
 type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion> };
 // charts(values, result) receives the same values object compute saw: parse a long record once.
@@ -106,13 +107,13 @@ export const recordedMotionCalc = defineCalculator({
     return [
       { id: 'velocity', title: 'Damper velocity', x: { label: 'Time', kind: 'time' }, y: { label: 'Velocity', kind: 'velocity' },
         series: [{ label: 'velocity', x: vs.x, y: vs.y, style: 'thin', tone: 0 }],
-        summary: `Velocity over ${r.duration.toPrecision(3)} s; peak ${r.vPeak.toPrecision(3)} m/s, RMS ${r.vRms.toPrecision(3)} m/s.` },
+        summary: `Velocity over ${q(r.duration, 'time', 3)}; peak ${q(r.vPeak, 'velocity', 3)}, RMS ${q(r.vRms, 'velocity', 3)}.` },
       { id: 'force', title: 'Damper force', x: { label: 'Time', kind: 'time' }, y: { label: 'Force', kind: 'force' },
         series: [{ label: 'force', x: fs.x, y: fs.y, style: 'thin', tone: 1 }],
-        summary: `Force ${String(result.outputs.forceSource)}; peak ${r.Fpeak.toPrecision(4)} N.` },
+        summary: `Force ${String(result.outputs.forceSource)}; peak ${q(r.Fpeak, 'force')}.` },
       { id: 'power', title: 'Instantaneous power', x: { label: 'Time', kind: 'time' }, y: { label: 'Power', kind: 'power' },
         series: [{ label: 'F·v', x: ps.x, y: ps.y, style: 'thin', tone: 2 }, { label: 'mean', x: [ps.x[0]!, ps.x[ps.x.length - 1]!], y: [r.meanPower, r.meanPower], style: 'dash', tone: 3 }],
-        summary: `Instantaneous power F·v; mean ${r.meanPower.toPrecision(4)} W over the record, ${r.E.toPrecision(4)} J in all.` },
+        summary: `Instantaneous power F·v; mean ${q(r.meanPower, 'power')} over the record, ${q(r.E, 'energy')} in all.` },
     ];
   },
   verification: [

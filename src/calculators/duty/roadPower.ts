@@ -4,6 +4,7 @@ import {
 } from '../../core/duty/index.ts';
 import { choice, defineCalculator, num, optNum, type ChartSpec, type Values } from '../types.ts';
 import { lawInputs } from './lawInputs.ts';
+import { q as qty } from '../quantityText.ts';
 
 function setup(values: Values) {
   const cls = choice<string>(values, 'roadClass');
@@ -98,19 +99,19 @@ export const roadPower = defineCalculator({
         id: 'velocity-psd', title: 'Damper velocity PSD',
         x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'PSD', kind: 'velocityPsd', scale: 'log' },
         series: [{ label: 'damper velocity', x: f, y: g.map((e) => e.h.damperVelocity * e.gz), tone: 0 }],
-        summary: `Damper velocity PSD from 0.1 to 100 Hz; RMS ${(result.outputs.vRms as number).toPrecision(3)} m/s. Peaks sit at the body and wheel-hop modes.`,
+        summary: `Damper velocity PSD from 0.1 to 100 Hz; RMS ${qty(result.outputs.vRms as number, 'velocity', 3)}. Peaks sit at the body and wheel-hop modes.`,
       },
       {
         id: 'acceleration-psd', title: 'Body acceleration PSD',
         x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'PSD', kind: 'accelerationPsd', scale: 'log' },
         series: [{ label: 'body acceleration', x: f, y: g.map((e) => e.h.bodyAcceleration * e.gz), tone: 1 }],
-        summary: `Sprung-mass acceleration PSD; RMS ${(result.outputs.accRms as number).toPrecision(3)} m/s².`,
+        summary: `Sprung-mass acceleration PSD; RMS ${qty(result.outputs.accRms as number, 'acceleration', 3)}.`,
       },
       {
         id: 'power-speed', title: 'Mean damper power against speed, ISO 8608 classes (geometric means)',
         x: { label: 'Speed', kind: 'velocity' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
         series: classes,
-        summary: `Mean damper power rises in proportion to speed${s.road.w === 2 ? ' (exactly, for w = 2)' : ''} and by a factor 4 per class; class C at 20 m/s: ${pC.toPrecision(3)} W.`,
+        summary: `Mean damper power rises in proportion to speed${s.road.w === 2 ? ' (exactly, for w = 2)' : ''} and by a factor 4 per class; class C at ${qty(20, 'velocity', 3)}: ${qty(pC, 'power', 3)}.`,
       },
     ];
   },

@@ -2,6 +2,7 @@ import { adiabaticRise, storeyDampers } from '../../core/duty/index.ts';
 import { InputRangeError } from '../../core/errors.ts';
 import { formatPowerProfile } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
+import { q } from '../quantityText.ts';
 
 function setup(values: Values) {
   const n = num(values, 'n');
@@ -84,7 +85,7 @@ export const structuralDampers = defineCalculator({
       x: { label: 'Storey drift amplitude', kind: 'length' }, y: { label: 'Supplemental damping ratio', kind: 'dimensionless' },
       series: [{ label: `α = ${s.alpha}`, x: drifts, y: beta, tone: 0 }],
       markers: [{ x: s.drift, label: 'design drift' }],
-      summary: `With α = ${s.alpha} the damping added falls as drift^(α−1): ${(result.outputs.betaSup as number).toPrecision(3)} at the design drift of ${(s.drift * 1000).toPrecision(3)} mm.`,
+      summary: `With α = ${s.alpha} the damping added falls as drift^(α−1): ${(result.outputs.betaSup as number).toPrecision(3)} at the design drift of ${q(s.drift, 'length', 3)}.`,
     }];
   },
   verification: [

@@ -1,7 +1,7 @@
 import type { SimulationResult } from '../../core/simulation/index.ts';
 import type { ChartSpec } from '../types.ts';
+import { q } from '../quantityText.ts';
 
-const p4 = (x: number) => x.toPrecision(4);
 
 /** Time-history, loop and energy-audit charts of one simulation run (SI data). */
 export function simulationCharts(r: SimulationResult): ChartSpec[] {
@@ -13,19 +13,19 @@ export function simulationCharts(r: SimulationResult): ChartSpec[] {
       id: 'displacement', title: 'Displacement across the damper',
       x: { label: 'Time', kind: 'time' }, y: { label: 'Displacement z', kind: 'length' },
       series: [{ label: 'z(t)', x: h.t, y: h.x, tone: 0 }],
-      summary: `Over ${p4(tEnd)} s the stroke peaks at ${p4(r.xMax)} m and settles to ±${p4(r.xLastPeriod)} m in the last period.`,
+      summary: `Over ${q(tEnd, 'time')} the stroke peaks at ${q(r.xMax, 'length')} and settles to ±${q(r.xLastPeriod, 'length')} in the last period.`,
     },
     {
       id: 'force', title: 'Damper force',
       x: { label: 'Time', kind: 'time' }, y: { label: 'Damper force', kind: 'force' },
       series: [{ label: 'F_d(t)', x: h.t, y: h.force, tone: 1 }],
-      summary: `Peak damper force ${p4(r.forceMax)} N at peak stroke velocity up to ${p4(r.vMax)} m/s.`,
+      summary: `Peak damper force ${q(r.forceMax, 'force')} at peak stroke velocity up to ${q(r.vMax, 'velocity')}.`,
     },
     {
       id: 'loop', title: 'Force–displacement loops',
       x: { label: 'Displacement z', kind: 'length' }, y: { label: 'Damper force', kind: 'force' },
       series: [{ label: 'F_d against z', x: h.x, y: h.force, style: 'thin', tone: 2 }],
-      summary: `Each loop encloses the energy of one cycle; ${p4(r.dissipated)} J dissipated in all.`,
+      summary: `Each loop encloses the energy of one cycle; ${q(r.dissipated, 'energy')} dissipated in all.`,
     },
     {
       id: 'energy', title: 'Energy audit',
@@ -36,7 +36,7 @@ export function simulationCharts(r: SimulationResult): ChartSpec[] {
         { label: 'input work W', x: h.t, y: h.input, tone: 4 },
         { label: 'E_k + E_s + E_D − W (equals E₀)', x: h.t, y: balance, style: 'dash', tone: 5 },
       ],
-      summary: `Initial energy ${p4(r.E0)} J, input work ${p4(r.input)} J, dissipated ${p4(r.dissipated)} J; the balance holds to ${r.closure.toExponential(1)} of the energy scale ${p4(r.energyScale)} J.`,
+      summary: `Initial energy ${q(r.E0, 'energy')}, input work ${q(r.input, 'energy')}, dissipated ${q(r.dissipated, 'energy')}; the balance holds to ${r.closure.toExponential(1)} of the energy scale ${q(r.energyScale, 'energy')}.`,
     },
   ];
 }

@@ -1,6 +1,7 @@
 import { damperForce, equivalentDampingRatio, harmonicDuty, lawBreakpoints } from '../../core/dampers/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
 import { lawInputs, lawFromValues, stiffness } from './damperLawInputs.ts';
+import { q } from '../quantityText.ts';
 
 function setup(values: Values) {
   const X = num(values, 'X');
@@ -61,13 +62,13 @@ export const energyPerCycle = defineCalculator({
         id: 'loop', title: 'Force–displacement loop',
         x: { label: 'Stroke x', kind: 'length' }, y: { label: 'Damper force F', kind: 'force' },
         series: [{ label: 'F(x) over one cycle', x: loopX, y: loopF, tone: 0 }],
-        summary: `One cycle of stroke ±${X.toPrecision(3)} m at ${(omega / (2 * Math.PI)).toPrecision(3)} Hz: the loop encloses E_D = ${E.toPrecision(4)} J; peak force ${Fmax.toPrecision(4)} N.`,
+        summary: `One cycle of stroke ±${q(X, 'length', 3)} at ${q(omega / (2 * Math.PI), 'frequency', 3)}: the loop encloses E_D = ${q(E, 'energy')}; peak force ${q(Fmax, 'force')}.`,
       },
       {
         id: 'fv', title: 'Force–velocity curve',
         x: { label: 'Stroke velocity v (+ rebound)', kind: 'velocity' }, y: { label: 'Damper force F', kind: 'force' },
         series: [{ label: `${law.kind} law`, x: vs, y: fv, tone: 1 }],
-        summary: `Force of the ${law.kind} law from −${V.toPrecision(3)} to +${V.toPrecision(3)} m/s (positive = rebound); largest magnitude ${Fmax.toPrecision(4)} N.`,
+        summary: `Force of the ${law.kind} law from −${q(V, 'velocity', 3)} to +${q(V, 'velocity', 3)} (positive = rebound); largest magnitude ${q(Fmax, 'force')}.`,
       },
     ];
   },

@@ -3,6 +3,7 @@ import { readTimeSeries } from '../../core/records/index.ts';
 import { ringDown } from '../../core/vibration/index.ts';
 import { choice, defineCalculator, num, optNum, text, type ChartSpec, type Values } from '../types.ts';
 import { DEMO_RECORD, syntheticRingDown } from './ringDownRecords.ts';
+import { q } from '../quantityText.ts';
 
 function analyse(values: Values) {
   const series = readTimeSeries(text(values, 'record'), {
@@ -86,10 +87,10 @@ export const ringDownCalc = defineCalculator({
       series: [
         { label: 'record', x: t, y, style: 'thin', tone: 0 },
         { label: 'fitted envelope', x: t, y: env.map((e) => fit.offset + e), style: 'dash', tone: 1 },
-        { label: '−envelope', x: t, y: env.map((e) => fit.offset - e), style: 'dash', tone: 1 },
+        { label: 'envelope (lower)', legend: false, x: t, y: env.map((e) => fit.offset - e), style: 'dash', tone: 1 },
         { label: 'peaks used', x: fit.peaks.map((p) => p.t), y: fit.peaks.map((p) => p.y), style: 'points', tone: 3 },
       ],
-      summary: `${series.t.length} samples over ${(series.t[series.t.length - 1]! - series.t[0]!).toPrecision(3)} s; ${fit.peaks.length} peaks fitted with ζ = ${(result.outputs.zeta as number).toPrecision(3)}, f_d = ${(result.outputs.fd as number).toPrecision(4)} Hz, R² = ${fit.r2.toFixed(5)}.`,
+      summary: `${series.t.length} samples over ${q(series.t[series.t.length - 1]! - series.t[0]!, 'time', 3)}; ${fit.peaks.length} peaks fitted with ζ = ${(result.outputs.zeta as number).toPrecision(3)}, f_d = ${(result.outputs.fd as number).toPrecision(4)} Hz, R² = ${fit.r2.toFixed(5)}.`,
     }];
   },
   verification: [

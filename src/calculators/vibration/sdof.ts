@@ -3,6 +3,7 @@ import {
   naturalFrequency, qualityFactor, responseWindow,
 } from '../../core/vibration/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
+import { q } from '../quantityText.ts';
 
 function oscillator(values: Values) {
   return { m: num(values, 'm'), k: num(values, 'k'), c: num(values, 'c'), x0: num(values, 'x0'), v0: num(values, 'v0') };
@@ -66,7 +67,7 @@ export const sdof = defineCalculator({
       const amp = Math.hypot(p.x0, b / wd);
       const env = h.t.map((t) => amp * Math.exp(-zeta * wn * t));
       series.push({ label: 'decay envelope', x: h.t, y: env, style: 'dash', tone: 1 });
-      series.push({ label: '−envelope', x: h.t, y: env.map((e) => -e), style: 'dash', tone: 1 });
+      series.push({ label: 'envelope (lower)', legend: false, x: h.t, y: env.map((e) => -e), style: 'dash', tone: 1 });
     }
     const tEnd = h.t[h.t.length - 1] ?? 0;
     const peak = Math.max(...h.x.map(Math.abs));
@@ -77,7 +78,7 @@ export const sdof = defineCalculator({
         x: { label: 'Time', kind: 'time' },
         y: { label: 'Displacement', kind: 'length' },
         series,
-        summary: `Free response over ${tEnd.toPrecision(3)} s: largest displacement ${peak.toPrecision(3)} m, ${String(result.outputs.regime)} (ζ = ${zeta.toPrecision(3)}).`,
+        summary: `Free response over ${q(tEnd, 'time', 3)}: largest displacement ${q(peak, 'length', 3)}, ${String(result.outputs.regime)} (ζ = ${zeta.toPrecision(3)}).`,
       },
       {
         id: 'energy',
@@ -90,7 +91,7 @@ export const sdof = defineCalculator({
           { label: 'dissipated', x: h.t, y: h.dissipated, tone: 3 },
           { label: 'sum', x: h.t, y: h.total, style: 'dash', tone: 4 },
         ],
-        summary: `Initial energy ${h.initial.toPrecision(4)} J; kinetic + spring + dissipated stays equal to it within ${h.closure.toExponential(1)} (relative) over the window.`,
+        summary: `Initial energy ${q(h.initial, 'energy')}; kinetic + spring + dissipated stays equal to it within ${h.closure.toExponential(1)} (relative) over the window.`,
       },
     ];
   },

@@ -1,6 +1,7 @@
 import { abs, complex, div } from '../../core/complex/index.ts';
 import { naturalFrequency, tmdPeak, tmdResponse, tmdTuning, type TmdExcitation, type TmdSystem } from '../../core/vibration/index.ts';
 import { choice, defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
+import { q } from '../quantityText.ts';
 
 const TAU = 2 * Math.PI;
 
@@ -97,7 +98,7 @@ export const tmdTuningCalc = defineCalculator({
         { label: 'without absorber', x: betas.map((b) => b * f1), y: betas.map(bare), style: 'dash', tone: 2 },
         { label: 'worst frequency', x: [result.outputs.fpeak as number], y: [peak], style: 'points', tone: 3 },
       ],
-      summary: `With μ = ${s.mu} tuned to ω_a/ω₁ = ${s.tune.f.toPrecision(4)} and ζ_a = ${s.tune.zeta.toPrecision(3)}, the primary peaks at ${peak.toPrecision(4)} × static at ${(result.outputs.fpeak as number).toPrecision(4)} Hz; without the absorber the response at ${f1.toPrecision(3)} Hz is ${s.sys.zeta1 > 0 ? `${(1 / (2 * s.sys.zeta1)).toPrecision(3)} × static` : 'unbounded'}.`,
+      summary: `With μ = ${s.mu} tuned to ω_a/ω₁ = ${s.tune.f.toPrecision(4)} and ζ_a = ${s.tune.zeta.toPrecision(3)}, the primary peaks at ${peak.toPrecision(4)} × static at ${q(result.outputs.fpeak as number, 'frequency')}; without the absorber the response at ${q(f1, 'frequency', 3)} is ${s.sys.zeta1 > 0 ? `${(1 / (2 * s.sys.zeta1)).toPrecision(3)} × static` : 'unbounded'}.`,
     }];
   },
   verification: [

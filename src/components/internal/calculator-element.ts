@@ -9,9 +9,9 @@ import { evaluate, inputOrder, isActive, siOnly } from '../../calculators/evalua
 import { feedQuery, urlValue } from '../../calculators/feeds.ts';
 import type { CalculatorDefinition, Outputs, Result, Values } from '../../calculators/types.ts';
 import { DampbookError, InputRangeError } from '../../core/errors.ts';
-import { findUnit, fromSI, parseQuantity, type UnitSystem } from '../../core/units/index.ts';
+import { findUnit, fromSI, parseQuantity, toSI, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from './format.ts';
-import { parseTyped, readField } from './fieldState.ts';
+import { clip, parseTyped, readField, splitTyped, textSum } from './fieldState.ts';
 
 import { calculatorLoaders } from '../../calculators/loaders.ts';
 
@@ -51,26 +51,72 @@ export class CalculatorElement extends HTMLElement {
     return this.querySelector(`select[name="${CSS.escape(key)}.unit"]`);
   }
 
-  /** Fills fields from the page URL (untrusted: every value goes through the same checks as typing). */
+  /**
+   * Fills fields from the page URL (untrusted: every value goes through the same checks as typing),
+   * in dependency order: choices first (they decide which fields apply and which take SI only),
+   * then the unit system (which converts every number field, shown or hidden), then numbers and
+   * text. A plain number is SI; "22 kN/m" keeps its unit. A value the page does not take is said so
+   * at its field, never silently replaced by the default.
+   */
   private applyUrl(): void {
     const params = new URLSearchParams(location.search);
+    const inputs = this.calc!.inputs;
+    for (const def of inputs) {
+      if (def.kind !== 'choice') continue;
+      const raw = params.get(def.key);
+      const ctl = this.control(def.key);
+      if (raw === null || !ctl) continue;
+      if (def.options.some((o) => o.value === raw)) ctl.value = raw;
+      else this.showNote(def.key, `The link asked for “${clip(raw)}”, which is not an option here; the page default is shown.`);
+    }
     if (params.get('units') === 'US') this.setSystem('US');
-    for (const def of this.calc!.inputs) {
-      // text only where the definition allows it (fromUrl), then checked like typing
-      const raw = urlValue(def, params.get(def.key));
-      if (raw === undefined) continue;
+    for (const def of inputs) {
+      if (def.kind === 'choice') continue;
+      const rawAll = params.get(def.key);
       const ctl = this.control(def.key);
       if (!ctl) continue;
-      if (def.kind === 'text') { ctl.value = raw; continue; }
-      if (def.kind === 'choice') {
-        if (def.options.some((o) => o.value === raw)) ctl.value = raw;
+      if (def.kind === 'text') {
+        const sum = params.get(`${def.key}.sha`);
+        if (rawAll === null && sum !== null && sum !== textSum(def.default)) {
+          this.showNote(def.key, `This link was made with other data in this field (checksum ${clip(sum)}) than a link can carry; the page's own data is shown. Paste or load that data to reproduce the linked results.`);
+        }
+        if (rawAll === null) continue;
+        const raw = urlValue(def, rawAll);
+        if (raw === undefined) { this.showNote(def.key, def.fromUrl ? `The link's value for this field is too long (${rawAll.length} characters, at most ${def.maxLength}); the page's own data is shown.` : 'A link cannot fill this field; the page\'s own data is shown. Paste or load your data.'); continue; }
+        ctl.value = raw;
         continue;
       }
+      if (rawAll === null) continue;
+      const raw = urlValue(def, rawAll);
+      if (raw === undefined) { this.showNote(def.key, `The link's value for this field is too long (${rawAll.length} characters); the page default is shown.`); continue; }
       const sel = this.unitSelect(def.key);
+      const typed = splitTyped(raw, def.kind);
+      if (typed && sel && typed.unit && [...sel.options].some((o) => o.value === typed.unit)) {
+        sel.value = typed.unit;
+        sel.dataset.unit = typed.unit;
+        this.syncUnitLabel(def.key, sel);
+        ctl.value = typed.number;
+        continue;
+      }
       let si: number;
       try { si = parseQuantity(raw, def.kind); } catch { ctl.value = raw; continue; }
       ctl.value = sel ? formatInput(fromSI(si, findUnit(def.kind, sel.value))) : formatInput(si);
     }
+  }
+
+  /** A note at a field about where its value came from (not an error: the field still computes). */
+  private showNote(key: string, text: string): void {
+    const f = this.field(key);
+    if (!f) return;
+    let p = f.querySelector<HTMLElement>('.addr-note');
+    if (!p) {
+      p = document.createElement('p');
+      p.className = 'addr-note';
+      p.setAttribute('role', 'status');
+      const anchor = f.querySelector('.help');
+      if (anchor) anchor.before(p); else f.append(p);
+    }
+    p.textContent = text;
   }
 
   private onInput(e: Event): void {
@@ -78,30 +124,88 @@ export class CalculatorElement extends HTMLElement {
     if (t.closest('.calc-records')) return;
     if (t instanceof HTMLInputElement && t.type === 'file') return;
     if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) return;
+    if (t instanceof HTMLInputElement && t.name) this.showUnitNote(t.name);
     this.schedule();
   }
 
   private onChange(e: Event): void {
     const t = e.target as HTMLElement;
     if (t.closest('.calc-records')) return;
-    if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) this.convertField(t);
+    if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) this.convertField(t, true);
     else if (t instanceof HTMLInputElement && t.name === 'units') this.setSystem(t.value === 'US' ? 'US' : 'SI');
     else if (t instanceof HTMLInputElement && t.type === 'file') { void this.loadFile(t); return; }
+    else if (t instanceof HTMLInputElement && t.type === 'text') this.takeTypedUnit(t);
     this.schedule();
   }
 
-  /** A new unit keeps the physical quantity: the number in the field is converted. */
-  private convertField(sel: HTMLSelectElement): void {
+  /**
+   * A new unit keeps the physical quantity: the number in the field is converted from the unit it
+   * was typed in. Pure unit arithmetic on whatever number the field holds — shown or hidden, in
+   * range or not — so no field is ever relabelled (a hidden power-law C once kept "980" while its
+   * unit changed from N·s/m to lbf·s/in). `note` says so at the field, with a way back.
+   */
+  private convertField(sel: HTMLSelectElement, note = false): void {
     const key = sel.name.slice(0, -'.unit'.length);
     const def = this.calc!.inputs.find((d) => d.key === key);
     const ctl = this.control(key);
     const prev = sel.dataset.unit ?? sel.value;
     sel.dataset.unit = sel.value;
+    this.syncUnitLabel(key, sel);
+    if (!def || def.kind === 'choice' || def.kind === 'text' || !ctl || prev === sel.value) return;
+    const typed = ctl.value;
+    const n = parseTyped(typed);
+    if (!Number.isFinite(n)) return;
+    const from = findUnit(def.kind, prev);
+    const to = findUnit(def.kind, sel.value);
+    ctl.value = formatInput(fromSI(toSI(n, from), to));
+    if (note) this.showUnitNote(key, typed.trim(), from.symbol, ctl.value, to.symbol);
+    else this.showUnitNote(key);
+  }
+
+  /** "22 kN/m" typed into a field: the menu switches to kN/m and the field keeps 22 (said at the field). */
+  private takeTypedUnit(ctl: HTMLInputElement): void {
+    const def = this.calc!.inputs.find((d) => d.key === ctl.name);
+    const sel = this.unitSelect(ctl.name);
+    if (!def || def.kind === 'choice' || def.kind === 'text' || !sel) return;
+    const typed = splitTyped(ctl.value, def.kind);
+    if (!typed || typed.unit === '' || ![...sel.options].some((o) => o.value === typed.unit)) return;
+    sel.value = typed.unit;
+    sel.dataset.unit = typed.unit;
+    this.syncUnitLabel(def.key, sel);
+    ctl.value = typed.number;
+  }
+
+  private syncUnitLabel(key: string, sel: HTMLSelectElement): void {
     const srUnit = this.field(key)?.querySelector('.sr-unit');
     if (srUnit) srUnit.textContent = ` (${sel.selectedOptions[0]?.textContent ?? ''})`;
-    if (!def || def.kind === 'choice' || def.kind === 'text' || !ctl) return;
-    const r = readField(def, ctl.value, prev, {});
-    if (r.ok && typeof r.value === 'number') ctl.value = formatInput(fromSI(r.value, findUnit(def.kind, sel.value)));
+  }
+
+  /**
+   * "250 N/m → 0.25 N/mm" under a field whose unit the reader changed, with a one-click way to keep
+   * the number typed and change only the unit. Without arguments: removes the note.
+   */
+  private showUnitNote(key: string, typed?: string, fromSym?: string, now?: string, toSym?: string): void {
+    const f = this.field(key);
+    if (!f) return;
+    f.querySelector('.unit-note')?.remove();
+    if (typed === undefined) return;
+    const p = document.createElement('p');
+    p.className = 'unit-note';
+    p.setAttribute('role', 'status');
+    p.append(`Converted: ${typed} ${fromSym ?? ''} → ${now} ${toSym ?? ''}. `.replace(/\s+\./, '.'));
+    const keep = document.createElement('button');
+    keep.type = 'button';
+    keep.className = 'linkish';
+    keep.textContent = `Keep ${typed}, change only the unit`;
+    keep.addEventListener('click', () => {
+      const ctl = this.control(key);
+      if (ctl) ctl.value = typed;
+      p.remove();
+      this.schedule();
+    });
+    p.append(keep);
+    const anchor = f.querySelector('.help');
+    if (anchor) anchor.before(p); else f.append(p);
   }
 
   /** Each number field as typed: its number and its unit id (for records). */
@@ -128,9 +232,10 @@ export class CalculatorElement extends HTMLElement {
       if (sel && want && [...sel.options].some((o) => o.value === want) && sel.value !== want) {
         sel.value = want;
         sel.dataset.unit = want;
-        const srUnit = this.field(def.key)?.querySelector('.sr-unit');
-        if (srUnit) srUnit.textContent = ` (${sel.selectedOptions[0]?.textContent ?? ''})`;
+        this.syncUnitLabel(def.key, sel);
       }
+      // an input that did not apply when the set was saved keeps its field (it has no saved value)
+      if (v === undefined && !isActive(def, values)) continue;
       if (typeof v !== 'number') { ctl.value = ''; continue; }
       const typed = shown[def.key];
       // String() of a double parses back to the same double: the field reproduces the value exactly
@@ -205,7 +310,7 @@ export class CalculatorElement extends HTMLElement {
     const values = this.readValues();
     this.values = undefined;
     this.outputs = undefined;
-    if (!values) { this.setState(state, 'error', 'Results are held until every highlighted field is valid.'); return; }
+    if (!values) { this.setState(state, 'error', 'Not current: the results and charts below belong to earlier inputs. Fix the highlighted field to update them.'); return; }
     let result;
     try {
       result = evaluate(calc, values);
@@ -213,7 +318,7 @@ export class CalculatorElement extends HTMLElement {
       const msg = e instanceof DampbookError ? e.message : 'These inputs could not be computed.';
       // a problem found while computing (e.g. a bad row in a pasted record) is shown at its field too
       if (e instanceof InputRangeError && this.field(e.input)) this.showFieldMessage(e.input, e.message);
-      this.setState(state, 'error', msg);
+      this.setState(state, 'error', `Not current: ${msg}`);
       return;
     }
     this.renderOutputs(result.outputs);
@@ -232,7 +337,24 @@ export class CalculatorElement extends HTMLElement {
     if (!el) return;
     el.dataset.kind = kind;
     el.textContent = text;
-    this.toggleAttribute('data-stale', kind === 'error');
+    const stale = kind === 'error';
+    this.toggleAttribute('data-stale', stale);
+    this.querySelector('.calc-results')?.setAttribute('aria-busy', 'false');
+    for (const part of this.querySelectorAll('.calc-results table, .calc-warnings, .calc-charts')) part.toggleAttribute('data-not-current', stale);
+    // a hand-off must never carry a value the page no longer shows as current
+    if (stale) for (const a of this.querySelectorAll<HTMLAnchorElement>('a[data-feed-out]')) this.disableFeed(a);
+  }
+
+  private feedBase(a: HTMLAnchorElement): string {
+    if (!a.dataset.base) a.dataset.base = new URL(a.getAttribute('href') ?? '', location.href).pathname;
+    return a.dataset.base;
+  }
+
+  private disableFeed(a: HTMLAnchorElement): void {
+    this.feedBase(a);
+    a.removeAttribute('href');
+    a.setAttribute('aria-disabled', 'true');
+    a.title = 'Not current: fix the highlighted field first.';
   }
 
   private renderOutputs(outputs: Outputs): void {
@@ -257,11 +379,12 @@ export class CalculatorElement extends HTMLElement {
       const out = a.dataset.feedOut ?? '';
       const feed = this.calc!.outputs.find((o) => o.key === out)?.feeds?.[Number(a.dataset.feedIndex)];
       const query = feed ? feedQuery(feed, out, result) : undefined;
+      const base = this.feedBase(a);
       a.hidden = query === undefined;
       if (query === undefined) continue;
-      const url = new URL(a.href, location.href);
-      url.search = query;
-      a.href = url.pathname + url.search;
+      a.href = `${base}?${query}`;
+      a.removeAttribute('aria-disabled');
+      a.removeAttribute('title');
     }
   }
 
@@ -269,8 +392,19 @@ export class CalculatorElement extends HTMLElement {
     const params = new URLSearchParams(location.search);
     for (const def of this.calc!.inputs) {
       const v = values[def.key];
-      if ((def.kind === 'text' && !def.fromUrl) || v === undefined) params.delete(def.key);
-      else params.set(def.key, typeof v === 'number' ? formatInput(v) : v);
+      if (def.kind === 'text' && !def.fromUrl) {
+        // the data itself cannot travel in a link: its checksum says on the other end that it differed
+        params.delete(def.key);
+        if (typeof v === 'string' && v !== def.default) params.set(`${def.key}.sha`, textSum(v)); else params.delete(`${def.key}.sha`);
+        continue;
+      }
+      if (v === undefined) { params.delete(def.key); continue; }
+      if (typeof v !== 'number' || def.kind === 'choice' || def.kind === 'text') { params.set(def.key, String(v)); continue; }
+      // a number keeps the unit it was typed in ("22 kN/m"); in the SI base unit it is a plain number
+      const unit = this.unitSelect(def.key)?.value;
+      const u = unit ? findUnit(def.kind, unit) : undefined;
+      const typed = parseTyped(this.control(def.key)?.value ?? '');
+      params.set(def.key, u && (u.factor !== 1 || u.offset) && Number.isFinite(typed) ? `${formatInput(typed)} ${u.id}` : formatInput(v));
     }
     if (this.system === 'US') params.set('units', 'US'); else params.delete('units');
     history.replaceState(history.state, '', `${location.pathname}?${params.toString()}${location.hash}`);

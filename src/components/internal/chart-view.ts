@@ -11,7 +11,7 @@ import {
 } from 'chart.js';
 import type { ChartSpec } from '../../calculators/types.ts';
 import type { UnitSystem } from '../../core/units/index.ts';
-import { displayUnit, formatNumber, toDisplay } from './format.ts';
+import { displayUnit, formatNumber, quantityText, toDisplay } from './format.ts';
 
 Chart.register(LineController, LineElement, PointElement, LinearScale, LogarithmicScale);
 
@@ -72,7 +72,7 @@ function config(spec: ChartSpec, system: UnitSystem): ChartConfiguration<'line',
   };
 }
 
-/** The legend as an HTML list (text, so it also reads and zooms well); mirror series ('−…') are left out. */
+/** The legend as an HTML list (text, so it also reads and zooms well); series with `legend: false` are left out. */
 function legend(fig: HTMLElement, spec: ChartSpec): void {
   let ul = fig.querySelector<HTMLUListElement>('.chart-legend');
   if (!ul) {
@@ -80,7 +80,7 @@ function legend(fig: HTMLElement, spec: ChartSpec): void {
     ul.className = 'chart-legend';
     fig.querySelector('.chart-canvas')!.after(ul);
   }
-  ul.replaceChildren(...spec.series.filter((s) => !s.label.startsWith('−')).map((s) => {
+  ul.replaceChildren(...spec.series.filter((s) => s.legend !== false).map((s) => {
     const li = document.createElement('li');
     const key = document.createElement('span');
     key.className = `chart-key ${s.style ?? 'line'}`;
@@ -101,15 +101,16 @@ export class ChartGroup {
       const fig = this.host.querySelector<HTMLElement>(`figure[data-chart="${CSS.escape(spec.id)}"]`);
       if (!fig) continue;
       const box = fig.querySelector<HTMLElement>('.chart-canvas')!;
+      const text = quantityText(spec.summary, system);
       const summary = fig.querySelector('.chart-summary');
-      if (summary) summary.textContent = spec.summary;
+      if (summary) summary.textContent = text;
       let chart = this.charts.get(spec.id);
       const cfg = config(spec, system);
       legend(fig, spec);
       if (!chart) {
         const canvas = document.createElement('canvas');
         canvas.setAttribute('role', 'img');
-        canvas.setAttribute('aria-label', `${spec.title}. ${spec.summary}`);
+        canvas.setAttribute('aria-label', `${spec.title}. ${text}`);
         box.append(canvas);
         box.dataset.live = '';
         chart = new Chart(canvas, cfg);
@@ -117,7 +118,7 @@ export class ChartGroup {
       } else {
         chart.data = cfg.data;
         chart.options = cfg.options!;
-        chart.canvas.setAttribute('aria-label', `${spec.title}. ${spec.summary}`);
+        chart.canvas.setAttribute('aria-label', `${spec.title}. ${text}`);
         chart.update();
       }
     }

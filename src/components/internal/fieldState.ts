@@ -4,6 +4,7 @@
  */
 import { checkInput, MAX_NUMBER_TEXT, rangeOf, siOnly } from '../../calculators/evaluate.ts';
 import type { InputDef, NumberInput, Values } from '../../calculators/types.ts';
+import type { QuantityKind } from '../../core/units/index.ts';
 import { InputRangeError } from '../../core/errors.ts';
 import { isPlainNumber } from '../../core/numeric/plainNumber.ts';
 import { findUnit, fromSI, toSI } from '../../core/units/index.ts';
@@ -24,11 +25,48 @@ export function describeRange(def: NumberInput, unitId: string): string {
   return parts.join(' and ');
 }
 
-/** Parses a typed number: accepts a decimal comma when there is no decimal point. */
+/**
+ * Parses a typed number. A decimal point only, as the command line reads numbers: "1,5" is refused
+ * (in many locales it means 1.5, in others 15 — a handbook must not guess; see DECIMAL_COMMA).
+ */
 export function parseTyped(text: string): number {
   const t = text.trim().replace(/\s+/g, '');
-  const normal = !t.includes('.') && /^[-+]?\d+,\d+(e[-+]?\d+)?$/i.test(t) ? t.replace(',', '.') : t;
-  return isPlainNumber(normal) ? Number(normal) : NaN;
+  return isPlainNumber(t) ? Number(t) : NaN;
+}
+
+/** True for text such as "1,5" or "2,5e3": a number written with a decimal comma. */
+export function hasDecimalComma(text: string): boolean {
+  return /^[-+]?\d*,\d+(e[-+]?\d+)?$/i.test(text.trim());
+}
+
+export const DECIMAL_COMMA = 'Use a decimal point (1.5, not 1,5): the handbook reads numbers the same way everywhere.';
+
+/**
+ * A number typed with its unit ("22 kN/m", "250 N/mm", "980 N.s/m"): the number as typed and the
+ * unit's id, or undefined when the text is not a number followed by a unit of this kind. A bare
+ * number gives unit ''.
+ */
+export function splitTyped(text: string, kind?: QuantityKind): { number: string; unit: string } | undefined {
+  const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
+  if (!m) return undefined;
+  const unitText = m[2] ?? '';
+  if (unitText === '') return { number: m[1]!, unit: '' };
+  if (!kind) return undefined;
+  try { return { number: m[1]!, unit: findUnit(kind, unitText).id }; } catch { return undefined; }
+}
+
+/** A short, printable excerpt of untrusted text for a message. */
+export function clip(text: string, n = 40): string {
+  // eslint-disable-next-line no-control-regex -- control characters are what we remove
+  const t = text.replace(/[\u0000-\u001f\u007f-\u009f]/g, ' ');
+  return t.length > n ? `${t.slice(0, n)}…` : t;
+}
+
+/** FNV-1a (32 bit) of a text's UTF-16 code units, 8 hex digits: marks a text a link cannot carry. */
+export function textSum(text: string): string {
+  let h = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) { h ^= text.charCodeAt(i); h = Math.imul(h, 0x01000193) >>> 0; }
+  return h.toString(16).padStart(8, '0');
 }
 
 export function readField(def: InputDef, text: string, unitId: string | undefined, values: Values): FieldRead {
@@ -39,9 +77,16 @@ export function readField(def: InputDef, text: string, unitId: string | undefine
       return { ok: false, message: `Enter a value: ${describeRange(def, unitId ?? '')}.` };
     }
     if (text.length > MAX_NUMBER_TEXT) return { ok: false, message: `Too long for a number (${text.length} characters). Type digits, e.g. 12.5 or 1.2e3.` };
-    const n = parseTyped(text);
-    if (!Number.isFinite(n)) return { ok: false, message: 'Not a number. Type digits, e.g. 12.5 or 1.2e3.' };
-    const unit = findUnit(def.kind, unitId ?? '');
+    let n = parseTyped(text);
+    let unit = findUnit(def.kind, unitId ?? '');
+    if (!Number.isFinite(n)) {
+      if (hasDecimalComma(text)) return { ok: false, message: DECIMAL_COMMA };
+      // a number typed with its own unit ("22 kN/m") is read in that unit
+      const typed = splitTyped(text, def.kind);
+      if (!typed || typed.unit === '') return { ok: false, message: `Not a number. Type digits, e.g. 12.5 or 1.2e3, or a number with a unit of this field (${unit.symbol || 'no unit'}).` };
+      n = Number(typed.number);
+      unit = findUnit(def.kind, typed.unit);
+    }
     if (siOnly(def, values) && def.siOnlyWhen && unit.factor !== 1) {
       return { ok: false, message: `Choose the SI unit for this field: ${def.siOnlyWhen.why}` };
     }

@@ -2,6 +2,7 @@
  * Number and unit formatting at the interface edge, shared by the server render and the
  * client element so both show exactly the same text.
  */
+import { renderQuantities } from '../../calculators/quantityText.ts';
 import { findUnit, fromSI, preferredUnit, siUnit, type QuantityKind, type UnitDef, type UnitSystem } from '../../core/units/index.ts';
 
 /** Formats a number to `digits` significant figures; exponent notation outside [1e-4, 1e7). */
@@ -41,4 +42,13 @@ export function unitById(kind: QuantityKind, id: string): UnitDef {
 /** Escapes text for HTML (server-built strings only; the client uses textContent). */
 export function escapeHtml(s: string): string {
   return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+}
+
+/** A calculator's sentence (chart summary) with its quantities in the reader's unit system. */
+export function quantityText(text: string, system: UnitSystem): string {
+  return renderQuantities(text, (v, kind, digits) => {
+    const u = displayUnit(kind, system);
+    const n = formatNumber(fromSI(v, u), digits);
+    return u.symbol ? `${n} ${u.symbol}` : n;
+  });
 }

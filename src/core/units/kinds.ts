@@ -33,6 +33,7 @@ export const QUANTITY_KINDS = [
   'velocityPsd',
   'accelerationPsd',
   'displacementPsd',
+  'eventRate',
 ] as const;
 
 export type QuantityKind = (typeof QUANTITY_KINDS)[number];
@@ -69,4 +70,6 @@ export const SI_SYMBOL: Record<QuantityKind, string> = {
   velocityPsd: '(m/s)²/Hz',
   accelerationPsd: '(m/s²)²/Hz',
   displacementPsd: 'm²/Hz',
+  /** Events (impacts, strokes) per hour: the unit the calculators' keys (`cph`) are named in. */
+  eventRate: '1/h',
 };

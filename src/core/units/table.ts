@@ -112,6 +112,9 @@ export const UNITS: readonly UnitDef[] = [
   any('(m/s)2/Hz', '(m/s)²/Hz', 'velocityPsd'),
   any('(m/s2)2/Hz', '(m/s²)²/Hz', 'accelerationPsd'),
   any('m2/Hz', 'm²/Hz', 'displacementPsd'),
+
+  // an event rate is kept per hour (the CLI key `cph` is per hour); per minute and per second convert exactly
+  any('1/h', 'per hour', 'eventRate'), any('1/min', 'per minute', 'eventRate', 60), any('1/s', 'per second', 'eventRate', 3600),
 ];
 
 /**
