@@ -76,5 +76,5 @@ export const powerRatingCalc = defineCalculator({
       provenance: 'from memory',
     },
   ],
-  sources: [{ key: 'incropera2007', locator: 'eqs. 9.34, 9.26/9.27, 7.54, 9.64, 1.9; Table A.4 (from memory)' }],
+  sources: [{ key: 'incropera2007', locator: 'eqs. 9.34, 9.26, 7.54, 9.64, 1.9; Table A.4 (from memory)' }],
 });
