@@ -1,0 +1,33 @@
+/**
+ * Numerical-audit findings on the thermal calculators, each reproduced with the audit's numbers.
+ */
+import { describe, expect, it } from 'vitest';
+import { getCalculator } from '../../../src/calculators/registry.ts';
+import { evaluate } from '../../../src/calculators/evaluate.ts';
+import type { CalculatorDefinition } from '../../../src/calculators/types.ts';
+import { HOT_SURROUNDINGS_WARNING } from '../../../src/calculators/thermal/powerRating.ts';
+import { expectClose } from '../../helpers/expectClose.ts';
+
+function calc(id: string): CalculatorDefinition {
+  const c = getCalculator(id);
+  if (!c) throw new Error(`missing calculator ${id}`);
+  return c;
+}
+
+describe('power-rating: surroundings hotter than the allowed temperature', () => {
+  // Ø50 × 350 mm, ε = 0.9, 25 °C air, surroundings 200 K above the air, rated at 80 °C:
+  // radiation brings more heat in than convection takes out (closed form Q(T_max) < 0).
+  const inputs = { Tmax: 353.15, D: 0.05, L: 0.35, orientation: 'horizontal', Tamb: 298.15, dTsur: 200, V: 0, eps: 0.9 };
+  it('warns and says the body cannot be rated when Q(T_max) ≤ 0', () => {
+    const r = evaluate(calc('power-rating'), inputs);
+    expect(r.outputs.Pmax).toBe(0);
+    expect(r.outputs.rated).toBe('no');
+    expect(r.warnings).toContain(HOT_SURROUNDINGS_WARNING);
+  });
+  it('rates normally in open air', () => {
+    const r = evaluate(calc('power-rating'), { ...inputs, dTsur: 0 });
+    expect(r.outputs.rated).toBe('yes');
+    expect(r.warnings).not.toContain(HOT_SURROUNDINGS_WARNING);
+    expectClose({ label: 'Pmax', computed: r.outputs.Pmax as number, expected: 41.01, tol: 1e-3, why: 'the page verification case (Incropera 6th ed. eqs. 9.34, 1.9; reference library numpy)' });
+  });
+});
