@@ -31,3 +31,15 @@ describe('power-rating: surroundings hotter than the allowed temperature', () =>
     expectClose({ label: 'Pmax', computed: r.outputs.Pmax as number, expected: 41.01, tol: 1e-3, why: 'the page verification case (Incropera 6th ed. eqs. 9.34, 1.9; reference library numpy)' });
   });
 });
+
+describe('warm-up body model: integrated piecewise between switching times', () => {
+  // Audit case: 100 W on for d = 0.512 of a 60 s period, defaults otherwise (C = 1395 J/K, Ø50 × 350 mm,
+  // ε = 0.9, 25 °C still air), limit at 95 % of the body model's rise. The independent re-implementation
+  // (scipy ODE integration between switching times) gives 4289 s; fixed-step RK4 across the switch gave 4167 s.
+  it('reaches 95 % of the rise at ≈ 4289 s (was 4167 s)', () => {
+    const base = { loss: 'body', duty: 0.512, period: 60, P: 100 };
+    const Tss = evaluate(calc('warm-up'), base).outputs.TssBody as number;
+    const r = evaluate(calc('warm-up'), { ...base, Tlimit: 298.15 + 0.95 * (Tss - 298.15) });
+    expectClose({ label: 'tLimitBody', computed: r.outputs.tLimitBody as number, expected: 4289, tol: 3e-4, why: 'the audit gives 4 s.f.; provenance: reference library scipy (audit re-implementation, version not recorded)' });
+  });
+});
