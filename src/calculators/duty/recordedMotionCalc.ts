@@ -88,7 +88,7 @@ export const recordedMotionCalc = defineCalculator({
       outputs: {
         P: r.meanPower, E: r.E, duration: r.duration, cycles: ce.length,
         EperCycle: ce.length ? ce.reduce((a, b) => a + b, 0) / ce.length : undefined,
-        EperCycleMax: ce.length ? Math.max(...ce) : undefined,
+        EperCycleMax: ce.length ? ce.reduce((a, b) => Math.max(a, b), -Infinity) : undefined,
         Fpeak: r.Fpeak, vPeak: r.vPeak, vRms: r.vRms,
         rowsUsed: rec.t.length, rowsRejected: rec.rejected.length, rowsSkipped: rec.skipped, gaps: s.gaps,
         forceSource: rec.F ? 'measured' : 'from the chosen damper law',

@@ -69,7 +69,7 @@ export const sdof = defineCalculator({
       series.push({ label: '−envelope', x: h.t, y: env.map((e) => -e), style: 'dash', tone: 1 });
     }
     const tEnd = h.t[h.t.length - 1] ?? 0;
-    const peak = Math.max(...h.x.map(Math.abs));
+    const peak = h.x.reduce((a, x) => Math.max(a, Math.abs(x)), 0);
     return [
       {
         id: 'response',

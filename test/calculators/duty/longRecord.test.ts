@@ -1,0 +1,18 @@
+import { describe, expect, it } from 'vitest';
+import { getCalculator } from '../../../src/calculators/registry.ts';
+import { evaluate } from '../../../src/calculators/evaluate.ts';
+
+describe('recorded-motion: long records inside the size limit', () => {
+  it('analyses 140 000 cycles (420 000 rows, 3.5 MB) without a stack overflow (Math.max over a spread array)', () => {
+    // invented record: velocity 1, 0, −1 m/s at 1 s intervals, a 3 s cycle, repeated (common practice, no source)
+    const rows = ['time [s],v [m/s]'];
+    const pattern = ['1', '0', '-1'];
+    for (let i = 0; i < 420000; i++) rows.push(`${i},${pattern[i % 3]}`);
+    const csv = rows.join('\n');
+    expect(csv.length).toBeLessThan(5_000_000);
+    const calc = getCalculator('recorded-motion')!;
+    const r = evaluate(calc, { csv, layout: 'tv' });
+    expect(r.outputs.cycles as number).toBeGreaterThan(125000);
+    expect(Number.isFinite(r.outputs.EperCycleMax as number)).toBe(true);
+  });
+});
