@@ -43,3 +43,11 @@ describe('warm-up body model: integrated piecewise between switching times', () 
     expectClose({ label: 'tLimitBody', computed: r.outputs.tLimitBody as number, expected: 4289, tol: 3e-4, why: 'the audit gives 4 s.f.; provenance: reference library scipy (audit re-implementation, version not recorded)' });
   });
 });
+
+describe('warm-up: the shipped default power profile', () => {
+  it('parses (a ";" inside a "#" comment split the comment into a bad entry: "line 2: not a number")', () => {
+    const r = evaluate(calc('warm-up'), { power: 'profile' });
+    // default: 120 W for 600 s, 0 W for 600 s → mean 60 W (closed form)
+    expect(r.outputs.Pmean).toBe(60);
+  });
+});
