@@ -90,3 +90,10 @@ describe('properties: every reported equilibrium satisfies its heat balance to 1
     }), { seed: 19020, numRuns: 200 });
   });
 });
+
+describe('doc examples', () => {
+  it('churchillChuCylinder(5.073e6, 0.697) returns the 23.09 its example states (closed form of Incropera eq. 9.34)', async () => {
+    const { churchillChuCylinder } = await import('../../../src/core/thermal/index.ts');
+    expectClose({ label: 'Nu_D', computed: churchillChuCylinder(5.073e6, 0.697), expected: 23.09, tol: 2e-4, why: 'the example gives 4 s.f.' });
+  });
+});
