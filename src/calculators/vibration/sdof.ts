@@ -27,7 +27,7 @@ export const sdof = defineCalculator({
     { key: 'ccr', label: 'Critical damping coefficient', kind: 'damping' },
     { key: 'wd', label: 'Damped natural frequency', kind: 'angularFrequency', help: '0 unless underdamped.' },
     { key: 'logdec', label: 'Logarithmic decrement δ', kind: 'dimensionless', optional: true, help: 'Underdamped only.' },
-    { key: 'Q', label: 'Quality factor Q', kind: 'dimensionless' },
+    { key: 'Q', label: 'Quality factor Q', kind: 'dimensionless', optional: true, help: 'Underdamped only: 1/(2ζ), the sharpness of the resonance.' },
     { key: 'regime', label: 'Regime', kind: 'text' },
     { key: 'E0', label: 'Initial energy', kind: 'energy' },
     { key: 'closure', label: 'Energy audit closure', kind: 'dimensionless', digits: 2, help: 'max |E_k + E_s + E_D − E_0| / E_0 over the plotted window.' },
@@ -37,7 +37,10 @@ export const sdof = defineCalculator({
     const wn = naturalFrequency(p.m, p.k);
     const zeta = dampingRatio(p.m, p.k, p.c);
     const regime = dampingRegime(zeta);
-    const audit = energyHistory(p, responseWindow(wn, zeta), 41);
+    const window = responseWindow(wn, zeta);
+    const audit = energyHistory(p, window, 41);
+    // the window is capped at 30 periods where the decay to 1 % would take longer (ζ < ln 100/(60π) ≈ 2.44 %)
+    const capped = zeta < 1 && Math.log(100) / (zeta * wn) > window * (1 + 1e-12);
     return {
       outputs: {
         wn,
@@ -46,12 +49,12 @@ export const sdof = defineCalculator({
         ccr: criticalDamping(p.m, p.k),
         wd: regime === 'underdamped' ? dampedFrequency(wn, zeta) : 0,
         logdec: regime === 'underdamped' ? logDecrementFromZeta(zeta) : undefined,
-        Q: qualityFactor(zeta),
+        Q: regime === 'underdamped' ? qualityFactor(zeta) : undefined,
         regime,
         E0: audit.initial,
         closure: audit.closure,
       },
-      warnings: zeta < 0.005 ? ['ζ below 0.5 %: the plotted window is capped at 30 cycles.'] : [],
+      warnings: capped ? ['ζ below about 2.4 %: the plotted window is capped at 30 cycles, before the motion has decayed to 1 %.'] : [],
     };
   },
   charts(values, result): ChartSpec[] {
