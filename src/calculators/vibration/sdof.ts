@@ -8,6 +8,9 @@ function oscillator(values: Values) {
   return { m: num(values, 'm'), k: num(values, 'k'), c: num(values, 'c'), x0: num(values, 'x0'), v0: num(values, 'v0') };
 }
 
+
+/** Samples of the energy audit, shared by the results and the chart (one closure value on the page). */
+const AUDIT_SAMPLES = 401;
 /** Free vibration of a mass–spring–viscous-damper system: frequencies, damping, regime, energy. */
 export const sdof = defineCalculator({
   id: 'sdof',
@@ -38,7 +41,7 @@ export const sdof = defineCalculator({
     const zeta = dampingRatio(p.m, p.k, p.c);
     const regime = dampingRegime(zeta);
     const window = responseWindow(wn, zeta);
-    const audit = energyHistory(p, window, 41);
+    const audit = energyHistory(p, window, AUDIT_SAMPLES); // the chart's samples: one closure for the page
     // the window is capped at 30 periods where the decay to 1 % would take longer (ζ < ln 100/(60π) ≈ 2.44 %)
     const capped = zeta < 1 && Math.log(100) / (zeta * wn) > window * (1 + 1e-12);
     return {
@@ -61,7 +64,7 @@ export const sdof = defineCalculator({
     const p = oscillator(values);
     const wn = result.outputs.wn as number;
     const zeta = result.outputs.zeta as number;
-    const h = energyHistory(p, responseWindow(wn, zeta), 401);
+    const h = energyHistory(p, responseWindow(wn, zeta), AUDIT_SAMPLES);
     const series: ChartSpec['series'][number][] = [{ label: 'x(t)', x: h.t, y: h.x, tone: 0 }];
     if (zeta < 1) {
       const wd = result.outputs.wd as number;
@@ -93,7 +96,7 @@ export const sdof = defineCalculator({
           { label: 'dissipated', x: h.t, y: h.dissipated, tone: 3 },
           { label: 'sum', x: h.t, y: h.total, style: 'dash', tone: 4 },
         ],
-        summary: `Initial energy ${h.initial.toPrecision(4)} J; kinetic + spring + dissipated stays equal to it within ${h.closure.toExponential(1)} (relative) over the window.`,
+        summary: `Initial energy ${h.initial.toPrecision(4)} J; kinetic + spring + dissipated stays equal to it within ${(result.outputs.closure as number).toExponential(1)} (relative) over the window.`,
       },
     ];
   },

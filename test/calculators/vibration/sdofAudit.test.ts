@@ -19,3 +19,13 @@ describe('sdof: window cap warning and quality factor', () => {
     expect(evaluate(sdof, { m: 1, k: 400, c: 4 }).outputs.Q).toBeCloseTo(5, 12); // ζ = 0.1 → Q = 5 (closed form)
   });
 });
+
+describe('sdof: one energy audit closure on the page', () => {
+  it('the chart summary states the closure the results table shows (was 41 samples against 401)', () => {
+    const values = { m: 1, k: 400, c: 4, x0: 0.01 };
+    const r = evaluate(sdof, values);
+    const charts = sdof.charts!(r.values, r);
+    const summary = charts.map((c) => c.summary).join(' ');
+    expect(summary).toContain((r.outputs.closure as number).toExponential(1));
+  });
+});
