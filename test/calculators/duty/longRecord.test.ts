@@ -16,3 +16,12 @@ describe('recorded-motion: long records inside the size limit', () => {
     expect(Number.isFinite(r.outputs.EperCycleMax as number)).toBe(true);
   });
 });
+
+describe('harmonic-duty: hysteretic warning', () => {
+  it('says the power rises linearly with frequency at a fixed stroke (P = πηkX²·f, closed form)', () => {
+    const calc = getCalculator('harmonic-duty')!;
+    const w = evaluate(calc, { law: 'hysteretic' }).warnings.join(' ');
+    expect(w).not.toMatch(/only through the stroke/);
+    expect(w).toMatch(/linearly with frequency/);
+  });
+});
