@@ -29,3 +29,13 @@ describe('sdof: one energy audit closure on the page', () => {
     expect(summary).toContain((r.outputs.closure as number).toExponential(1));
   });
 });
+
+describe('damper-simulation: α < 1 smoothing warning', () => {
+  it('never calls the linear zone "negligible" (it can halve the residual free-decay amplitude)', () => {
+    const calc = getCalculator('damper-simulation')!;
+    const r = evaluate(calc, { law: 'power', alpha: 0.5, excitation: 'none', x0: 0.05 });
+    const w = r.warnings.join(' ');
+    expect(w).toMatch(/taken linear below/);
+    expect(w).not.toMatch(/negligible/);
+  });
+});
