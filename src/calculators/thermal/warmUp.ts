@@ -98,6 +98,7 @@ export const warmUpCalc = defineCalculator({
     const warnings: string[] = [];
     if (Bi > BIOT_LUMPED_MAX) warnings.push(`Biot number ${Bi.toPrecision(2)} > 0.1: one temperature does not describe the body; the surface runs cooler than the core.`);
     if (Tlimit <= Tamb) warnings.push('The limit is at or below the air temperature.');
+    if (duty.Tpeak > 700) warnings.push(`The constant-UA model settles at ${duty.Tpeak.toPrecision(3)} K, far beyond any damper: the heat loss UA is too small for this power (check UA).`);
     if (Ttouch <= Tamb) warnings.push('The cool-down target is at or below the air temperature: it is approached but never reached.');
     const outputs: Record<string, number | string | undefined> = {
       tau: duty.tau, Tss: duty.Tmean, tLimit, reached: tLimit === undefined ? 'no' : 'yes', T: duty.at(num(values, 't')),
@@ -110,6 +111,10 @@ export const warmUpCalc = defineCalculator({
       const ss = steadyTemperature(body, m.Pmean);
       warnings.push(...ss.warnings);
       outputs.TssBody = ss.Ts;
+      const UAtyped = num(values, 'UA');
+      if (UAtyped < 0.5 * ss.UA || UAtyped > 2 * ss.UA) {
+        warnings.push(`The typed UA = ${UAtyped.toPrecision(3)} W/K is ${UAtyped < ss.UA ? 'far below' : 'far above'} the body model's ${ss.UA.toPrecision(3)} W/K at its equilibrium: the constant-UA results (T_ss = ${duty.Tmean.toPrecision(4)} K) do not describe this body; check UA.`);
+      }
       if (!profile && num(values, 'duty') >= 1) outputs.tLimitBody = timeToLimit((T) => num(values, 'P') - bodyCooling(body, T).Q, C, Tamb, Tlimit);
       else {
         const tEnd = Math.max(10 * C / ss.UA, 3 * m.period);

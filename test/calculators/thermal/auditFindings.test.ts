@@ -51,3 +51,16 @@ describe('warm-up: the shipped default power profile', () => {
     expect(r.outputs.Pmean).toBe(60);
   });
 });
+
+describe('warm-up: typed UA far from the body model', () => {
+  it('warns when T_ss is thousands of kelvin because the typed UA is far below the body model\'s', () => {
+    // 50 W with UA = 0.0065 W/K: T_ss = 298.15 + 50/0.0065 ≈ 7990 K (closed form); the body model's UA is ≈ 0.75 W/K
+    const r = evaluate(calc('warm-up'), { P: 50, UA: 0.0065, loss: 'body' });
+    expect(r.outputs.Tss as number).toBeGreaterThan(7000);
+    expect(r.warnings.join(' ')).toMatch(/typed UA .* body model/);
+  });
+  it('says nothing for a UA near the body model\'s', () => {
+    const r = evaluate(calc('warm-up'), { P: 50, UA: 0.75, loss: 'body' });
+    expect(r.warnings.join(' ')).not.toMatch(/typed UA/);
+  });
+});
