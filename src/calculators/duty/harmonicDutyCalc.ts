@@ -29,7 +29,7 @@ export const harmonicDutyCalc = defineCalculator({
   compute(values) {
     const { law, X, omega } = setup(values);
     const d = harmonicDuty(law, X, omega);
-    const warnings = law.kind === 'hysteretic' ? ['A loss-factor law describes harmonic motion only; its power rises with frequency only through the stroke.'] : [];
+    const warnings = law.kind === 'hysteretic' ? ['A loss-factor law describes harmonic motion only: its energy per cycle πηkX² does not depend on frequency, so at a fixed stroke its power P = πηkX²·f rises linearly with frequency.'] : [];
     return { outputs: { P: d.P, E: d.E, vRms: d.vrms, vPeak: d.vmax, Fpeak: d.Fmax, ceq: d.ceq }, warnings };
   },
   charts(values, result): ChartSpec[] {

@@ -29,6 +29,9 @@ function stride(t: Float64Array, y: Float64Array, max = 1200): { x: number[]; y:
 }
 
 /** A recorded damper motion → instantaneous and mean power, energy per cycle, peaks. */
+/** Below this many samples per cycle a differentiated velocity is warned about (power bias (2π/N)²/3 ≈ 0.13 % at 100). */
+const MIN_SAMPLES_PER_CYCLE = 100;
+
 export const recordedMotionCalc = defineCalculator({
   id: 'recorded-motion',
   title: 'Damper power from a recorded motion',
@@ -84,12 +87,18 @@ export const recordedMotionCalc = defineCalculator({
     const profile = formatPowerProfile({ t: blocks.t, P: blocks.P.map((p) => Math.max(0, p)) });
     const ce = r.cycleEnergies;
     const s = r.segments;
+    // the 3-point derivative of x = X sin ωt is low by about (ωh)²/6, the power (∝ v²) by (ωh)²/3
+    const perCycle = ce.length > 0 ? rec.t.length / ce.length : Infinity;
+    if (!rec.v && perCycle < MIN_SAMPLES_PER_CYCLE) {
+      const bias = (2 * Math.PI / perCycle) ** 2 / 3;
+      warnings.push(`Only ${perCycle.toPrecision(3)} samples per cycle: velocity differentiated from displacement reads low, the mean power by about ${(100 * bias).toPrecision(2)} % ((ωh)²/3 for a sine); sample at ${MIN_SAMPLES_PER_CYCLE} or more per cycle to keep it below about 0.13 %.`);
+    }
     const even = s.dtMax - s.dtMin <= 1e-6 * s.dtMedian;
     return {
       outputs: {
         P: r.meanPower, E: r.E, duration: r.duration, cycles: ce.length,
         EperCycle: ce.length ? ce.reduce((a, b) => a + b, 0) / ce.length : undefined,
-        EperCycleMax: ce.length ? Math.max(...ce) : undefined,
+        EperCycleMax: ce.length ? ce.reduce((a, b) => Math.max(a, b), -Infinity) : undefined,
         Fpeak: r.Fpeak, vPeak: r.vPeak, vRms: r.vRms,
         rowsUsed: rec.t.length, rowsRejected: rec.rejected.length, rowsSkipped: rec.skipped, gaps: s.gaps,
         forceSource: rec.F ? 'measured' : 'from the chosen damper law',

@@ -87,7 +87,7 @@ export const bodyCoolingCalc = defineCalculator({
     },
   ],
   sources: [
-    { key: 'incropera2007', locator: 'eqs. 9.34, 9.26/9.27, 9.33, 7.54, 9.64, 1.9; Table A.4 (from memory)' },
+    { key: 'incropera2007', locator: 'eqs. 9.34, 9.26, 9.33, 7.54, 9.64, 1.9; Table A.4 (from memory)' },
     { key: 'churchillChu1975', locator: 'horizontal cylinder' },
     { key: 'churchillBernstein1977', locator: 'cross flow' },
     { key: 'codata2018', locator: 'Stefan–Boltzmann constant' },

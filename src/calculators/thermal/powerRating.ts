@@ -4,6 +4,12 @@ import { BODY_DETAIL_OUTPUTS, bodyFrom, bodyInputs } from './bodyInputs.ts';
 
 const TW210 = { D: 0.05, L: 0.35, orientation: 'horizontal', Tamb: 298.15, eps: 0.9 } as const;
 
+/**
+ * Warning when the body cannot be rated: at T_max it gains heat from its surroundings (or sheds
+ * none), so it passes T_max with no damper power at all. A verdict reads the `rated` output.
+ */
+export const HOT_SURROUNDINGS_WARNING = 'The body sheds no heat at the allowed temperature: its surroundings (air or radiating surfaces) keep it at or above T_max with no damper power at all, so it has no continuous rating here (P_max shown as 0 W).';
+
 /** Largest mean power the body sheds at the allowed temperature. */
 export const powerRatingCalc = defineCalculator({
   id: 'power-rating',
@@ -15,6 +21,8 @@ export const powerRatingCalc = defineCalculator({
   ],
   outputs: [
     { key: 'Pmax', label: 'Continuous power rating P_max', kind: 'power' },
+    { key: 'rated', label: 'Body can be rated at T_max', kind: 'text', help: '"yes" when the body sheds heat at T_max; "no" when its surroundings already hold it at or above T_max (Q(T_max) ≤ 0).' },
+    { key: 'Qmax', label: 'Heat shed at T_max Q(T_max)', kind: 'power', help: 'Negative when the surroundings heat the body at T_max.' },
     { key: 'hConv', label: 'Convection coefficient h_conv', kind: 'heatTransferCoefficient' },
     { key: 'hRad', label: 'Radiation coefficient h_r', kind: 'heatTransferCoefficient' },
     { key: 'UA', label: 'Conductance UA at T_max', kind: 'thermalConductance' },
@@ -26,8 +34,10 @@ export const powerRatingCalc = defineCalculator({
     const r = bodyCooling(body, Tmax);
     const warnings = [...r.warnings];
     if (Tmax <= body.Tamb) warnings.push('The allowed temperature is not above the air temperature: the body can shed no power.');
+    const rated = r.Q > 0;
+    if (!rated) warnings.push(HOT_SURROUNDINGS_WARNING);
     return {
-      outputs: { Pmax: Math.max(0, r.Q), hConv: r.hConv, hRad: r.hRad, UA: r.UA, hNatural: r.hNatural, hForced: r.hForced, area: r.area, Ra: r.Ra, Re: r.Re },
+      outputs: { Pmax: Math.max(0, r.Q), rated: rated ? 'yes' : 'no', Qmax: r.Q, hConv: r.hConv, hRad: r.hRad, UA: r.UA, hNatural: r.hNatural, hForced: r.hForced, area: r.area, Ra: r.Ra, Re: r.Re },
       warnings,
     };
   },
@@ -76,7 +86,7 @@ export const powerRatingCalc = defineCalculator({
       provenance: 'from memory',
     },
   ],
-  sources: [{ key: 'incropera2007', locator: 'eqs. 9.34, 9.26/9.27, 7.54, 9.64, 1.9; Table A.4 (from memory)' }],
+  sources: [{ key: 'incropera2007', locator: 'eqs. 9.34, 9.26, 7.54, 9.64, 1.9; Table A.4 (from memory)' }],
   study: {
     inputs: { Tmax: 'allowedTemperature', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
   },

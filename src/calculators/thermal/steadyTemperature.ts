@@ -80,7 +80,7 @@ export const steadyTemperatureCalc = defineCalculator({
     },
   ],
   sources: [
-    { key: 'incropera2007', locator: 'eqs. 9.34, 9.26/9.27, 7.54, 9.64, 1.9; Table A.4 (from memory)' },
+    { key: 'incropera2007', locator: 'eqs. 9.34, 9.26, 7.54, 9.64, 1.9; Table A.4 (from memory)' },
     { key: 'brent1973', locator: 'ch. 4 (root finder)' },
   ],
   study: {

@@ -1,7 +1,7 @@
 import { ComputationError } from '../../core/errors.ts';
 import {
-  BIOT_LUMPED_MAX, biotNumber, bodyCooling, coolDownTime, material, onOffDuty, parsePowerProfile, profileWarmUp, rk4,
-  steadyTemperature, timeToLimit, type ProfileEnd,
+  BIOT_LUMPED_MAX, biotNumber, bodyCooling, bodyWarmUp, coolDownTime, material, onOffDuty, parsePowerProfile, profileWarmUp,
+  steadyTemperature, timeToLimit, type PowerProfile, type ProfileEnd,
 } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { bodyFrom, bodyInputs } from './bodyInputs.ts';
@@ -29,38 +29,22 @@ function setup(values: Values) {
     const end = choice<ProfileEnd>(values, 'after');
     const m = profileWarmUp({ Cth: C, UA: num(values, 'UA'), Tamb }, profile, end);
     const period = profile.t[profile.t.length - 1]!;
-    const shortest = Math.min(...profile.t.slice(1).map((t, i) => t - profile.t[i]!));
-    return { C, Tamb, duty: m, Pmean: m.Pmean, period, shortest, end, power: m.powerAt };
+    return { C, Tamb, duty: m, Pmean: m.Pmean, period, end, profile };
   }
   const P = num(values, 'P');
   const d = num(values, 'duty');
   const tp = num(values, 'period');
   const duty = onOffDuty({ P, Cth: C, UA: num(values, 'UA'), Tamb }, d, tp);
-  const power = (t: number) => (d >= 1 || t % tp < d * tp ? P : 0);
-  return { C, Tamb, duty, Pmean: d * P, period: tp, shortest: tp, end: 'repeat' as ProfileEnd, power };
+  const profile: PowerProfile = d >= 1 ? { t: [0, tp], P: [P] } : { t: [0, d * tp, tp], P: [P, 0] };
+  return { C, Tamb, duty, Pmean: d * P, period: tp, end: 'repeat' as ProfileEnd, profile };
 }
 
 type Setup = ReturnType<typeof setup>;
 
-/** Largest RK4 step count of the body model (about 0.1 s in a browser). */
-const MAX_BODY_STEPS = 60000;
-
-/** Body-model run: C dT/dt = P(t) − Q(T) with h(T) from the correlations (RK4). */
+/** Body-model run: C dT/dt = P(t) − Q(T) with h(T) from the correlations, piecewise between switching times. */
 function bodyRun(values: Values, m: Setup, tEnd: number, stopAt?: number) {
   const body = { ...bodyFrom(values), Tamb: num(values, 'Tamb') };
-  const { C, power } = m;
-  // RK4 is stable for h·(dQ/dT)/C below about 2.8; keep h below a fifth of the shortest time
-  // constant (largest UA, at the top of the air table) and resolve each duty period with 40 steps
-  // (a profile: also 4 steps in its shortest segment).
-  const tauMin = C / Math.max(1e-12, bodyCooling(body, 690).UA);
-  const perPeriod = m.shortest < m.period ? Math.max(40, Math.ceil((4 * m.period) / m.shortest)) : 40;
-  const periods = m.end === 'off' ? 1 : tEnd / m.period;
-  const steps = Math.max(400, Math.ceil(periods * perPeriod), Math.ceil(tEnd / (0.2 * tauMin)));
-  // a page must answer at typing speed: beyond this the inputs are outside the model's use
-  if (steps > MAX_BODY_STEPS) {
-    throw new ComputationError(`the body model would need ${steps.toExponential(1)} steps (a heat capacity very small for its heat loss, or many duty periods): lengthen the duty period, shorten the time, or use the constant-UA model`);
-  }
-  return rk4((t, T) => (power(t) - bodyCooling(body, T).Q) / C, body.Tamb, tEnd, steps, stopAt);
+  return bodyWarmUp((T) => bodyCooling(body, T).Q, m.C, body.Tamb, m.profile, m.end, tEnd, stopAt);
 }
 
 /** Lumped warm-up and cool-down of a damper at constant or on/off power. */
@@ -114,6 +98,7 @@ export const warmUpCalc = defineCalculator({
     const warnings: string[] = [];
     if (Bi > BIOT_LUMPED_MAX) warnings.push(`Biot number ${Bi.toPrecision(2)} > 0.1: one temperature does not describe the body; the surface runs cooler than the core.`);
     if (Tlimit <= Tamb) warnings.push('The limit is at or below the air temperature.');
+    if (duty.Tpeak > 700) warnings.push(`The constant-UA model settles at ${duty.Tpeak.toPrecision(3)} K, far beyond any damper: the heat loss UA is too small for this power (check UA).`);
     if (Ttouch <= Tamb) warnings.push('The cool-down target is at or below the air temperature: it is approached but never reached.');
     const outputs: Record<string, number | string | undefined> = {
       tau: duty.tau, Tss: duty.Tmean, tLimit, reached: tLimit === undefined ? 'no' : 'yes', T: duty.at(num(values, 't')),
@@ -126,6 +111,10 @@ export const warmUpCalc = defineCalculator({
       const ss = steadyTemperature(body, m.Pmean);
       warnings.push(...ss.warnings);
       outputs.TssBody = ss.Ts;
+      const UAtyped = num(values, 'UA');
+      if (UAtyped < 0.5 * ss.UA || UAtyped > 2 * ss.UA) {
+        warnings.push(`The typed UA = ${UAtyped.toPrecision(3)} W/K is ${UAtyped < ss.UA ? 'far below' : 'far above'} the body model's ${ss.UA.toPrecision(3)} W/K at its equilibrium: the constant-UA results (T_ss = ${duty.Tmean.toPrecision(4)} K) do not describe this body; check UA.`);
+      }
       if (!profile && num(values, 'duty') >= 1) outputs.tLimitBody = timeToLimit((T) => num(values, 'P') - bodyCooling(body, T).Q, C, Tamb, Tlimit);
       else {
         const tEnd = Math.max(10 * C / ss.UA, 3 * m.period);
@@ -157,7 +146,7 @@ export const warmUpCalc = defineCalculator({
     if (choice(values, 'loss') === 'body') {
       let r: ReturnType<typeof bodyRun> | undefined;
       try { r = bodyRun(values, m, tEnd); } catch (e) { if (!(e instanceof ComputationError) || choice(values, 'power') !== 'profile') throw e; }
-      if (r) series.push({ label: 'body model, h(T) (RK4)', x: r.t, y: r.y, style: 'dash', tone: 2 });
+      if (r) series.push({ label: 'body model, h(T) (ODE)', x: r.t, y: r.y, style: 'dash', tone: 2 });
     }
     const reach = tl === undefined ? `never reaches ${(Tlimit - 273.15).toFixed(0)} °C; it settles at ${(duty.Tpeak - 273.15).toFixed(1)} °C` : `reaches ${(Tlimit - 273.15).toFixed(0)} °C after ${(tl / 60).toFixed(1)} min`;
     return [{
@@ -218,7 +207,7 @@ export const warmUpCalc = defineCalculator({
   ],
   sources: [
     { key: 'incropera2007', locator: '§5.1–5.3 lumped capacitance, eq. 5.10 Biot number; Tables A.1, A.3, A.5 (from memory)' },
-    { key: 'hairer1993', locator: '§II.1 classical Runge–Kutta' },
+    { key: 'hairer1993', locator: '§II.4–II.6 embedded Runge–Kutta with step-size control and dense output' },
   ],
   study: {
     inputs: { P: 'meanPower', Cth: 'heatCapacity', UA: 'conductance', Tamb: 'airTemperature', Tlimit: 'allowedTemperature', t: 'dutyLength', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },

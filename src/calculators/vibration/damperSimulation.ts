@@ -79,7 +79,7 @@ export const damperSimulation = defineCalculator({
     }
     if (r.vLinear > 0) {
       const share = r.vLinear / r.vScale;
-      warnings.push(`Power law with α < 1 taken linear below ${r.vLinear.toPrecision(2)} m/s (${share < 0.01 ? 'a negligible' : `${(100 * share).toPrecision(2)} % of the velocity scale: a noticeable`} change of the law, made so the creeping motion can be integrated).`);
+      warnings.push(`Power law with α < 1 taken linear below ${r.vLinear.toPrecision(2)} m/s (${(100 * share).toPrecision(2)} % of the velocity scale), so the creeping motion can be integrated. The peaks are barely affected, but the slow tail of a free decay is not: its residual amplitude can differ by a factor of two from the pure power law.`);
     }
     if (r.closure > 1e-6) warnings.push(`Energy audit closes only to ${r.closure.toExponential(1)}: tighten the integrator tolerance.`);
     if (values.excitation !== 'none' && num(values, 'duration') * r.omegaRef < 4 * Math.PI) warnings.push('Fewer than two excitation periods simulated: the last-period amplitude and power include the transient.');

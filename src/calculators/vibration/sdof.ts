@@ -9,6 +9,9 @@ function oscillator(values: Values) {
   return { m: num(values, 'm'), k: num(values, 'k'), c: num(values, 'c'), x0: num(values, 'x0'), v0: num(values, 'v0') };
 }
 
+
+/** Samples of the energy audit, shared by the results and the chart (one closure value on the page). */
+const AUDIT_SAMPLES = 401;
 /** Free vibration of a mass–spring–viscous-damper system: frequencies, damping, regime, energy. */
 export const sdof = defineCalculator({
   id: 'sdof',
@@ -28,7 +31,7 @@ export const sdof = defineCalculator({
     { key: 'ccr', label: 'Critical damping coefficient', kind: 'damping' },
     { key: 'wd', label: 'Damped natural frequency', kind: 'angularFrequency', help: '0 unless underdamped.' },
     { key: 'logdec', label: 'Logarithmic decrement δ', kind: 'dimensionless', optional: true, help: 'Underdamped only.' },
-    { key: 'Q', label: 'Quality factor Q', kind: 'dimensionless' },
+    { key: 'Q', label: 'Quality factor Q', kind: 'dimensionless', optional: true, help: 'Underdamped only: 1/(2ζ), the sharpness of the resonance.' },
     { key: 'regime', label: 'Regime', kind: 'text' },
     { key: 'E0', label: 'Initial energy', kind: 'energy' },
     { key: 'closure', label: 'Energy audit closure', kind: 'dimensionless', digits: 2, help: 'max |E_k + E_s + E_D − E_0| / E_0 over the plotted window.' },
@@ -38,7 +41,10 @@ export const sdof = defineCalculator({
     const wn = naturalFrequency(p.m, p.k);
     const zeta = dampingRatio(p.m, p.k, p.c);
     const regime = dampingRegime(zeta);
-    const audit = energyHistory(p, responseWindow(wn, zeta), 41);
+    const window = responseWindow(wn, zeta);
+    const audit = energyHistory(p, window, AUDIT_SAMPLES); // the chart's samples: one closure for the page
+    // the window is capped at 30 periods where the decay to 1 % would take longer (ζ < ln 100/(60π) ≈ 2.44 %)
+    const capped = zeta < 1 && Math.log(100) / (zeta * wn) > window * (1 + 1e-12);
     return {
       outputs: {
         wn,
@@ -47,19 +53,19 @@ export const sdof = defineCalculator({
         ccr: criticalDamping(p.m, p.k),
         wd: regime === 'underdamped' ? dampedFrequency(wn, zeta) : 0,
         logdec: regime === 'underdamped' ? logDecrementFromZeta(zeta) : undefined,
-        Q: qualityFactor(zeta),
+        Q: regime === 'underdamped' ? qualityFactor(zeta) : undefined,
         regime,
         E0: audit.initial,
         closure: audit.closure,
       },
-      warnings: zeta < 0.005 ? ['ζ below 0.5 %: the plotted window is capped at 30 cycles.'] : [],
+      warnings: capped ? ['ζ below about 2.4 %: the plotted window is capped at 30 cycles, before the motion has decayed to 1 %.'] : [],
     };
   },
   charts(values, result): ChartSpec[] {
     const p = oscillator(values);
     const wn = result.outputs.wn as number;
     const zeta = result.outputs.zeta as number;
-    const h = energyHistory(p, responseWindow(wn, zeta), 401);
+    const h = energyHistory(p, responseWindow(wn, zeta), AUDIT_SAMPLES);
     const series: ChartSpec['series'][number][] = [{ label: 'x(t)', x: h.t, y: h.x, tone: 0 }];
     if (zeta < 1) {
       const wd = result.outputs.wd as number;
@@ -70,7 +76,7 @@ export const sdof = defineCalculator({
       series.push({ label: 'envelope (lower)', legend: false, x: h.t, y: env.map((e) => -e), style: 'dash', tone: 1 });
     }
     const tEnd = h.t[h.t.length - 1] ?? 0;
-    const peak = Math.max(...h.x.map(Math.abs));
+    const peak = h.x.reduce((a, x) => Math.max(a, Math.abs(x)), 0);
     return [
       {
         id: 'response',
@@ -91,7 +97,7 @@ export const sdof = defineCalculator({
           { label: 'dissipated', x: h.t, y: h.dissipated, tone: 3 },
           { label: 'sum', x: h.t, y: h.total, style: 'dash', tone: 4 },
         ],
-        summary: `Initial energy ${q(h.initial, 'energy')}; kinetic + spring + dissipated stays equal to it within ${h.closure.toExponential(1)} (relative) over the window.`,
+        summary: `Initial energy ${q(h.initial, 'energy')}; kinetic + spring + dissipated stays equal to it within ${(result.outputs.closure as number).toExponential(1)} (relative) over the window.`,
       },
     ];
   },

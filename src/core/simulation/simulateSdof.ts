@@ -138,10 +138,20 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
       slip = Math.sign(p(t) - k * z);
       continue;
     }
-    const sol = integrateAdaptive(sys, t, y, tEnd, {
-      rtol, atol, hMax, maxSteps: Math.max(1, MAX_STEPS - stats.accepted - stats.rejected), onStep: (s) => rec.step(s),
-      event: coulomb ? (_t, s) => slip * s[V]! : undefined,
-    });
+    const left = MAX_STEPS - stats.accepted - stats.rejected;
+    const budgetError = (at: number) => new ComputationError(`simulation: more than ${MAX_STEPS.toLocaleString('en-GB').replace(/,/g, ' ')} integration steps in all before t = ${tEnd} s (stopped at t = ${at.toPrecision(6)} s, ${stats.segments} stick–slip phases): shorten the duration or lower the excitation frequency`);
+    if (left <= 0) throw budgetError(t);
+    let sol;
+    try {
+      sol = integrateAdaptive(sys, t, y, tEnd, {
+        rtol, atol, hMax, maxSteps: left, onStep: (s) => rec.step(s),
+        event: coulomb ? (_t, s) => slip * s[V]! : undefined,
+      });
+    } catch (e) {
+      // the integrator counts only this phase's steps; say what ran out: the budget of the whole run
+      if (e instanceof ComputationError && /^ODE: more than/.test(e.message)) throw budgetError(Number(/stopped at t = ([^ ]+) s/.exec(e.message)?.[1] ?? t));
+      throw e;
+    }
     stats.accepted += sol.stats.accepted; stats.rejected += sol.stats.rejected; stats.evaluations += sol.stats.evaluations;
     t = sol.t;
     y = sol.y;

@@ -5,6 +5,5 @@ export const general = {
   codata2018: { kind: 'data', citation: 'E. Tiesinga et al., CODATA Recommended Values of the Fundamental Physical Constants: 2018, Rev. Mod. Phys. 93, 025010 (2021).' },
   lyness1969: { kind: 'paper', citation: 'J. N. Lyness, Notes on the adaptive Simpson quadrature routine, J. ACM 16(3), 483–495, 1969.' },
   lanczos1964: { kind: 'paper', citation: 'C. Lanczos, A precision approximation of the gamma function, SIAM J. Numer. Anal. Ser. B 1, 86–96, 1964.' },
-  press2007: { kind: 'book', citation: 'W. H. Press, S. A. Teukolsky, W. T. Vetterling and B. P. Flannery, Numerical Recipes, 3rd ed., Cambridge University Press, 2007.' },
   abramowitz1964: { kind: 'book', citation: 'M. Abramowitz and I. A. Stegun, Handbook of Mathematical Functions, NBS Applied Mathematics Series 55, 1964.' },
 } as const satisfies Record<string, Source>;

@@ -11,8 +11,26 @@ import type { Source } from './source.ts';
 
 export type { Source };
 
+/**
+ * Joins per-domain source lists; a key defined in two lists is refused (a spread would silently
+ * keep the second citation).
+ * @throws Error naming the key
+ */
+export function joinSources<T extends readonly Record<string, Source>[]>(...lists: T): UnionToIntersection<T[number]> {
+  const out: Record<string, Source> = {};
+  for (const list of lists) {
+    for (const [key, src] of Object.entries(list)) {
+      if (Object.prototype.hasOwnProperty.call(out, key)) throw new Error(`source key '${key}' defined twice in the bibliography`);
+      out[key] = src;
+    }
+  }
+  return out as UnionToIntersection<T[number]>;
+}
+
+type UnionToIntersection<U> = (U extends unknown ? (x: U) => void : never) extends (x: infer I) => void ? I : never;
+
 /** All sources, joined from the per-domain lists (split so parallel work does not collide). */
-export const sources = { ...general, ...vibration, ...duty, ...thermal } as const;
+export const sources = joinSources(general, vibration, duty, thermal);
 
 export type SourceKey = keyof typeof sources;
 

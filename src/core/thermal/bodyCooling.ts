@@ -56,7 +56,7 @@ export const BODY_T_RANGE = { min: 200, max: 700 } as const;
  * @returns coefficients, heat flows, UA, the dimensionless groups and validity warnings
  * @throws InputRangeError for inputs outside those ranges
  * @example bodyCooling({D:0.05,L:0.35,orientation:'horizontal',ends:false,eps:0.9,Tamb:298.15,V:0}, 353.15).Q // ≈ 41.0 W
- * @source incropera2007 eqs. 9.34, 9.26/9.27, 9.33, 7.54, 9.64, 1.9 (from memory)
+ * @source incropera2007 eqs. 9.34, 9.26, 9.33, 7.54, 9.64, 1.9 (from memory)
  */
 export function bodyCooling(body: Body, Ts: number): BodyCooling {
   const D = requireInRange('D', body.D, { ...POSITIVE, max: 10 }, 'm');

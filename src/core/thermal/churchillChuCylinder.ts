@@ -10,7 +10,7 @@ import { requireInRange } from '../errors.ts';
  * @param Pr Prandtl number, (0, ∞)
  * @returns Nu_D, ≥ 0.36
  * @throws InputRangeError for negative Ra or non-positive Pr
- * @example churchillChuCylinder(5.073e6, 0.697) // 23.3 (incropera2007 Example 9.3 steam pipe, from memory)
+ * @example churchillChuCylinder(5.073e6, 0.697) // 23.09 (closed form; the book's Example 9.3 steam pipe gives 23.3 from rounded properties, from memory)
  * @source incropera2007 eq. 9.34 (from memory); churchillChu1975 eq. (the horizontal-cylinder correlation)
  */
 export function churchillChuCylinder(Ra: number, Pr: number): number {

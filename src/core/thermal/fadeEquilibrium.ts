@@ -1,6 +1,7 @@
 import { NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
 import { bracketRoots } from '../numeric/bracketRoots.ts';
 import { bodyCooling, type Body } from './bodyCooling.ts';
+import { requireBalanced } from './checkedRoot.ts';
 import { fadeCoefficient, type FadeModel } from './fadeCoefficient.ts';
 import { timeToLimit } from './warmUpWithLoss.ts';
 
@@ -28,7 +29,8 @@ export interface FadeEquilibrium {
  * Coupled thermal equilibrium of a damper: the duty sets the power, the power sets the body
  * temperature, the temperature sets the coefficient. Solves f(T) = Q(T) − P(c(T)) = 0 by scanning
  * [T_∞, T_lim] on 400 panels and refining each sign change with Brent's method; stable where f
- * rises through zero. Bracketing cannot diverge: the answer is every crossing, or none below the
+ * rises through zero; each crossing's remaining imbalance is checked (below 1e-7 of the flows, else
+ * a typed error: a jump of the balance, not a root). Bracketing cannot diverge: the answer is every crossing, or none below the
  * limit, in which case the time to the limit comes from t = ∫ C dT/(P − Q).
  *
  * $$f(T) = Q_{out}(T) - P\big(c(T)\big),\quad P = \tfrac12 c\,\omega^2X^2\ \text{(harmonic)}\ \text{or}\ P\ \text{fixed (random road)}$$
@@ -51,6 +53,10 @@ export function fadeEquilibrium(body: Body, model: FadeModel, duty: FadeDuty, Tl
   const f = (T: number) => Q(T) - P(T);
   const lo = body.Tamb;
   const found = bracketRoots(f, lo, Tlimit, 400, 1e-9);
+  for (const x of found) {
+    const q = bodyCooling(body, x.x);
+    requireBalanced(q.Q - P(x.x), Math.max(P(x.x), Math.abs(q.Qconv), Math.abs(q.Qrad), 1e-12), x.x, 'fade equilibrium', 'W');
+  }
   const crossings = found.map((x) => ({ T: x.x, c: fadeCoefficient(model, x.x), P: P(x.x), stable: x.direction > 0 }));
   const warnings: string[] = [];
   if (crossings.length > 1) warnings.push(`${crossings.length} equilibria below the limit: the body settles at the lowest when warming from ambient.`);

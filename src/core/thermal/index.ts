@@ -13,6 +13,7 @@ export { steadyTemperature } from './steadyTemperature.ts';
 export { lumpedWarmUp, type LumpedBody } from './lumpedWarmUp.ts';
 export { onOffDuty } from './onOffDuty.ts';
 export { rk4 } from './rk4.ts';
+export { bodyWarmUp, MAX_BODY_SEGMENTS, type BodyWarmUpRun } from './bodyWarmUp.ts';
 export { warmUpWithLoss, timeToLimit } from './warmUpWithLoss.ts';
 export { MATERIALS, material, type Material } from './materials.ts';
 export { biotNumber, BIOT_LUMPED_MAX } from './biotNumber.ts';

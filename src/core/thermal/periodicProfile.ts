@@ -42,5 +42,5 @@ export function periodicProfile(p: PowerProfile, tau: number, UA: number): Perio
   const theta = [b / oneMinusA];
   for (let i = 0; i < n; i++) theta.push(lumpedStep(theta[i]!, p.P[i]!, p.t[i + 1]! - p.t[i]!, tau, UA));
   theta[n] = theta[0]!; // the fixed point, exactly (the recomputed value differs by rounding only)
-  return { a, b, theta, peak: Math.max(...theta), low: Math.min(...theta) };
+  return { a, b, theta, peak: theta.reduce((s, x) => Math.max(s, x), -Infinity), low: theta.reduce((s, x) => Math.min(s, x), Infinity) };
 }

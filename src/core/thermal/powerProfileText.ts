@@ -1,7 +1,8 @@
 /**
  * The text form of a power profile: what a reader types and what a duty page hands over in a
  * link. One entry per line (or separated by ';'): "t, P" — from time t (s) the power is P (W);
- * the last entry is the end time alone. Blank lines and lines starting with '#' are skipped.
+ * the last entry is the end time alone. Blank lines and lines starting with '#' are skipped (whole
+ * lines: a ';' inside a comment does not end it).
  *
  *     # 120 W for 10 min, then 10 min off (period 20 min)
  *     0, 120
@@ -32,7 +33,8 @@ export function parsePowerProfile(text: string, input = 'profile'): PowerProfile
   };
   if (typeof text !== 'string') throw new InputRangeError(input, typeof text, undefined, '', 'must be text');
   if (text.length > MAX_PROFILE_TEXT) throw new InputRangeError(input, `${text.length} characters`, undefined, '', `longer than ${MAX_PROFILE_TEXT} characters`);
-  const entries = text.split(/\r\n|\n|\r|;/);
+  // comments are whole lines: drop them before splitting a line into ';'-separated entries
+  const entries = text.split(/\r\n|\n|\r/).flatMap((l) => (l.trim().startsWith('#') ? ['#'] : l.split(';')));
   const t: number[] = [];
   const P: number[] = [];
   let end: number | undefined;

@@ -72,7 +72,7 @@ export function profileWarmUp(b: ProfileBody, p: PowerProfile, end: ProfileEnd) 
     const i = segmentOf(s);
     return lumpedStep(boundary(k, i), p.P[i]!, s - p.t[i]!, tau, UA);
   };
-  const peakRise = ps ? ps.peak : Math.max(...first);
+  const peakRise = ps ? ps.peak : first.reduce((a, b) => Math.max(a, b), -Infinity);
   /** First time the body reaches T (K); 0 at or below T∞; undefined when never reached. */
   const timeTo = (T: number): number | undefined => {
     const th = T - Tamb;

@@ -1,20 +1,22 @@
 import { ComputationError, NON_NEGATIVE, requireInRange } from '../errors.ts';
-import { brentRoot } from '../numeric/brent.ts';
 import { BODY_T_RANGE, bodyCooling, type Body, type BodyCooling } from './bodyCooling.ts';
+import { checkedRoot } from './checkedRoot.ts';
 
 /**
  * Body temperature at which a mean power P leaves the body in steady state: the root of
  * Q(T_s) − P = 0, with Q from `bodyCooling` (h depends on T_s through the film properties,
  * the Rayleigh number and radiation, so the equation is nonlinear). Q rises monotonically with
- * T_s, so the root is unique; it is bracketed between min(T_∞, T_sur) and 700 K and found by
- * Brent's method to 1e-9 K.
+ * T_s, so the root is unique; it is bracketed between min(T_∞, T_sur) and 700 K, found by
+ * Brent's method to 1e-9 K and checked: the remaining imbalance must be below 1e-7 of P (or of
+ * the larger of the convective and radiative flows), else a typed error (a jump, not a root).
  *
  * $$Q(T_s) = h_{conv}(T_s)\,A\,(T_s-T_\infty) + h_r(T_s)\,A\,(T_s-T_{sur}) = P$$
  *
  * @param body the body and its air (see `Body`)
  * @param P mean power to shed, W, [0, ∞)
  * @returns the steady surface temperature (K) with the cooling figures at that temperature
- * @throws InputRangeError for bad inputs; ComputationError when the body cannot shed P below 700 K
+ * @throws InputRangeError for bad inputs; ComputationError when the body cannot shed P below 700 K,
+ *   or when the bracket holds a jump of Q rather than a root
  * @example steadyTemperature(body50x350, 41.01).Ts // ≈ 353.15 K
  * @source incropera2007 eq. 1.12 energy balance (from memory); brent1973 ch. 4
  */
@@ -27,6 +29,14 @@ export function steadyTemperature(body: Body, P: number): BodyCooling & { readon
   if (fHi < 0) {
     throw new ComputationError(`the body cannot shed ${P.toPrecision(4)} W below ${hi} K (${(hi - 273.15).toFixed(0)} °C): at that temperature it sheds only ${(fHi + P).toPrecision(4)} W`);
   }
-  const Ts = f(lo) >= 0 ? lo : brentRoot(f, lo, hi, { xTol: 1e-9 });
+  if (f(lo) >= 0) return { ...bodyCooling(body, lo), Ts: lo };
+  const Ts = checkedRoot(f, lo, hi, 'steady body temperature', 'W', { scale: balanceScale(body, P, lo, hi) }).x;
   return { ...bodyCooling(body, Ts), Ts };
+}
+
+/** Scale of the heat balance: P, or the largest heat flow at the ends of the bracket. */
+function balanceScale(body: Body, P: number, lo: number, hi: number): number {
+  const a = bodyCooling(body, lo);
+  const b = bodyCooling(body, hi);
+  return Math.max(P, Math.abs(a.Qconv), Math.abs(a.Qrad), Math.abs(b.Qconv), Math.abs(b.Qrad), 1e-12);
 }

@@ -1,24 +1,26 @@
 import { requireInRange } from '../errors.ts';
 
 /**
- * Average Nusselt number of free convection from an isothermal vertical plate of height L
- * (Churchill–Chu): the laminar form for Ra_L ≤ 10⁹ (more accurate there), the all-range form above.
+ * Average Nusselt number of free convection from an isothermal vertical plate of height L: the
+ * Churchill–Chu all-range correlation, one formula continuous over every Rayleigh number offered.
+ * The laminar form (eq. 9.27) is slightly more accurate below 10⁹ but switching to it there makes
+ * Nu jump by about a third at Ra_L = 10⁹ (92 → 123 at Pr = 0.7), and every equilibrium solved on a
+ * jump is wrong; so the all-range form is used throughout.
  *
- * $$\overline{Nu}_L = 0.68 + \frac{0.670\,Ra_L^{1/4}}{\left[1+(0.492/Pr)^{9/16}\right]^{4/9}} \quad (Ra_L \le 10^9)$$
- * $$\overline{Nu}_L = \left\{0.825 + \frac{0.387\,Ra_L^{1/6}}{\left[1+(0.492/Pr)^{9/16}\right]^{8/27}}\right\}^2 \quad (\text{all } Ra_L)$$
+ * $$\overline{Nu}_L = \left\{0.825 + \frac{0.387\,Ra_L^{1/6}}{\left[1+(0.492/Pr)^{9/16}\right]^{8/27}}\right\}^2$$
  *
  * @param Ra Rayleigh number on the height, [0, ∞)
  * @param Pr Prandtl number, (0, ∞)
  * @returns Nu_L
  * @throws InputRangeError for negative Ra or non-positive Pr
  * @example verticalPlateNusselt(1.813e9, 0.69) // ≈ 147 (incropera2007 Example 9.2 glass door, from memory)
- * @source incropera2007 eqs. 9.26 and 9.27 (from memory); churchillChu1975plate
+ * @example verticalPlateNusselt(1e9, 0.7) // 122.615 (closed form)
+ * @source incropera2007 eq. 9.26 (from memory); churchillChu1975plate
  */
 export function verticalPlateNusselt(Ra: number, Pr: number): number {
   requireInRange('Ra', Ra, { min: 0, max: Infinity, maxExclusive: true }, '');
   requireInRange('Pr', Pr, { min: 0, max: Infinity, minExclusive: true, maxExclusive: true }, '');
   const g = 1 + (0.492 / Pr) ** (9 / 16);
-  if (Ra <= 1e9) return 0.68 + (0.67 * Ra ** 0.25) / g ** (4 / 9);
   return (0.825 + (0.387 * Ra ** (1 / 6)) / g ** (8 / 27)) ** 2;
 }
 

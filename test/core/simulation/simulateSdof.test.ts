@@ -130,3 +130,12 @@ describe('simulateSdof invariants', () => {
     }), { numRuns: 30 });
   });
 });
+
+describe('simulateSdof: the step budget', () => {
+  it('names the whole run\'s budget when it runs out (was "ODE: more than 1 steps before t = …")', () => {
+    // invented extreme case: Coulomb friction under a 50 rad/s force for 1e5 s (millions of stick–slip phases)
+    const run = () => simulateSdof({ m: 1, k: 100, law: { kind: 'coulomb', Ff: 5 }, excitation: { kind: 'force', F0: 10, omega: 50 }, x0: 0, v0: 0 }, { duration: 1e5 });
+    expect(run).toThrow(/more than 100 000 integration steps in all/);
+    expect(run).not.toThrow(/more than \d steps/);
+  });
+});
