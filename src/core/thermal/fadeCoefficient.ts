@@ -23,7 +23,7 @@ export interface FadeModel {
  * @param m model: c_ref (0, ∞) N·s/m, T_ref K, s [0, 1], oil Walther fit
  * @param T oil temperature, K, (0, ∞)
  * @returns c in N·s/m (> 0 whenever s < 1)
- * @example fadeCoefficient({ cRef: 980, Tref: 298.15, viscousShare: 0.3, oil }, 353.15)
+ * @example fadeCoefficient({ cRef: 980, Tref: 298.15, viscousShare: 0.3, oil: waltherFit(22e-6, 4.4e-6) }, 353.15) // 733.14 N·s/m (ν40 = 22, ν100 = 4.4 mm²/s; oil at 80 °C)
  * @source dixon2007thermal (fade rates, from memory); the split itself is common practice, no source
  */
 export function fadeCoefficient(m: FadeModel, T: number): number {

@@ -13,7 +13,7 @@ import { lumpedWarmUp, type LumpedBody } from './lumpedWarmUp.ts';
  * @param tp period, s, (0, ∞)
  * @returns the cyclic peak temperature, the temperature at t, and the first time a limit is reached
  * @throws InputRangeError for bad inputs
- * @example onOffDuty({P:150,Cth:1395,UA:0.745664,Tamb:298.15}, 0.5, 600).Tpeak // ≈ Tamb + 108.63 K
+ * @example onOffDuty({ P: 150, Cth: 1395, UA: 0.745664, Tamb: 298.15 }, 0.5, 600).Tpeak - 298.15 // 108.63 K above the air
  * @source closed form of incropera2007 eq. 5.6 applied phase by phase (from memory)
  */
 export function onOffDuty(b: LumpedBody, d: number, tp: number) {

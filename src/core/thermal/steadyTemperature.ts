@@ -17,7 +17,7 @@ import { checkedRoot } from './checkedRoot.ts';
  * @returns the steady surface temperature (K) with the cooling figures at that temperature
  * @throws InputRangeError for bad inputs; ComputationError when the body cannot shed P below 700 K,
  *   or when the bracket holds a jump of Q rather than a root
- * @example steadyTemperature(body50x350, 41.01).Ts // ≈ 353.15 K
+ * @example steadyTemperature({ D: 0.05, L: 0.35, orientation: 'horizontal', ends: false, eps: 0.9, Tamb: 298.15, V: 0 }, 41.01).Ts // 353.15 K (Ø50 × 350 mm body, still air at 25 °C)
  * @source incropera2007 eq. 1.12 energy balance (from memory); brent1973 ch. 4
  */
 export function steadyTemperature(body: Body, P: number): BodyCooling & { readonly Ts: number } {

@@ -16,7 +16,7 @@ import { rk4 } from './rk4.ts';
  * @param tEnd end of the time window, s, (0, ∞)
  * @param steps RK4 steps (default 400)
  * @returns samples t[], T[]
- * @example warmUpWithLoss((T) => 0.75 * (T - 298.15), 50, 1395, 298.15, 3600).T.at(-1) // ≈ 355.4 K
+ * @example warmUpWithLoss((T) => 0.75 * (T - 298.15), 50, 1395, 298.15, 3600).T.at(-1) // 355.19 K (closed form 298.15 + (50/0.75)(1 − e^{−0.75·3600/1395}) = 355.193 K)
  * @source incropera2007 §5.3 general lumped analysis (from memory); hairer1993 §II.1
  */
 export function warmUpWithLoss(Q: (T: number) => number, P: number, Cth: number, T0: number, tEnd: number, steps = 400) {
