@@ -1,6 +1,7 @@
 import { bodyCooling as cool } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec } from '../types.ts';
 import { BODY_DETAIL_OUTPUTS, bodyFrom, bodyInputs } from './bodyInputs.ts';
+import { q } from '../quantityText.ts';
 
 const STEAM_PIPE = { D: 0.1, L: 1, orientation: 'horizontal', Tamb: 296.15, Ts: 438.15, V: 0, eps: 0.85 } as const;
 const TW210 = { D: 0.05, L: 0.35, orientation: 'horizontal', Tamb: 298.15, Ts: 353.15, eps: 0.9 } as const;
@@ -45,7 +46,7 @@ export const bodyCoolingCalc = defineCalculator({
         { label: 'radiation h_r', x: T, y: rows.map((r) => r.hRad), tone: 2 },
         { label: 'total', x: T, y: rows.map((r) => r.hConv + r.hRad), style: 'dash', tone: 4 },
       ],
-      summary: `From ${(lo - 273.15).toFixed(0)} °C to ${(hi - 273.15).toFixed(0)} °C the convection coefficient goes from ${rows[0]!.hConv.toPrecision(3)} to ${rows.at(-1)!.hConv.toPrecision(3)} W/(m²·K) and radiation from ${rows[0]!.hRad.toPrecision(3)} to ${rows.at(-1)!.hRad.toPrecision(3)} W/(m²·K).`,
+      summary: `From ${q(lo, 'temperature', 3)} to ${q(hi, 'temperature', 3)} the convection coefficient goes from ${q(rows[0]!.hConv, 'heatTransferCoefficient', 3)} to ${q(rows.at(-1)!.hConv, 'heatTransferCoefficient', 3)} and radiation from ${q(rows[0]!.hRad, 'heatTransferCoefficient', 3)} to ${q(rows.at(-1)!.hRad, 'heatTransferCoefficient', 3)}.`,
     }];
   },
   verification: [

@@ -1,6 +1,7 @@
 import { bodyCooling, dutyPower, fadeCoefficient, fadeEquilibrium, waltherFit, type FadeDuty, type FadeModel } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
 import { bodyFrom, bodyInputs } from './bodyInputs.ts';
+import { q } from '../quantityText.ts';
 
 function setup(values: Values) {
   const body = bodyFrom(values);
@@ -85,7 +86,7 @@ export const dampingFadeCalc = defineCalculator({
           { label: 'damper power P(c(T))', x: T, y: P, style: 'dash', tone: 3 },
         ],
         markers,
-        summary: `Heat rejected rises from 0 to ${Q.at(-1)!.toPrecision(3)} W over the range; damper power goes from ${P[0]!.toPrecision(3)} W to ${P.at(-1)!.toPrecision(3)} W. ${what}`,
+        summary: `Heat rejected rises from 0 to ${q(Q.at(-1)!, 'power', 3)} over the range; damper power goes from ${q(P[0]!, 'power', 3)} to ${q(P.at(-1)!, 'power', 3)}. ${what}`,
       },
       {
         id: 'fade',
@@ -94,7 +95,7 @@ export const dampingFadeCalc = defineCalculator({
         y: { label: 'Damping coefficient', kind: 'damping', min: 0 },
         series: [{ label: 'c(T)', x: T, y: c, tone: 1 }],
         markers,
-        summary: `The coefficient falls from ${c[0]!.toFixed(0)} N·s/m at ${(lo - 273.15).toFixed(0)} °C to ${c.at(-1)!.toFixed(0)} N·s/m at ${(hi - 273.15).toFixed(0)} °C (viscous share ${num(values, 'share')}).`,
+        summary: `The coefficient falls from ${q(c[0]!, 'damping')} at ${q(lo, 'temperature', 3)} to ${q(c.at(-1)!, 'damping')} at ${q(hi, 'temperature', 3)} (viscous share ${num(values, 'share')}).`,
       },
     ];
   },

@@ -1,5 +1,6 @@
 import { isoViscosityGrade, waltherFit, waltherViscosity } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
+import { q } from '../quantityText.ts';
 
 const VIS_A = { nu40: 32e-6, nu100: 5.4e-6 } as const;
 
@@ -47,7 +48,7 @@ export const oilViscosityCalc = defineCalculator({
         { label: 'data points', x: [313.15, 373.15], y: [num(values, 'nu40'), num(values, 'nu100')], style: 'points', tone: 3 },
       ],
       markers: [{ x: num(values, 'T'), label: 'T' }],
-      summary: `Viscosity falls from ${(nu[0]! * 1e6).toPrecision(3)} mm²/s at ${(T[0]! - 273.15).toFixed(0)} °C to ${(nu.at(-1)! * 1e6).toPrecision(3)} mm²/s at ${(T.at(-1)! - 273.15).toFixed(0)} °C; ${((result.outputs.nu as number) * 1e6).toPrecision(4)} mm²/s at the chosen temperature.`,
+      summary: `Viscosity falls from ${q(nu[0]!, 'kinematicViscosity', 3)} at ${q(T[0]!, 'temperature', 3)} to ${q(nu.at(-1)!, 'kinematicViscosity', 3)} at ${q(T.at(-1)!, 'temperature', 3)}; ${q(result.outputs.nu as number, 'kinematicViscosity')} at the chosen temperature.`,
     }];
   },
   verification: [

@@ -1,6 +1,7 @@
 import { bodyCooling } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec } from '../types.ts';
 import { BODY_DETAIL_OUTPUTS, bodyFrom, bodyInputs } from './bodyInputs.ts';
+import { q } from '../quantityText.ts';
 
 const TW210 = { D: 0.05, L: 0.35, orientation: 'horizontal', Tamb: 298.15, eps: 0.9 } as const;
 
@@ -54,7 +55,7 @@ export const powerRatingCalc = defineCalculator({
       y: { label: 'Continuous rating', kind: 'power', min: 0 },
       series: [{ label: `P_max at ${(Tmax - 273.15).toFixed(0)} °C`, x: V, y: P, tone: 0 }],
       markers: body.V > 0 ? [{ x: body.V, label: 'this case' }] : [],
-      summary: `At ${(Tmax - 273.15).toFixed(0)} °C the body sheds ${P[0]!.toPrecision(3)} W in still air and ${P.at(-1)!.toPrecision(3)} W with ${Vtop.toFixed(0)} m/s across it.`,
+      summary: `At ${q(Tmax, 'temperature', 3)} the body sheds ${q(P[0]!, 'power', 3)} in still air and ${q(P.at(-1)!, 'power', 3)} with ${q(Vtop, 'velocity', 2)} across it.`,
     }];
   },
   verification: [

@@ -1,6 +1,7 @@
 import { bodyCooling, steadyTemperature as solve } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec } from '../types.ts';
 import { BODY_DETAIL_OUTPUTS, bodyFrom, bodyInputs } from './bodyInputs.ts';
+import { q } from '../quantityText.ts';
 
 const TW210 = { D: 0.05, L: 0.35, orientation: 'horizontal', Tamb: 298.15, eps: 0.9 } as const;
 
@@ -47,7 +48,7 @@ export const steadyTemperatureCalc = defineCalculator({
         { label: 'damper power P', x: [lo, hi], y: [P, P], style: 'dash', tone: 3 },
       ],
       markers: [{ x: Ts, label: 'steady T_s' }],
-      summary: `The body sheds ${P.toPrecision(3)} W at ${(Ts - 273.15).toFixed(1)} °C, ${(Ts - lo).toFixed(1)} K above the air; heat rejected rises from 0 W at ${(lo - 273.15).toFixed(0)} °C to ${Q.at(-1)!.toPrecision(3)} W at ${(hi - 273.15).toFixed(0)} °C.`,
+      summary: `The body sheds ${q(P, 'power', 3)} at ${q(Ts, 'temperature')}, ${q(Ts - lo, 'temperatureDifference', 3)} above the air; heat rejected rises from 0 at ${q(lo, 'temperature', 3)} to ${q(Q.at(-1)!, 'power', 3)} at ${q(hi, 'temperature', 3)}.`,
     }];
   },
   verification: [

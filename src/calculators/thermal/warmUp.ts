@@ -5,6 +5,7 @@ import {
 } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { bodyFrom, bodyInputs } from './bodyInputs.ts';
+import { q } from '../quantityText.ts';
 
 /** The default profile: the Tarnwick test-bay cycle (10 min at 120 W, 10 min off). */
 const DEFAULT_PROFILE = '# time [s], power [W] from then on; the last line is the end time alone\n0, 120\n600, 0\n1200';
@@ -148,14 +149,14 @@ export const warmUpCalc = defineCalculator({
       try { r = bodyRun(values, m, tEnd); } catch (e) { if (!(e instanceof ComputationError) || choice(values, 'power') !== 'profile') throw e; }
       if (r) series.push({ label: 'body model, h(T) (ODE)', x: r.t, y: r.y, style: 'dash', tone: 2 });
     }
-    const reach = tl === undefined ? `never reaches ${(Tlimit - 273.15).toFixed(0)} °C; it settles at ${(duty.Tpeak - 273.15).toFixed(1)} °C` : `reaches ${(Tlimit - 273.15).toFixed(0)} °C after ${(tl / 60).toFixed(1)} min`;
+    const reach = tl === undefined ? `never reaches ${q(Tlimit, 'temperature', 3)}; it settles at ${q(duty.Tpeak, 'temperature')}` : `reaches ${q(Tlimit, 'temperature', 3)} after ${(tl / 60).toFixed(1)} min`;
     return [{
       id: 'warmup',
       title: 'Body temperature against time',
       x: { label: 'Time', kind: 'time' },
       y: { label: 'Temperature', kind: 'temperature' },
       series,
-      summary: `Starting at ${(Tamb - 273.15).toFixed(0)} °C with τ = ${(duty.tau / 60).toFixed(1)} min, the body ${reach}.`,
+      summary: `Starting at ${q(Tamb, 'temperature', 3)} with τ = ${(duty.tau / 60).toFixed(1)} min, the body ${reach}.`,
     }];
   },
   verification: [
