@@ -33,10 +33,10 @@ export function svgChart(spec: ChartSpec, system: UnitSystem): string {
     s.y.forEach((v) => { const d = toDisplay(v, uy); if (Number.isFinite(d) && (!ylog || d > 0)) ys.push(d); });
   }
   if (xs.length === 0 || ys.length === 0) return '';
-  const x0 = spec.x.min !== undefined ? toDisplay(spec.x.min, ux) : Math.min(...xs);
-  const x1 = spec.x.max !== undefined ? toDisplay(spec.x.max, ux) : Math.max(...xs);
-  const y0 = spec.y.min !== undefined ? toDisplay(spec.y.min, uy) : Math.min(...ys);
-  const y1 = spec.y.max !== undefined ? toDisplay(spec.y.max, uy) : Math.max(...ys);
+  const x0 = spec.x.min !== undefined ? toDisplay(spec.x.min, ux) : xs.reduce((a, b) => Math.min(a, b), Infinity); // no spread: a long series would overflow the stack
+  const x1 = spec.x.max !== undefined ? toDisplay(spec.x.max, ux) : xs.reduce((a, b) => Math.max(a, b), -Infinity);
+  const y0 = spec.y.min !== undefined ? toDisplay(spec.y.min, uy) : ys.reduce((a, b) => Math.min(a, b), Infinity);
+  const y1 = spec.y.max !== undefined ? toDisplay(spec.y.max, uy) : ys.reduce((a, b) => Math.max(a, b), -Infinity);
   const sx = scaler(x0, x1, PAD.l, W - PAD.r, xlog);
   const sy = scaler(y0, y1, H - PAD.b, PAD.t, ylog);
   const parts: string[] = [];
