@@ -47,7 +47,7 @@ export const DECIMAL_COMMA = 'Use a decimal point (1.5, not 1,5): the handbook r
  * number gives unit ''.
  */
 export function splitTyped(text: string, kind?: QuantityKind): { number: string; unit: string } | undefined {
-  const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
+  const m = /^\s*([-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
   if (!m) return undefined;
   const unitText = m[2] ?? '';
   if (unitText === '') return { number: m[1]!, unit: '' };

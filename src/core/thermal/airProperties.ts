@@ -2,7 +2,7 @@ import { requireInRange } from '../errors.ts';
 import { AIR_TABLE, AIR_T_MAX, AIR_T_MIN, type AirRow } from './airTable.ts';
 
 /**
- * Properties of dry air at 1 atm at temperature T, by linear interpolation in the published table
+ * Properties of dry air at atmospheric pressure (densities of 1 bar; see airTable.ts) at temperature T, by linear interpolation in the published table
  * (50 K spacing). Linear interpolation of ν, k, α between 50 K rows errs by under 0.3 % (their
  * curvature is small); the film-temperature method itself is far coarser than that.
  *

@@ -1,5 +1,9 @@
 /**
- * Thermophysical properties of air at atmospheric pressure (1 atm), as data.
+ * Thermophysical properties of air at atmospheric pressure, as data. The densities are those of
+ * 1 bar (100 kPa): the ideal-gas check ρ = p/(R·T) with R = 287.05 J/(kg·K) gives 1.1612 kg/m³ at
+ * 300 K and 1 bar against the table's 1.1614 (at 1 atm it would be 1.1766), so ν and α are
+ * those of 1 bar too; at 1 atm (101.325 kPa) both are 1.3 % lower and the convection coefficient
+ * about 0.4–0.8 % higher. μ, k, c_p and Pr do not depend on pressure at these conditions.
  *
  * Columns: T (K), ρ (kg/m³), c_p (J/(kg·K)), μ (N·s/m²), ν (m²/s), k (W/(m·K)), α (m²/s), Pr.
  * Source: incropera2007 Table A.4 (Air at atmospheric pressure), rows 200–700 K. The values were

@@ -73,7 +73,7 @@ export function siSymbol(kind: QuantityKind): string {
  * Returns NaN-free results or throws UnitError.
  */
 export function parseQuantity(text: string, kind: QuantityKind): number {
-  const m = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
+  const m = /^\s*([-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
   if (!m) throw new UnitError(`'${text.slice(0, 40)}' is not a number with an optional unit`);
   const value = Number(m[1]);
   const unitText = m[2] ?? '';

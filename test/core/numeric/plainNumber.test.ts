@@ -16,3 +16,12 @@ describe('isPlainNumber', () => {
     }));
   });
 });
+
+describe('plain numbers: linear-time reading', () => {
+  it('refuses 100 000 digits followed by a letter at once (the old pattern backtracked for ~40 s: a ring-down record of one such line froze the page)', () => {
+    // `\d+\.?\d*` can split a run of digits in n ways, so a failing match tried O(n²) splits;
+    // `\d+(?:\.\d*)?` cannot. Without the fix this test hits the 30 s test timeout.
+    expect(isPlainNumber(`${'1'.repeat(100_000)}x`)).toBe(false);
+    expect(isPlainNumber('1'.repeat(100_000))).toBe(true);
+  });
+});
