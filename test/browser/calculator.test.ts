@@ -2,29 +2,17 @@
 // Sources of the numbers checked here: closed forms of Rao, Mechanical Vibrations, 6th ed., §2.6
 // (ωn = √(k/m), ζ = c/2√(km); provenance: closed form) and NIST SP 811 (2008), Appendix B.8
 // (1 lb = 0.45359237 kg; published).
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { serveStatic, type Served } from '../../src/server/staticServer.ts';
-import { launch, watchedPage } from '../helpers/browser.ts';
-import { ROOT_BUILD } from '../helpers/site.ts';
+import { describe, expect, it } from 'vitest';
+import { watchedPage } from '../helpers/browser.ts';
+import { serveBuiltSite } from '../helpers/servedSite.ts';
 
-let server: Served;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await serveStatic(ROOT_BUILD, '/');
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const site = serveBuiltSite();
 
 describe('oscillator page in Chromium', () => {
   it('recomputes results and charts on input, keeps inputs in the URL, stays on 127.0.0.1, logs no error', async () => {
-    const w = await watchedPage(browser, server.origin);
+    const w = await watchedPage(site.browser, site.server.origin);
     const { page } = w;
-    await page.goto(`${server.url}oscillators/sdof/`);
+    await page.goto(`${site.server.url}oscillators/sdof/`);
     await page.waitForSelector('db-calculator[data-ready]');
     await page.waitForSelector('figure[data-chart="response"] canvas');
     const zeta = page.locator('tr[data-out="zeta"] .value');
@@ -47,9 +35,9 @@ describe('oscillator page in Chromium', () => {
   });
 
   it('shows a message at a bad field and leaves the rest of the page working', async () => {
-    const w = await watchedPage(browser, server.origin);
+    const w = await watchedPage(site.browser, site.server.origin);
     const { page } = w;
-    await page.goto(`${server.url}oscillators/sdof/`);
+    await page.goto(`${site.server.url}oscillators/sdof/`);
     await page.waitForSelector('db-calculator[data-ready]');
     await page.fill('#c-sdof-m', '-3');
     await expect.poll(() => page.locator('.field[data-key="m"] .msg').textContent()).toMatch(/Out of range: at least 1e-6 kg/);
@@ -65,9 +53,9 @@ describe('oscillator page in Chromium', () => {
   });
 
   it('converts a field when its unit changes and switches the whole calculator to US units', async () => {
-    const w = await watchedPage(browser, server.origin);
+    const w = await watchedPage(site.browser, site.server.origin);
     const { page } = w;
-    await page.goto(`${server.url}oscillators/sdof/`);
+    await page.goto(`${site.server.url}oscillators/sdof/`);
     await page.waitForSelector('db-calculator[data-ready]');
     await page.selectOption('select[name="m.unit"]', 'lb');
     expect(Number(await page.inputValue('#c-sdof-m'))).toBeCloseTo(22.0462262, 5); // 10 kg in lb (NIST SP 811 B.8)
@@ -80,9 +68,9 @@ describe('oscillator page in Chromium', () => {
 
   it('keeps the power-law coefficient in SI units when the calculator switches to US units, and refuses a US unit for it with a message', async () => {
     // C of F = C·|v|^α is in N·(s/m)^α: lbf·s/in would convert it correctly only at α = 1
-    const w = await watchedPage(browser, server.origin);
+    const w = await watchedPage(site.browser, site.server.origin);
     const { page } = w;
-    await page.goto(`${server.url}damper-laws/energy-per-cycle/?law=power&c=800&alpha=0.5&X=0.025&f=1.5`);
+    await page.goto(`${site.server.url}damper-laws/energy-per-cycle/?law=power&c=800&alpha=0.5&X=0.025&f=1.5`);
     await page.waitForSelector('db-calculator[data-ready]');
     const E = page.locator('tr[data-out="E"] .value');
     await expect.poll(() => E.textContent()).toBe('33.94'); // λ(0.5)·C·ω^α·X^1.5, λ(0.5) = 3.49608 (FEMA 274 §9.3, from memory)
@@ -95,16 +83,16 @@ describe('oscillator page in Chromium', () => {
   });
 
   it('reproduces results from a shared link', async () => {
-    const w = await watchedPage(browser, server.origin);
-    await w.page.goto(`${server.url}oscillators/sdof/?m=10&k=4000&c=120`);
+    const w = await watchedPage(site.browser, site.server.origin);
+    await w.page.goto(`${site.server.url}oscillators/sdof/?m=10&k=4000&c=120`);
     await w.page.waitForSelector('db-calculator[data-ready]');
     await expect.poll(() => w.page.locator('tr[data-out="zeta"] .value').textContent()).toBe('0.3');
   });
 
   it('search finds the oscillator page', async () => {
-    const w = await watchedPage(browser, server.origin);
+    const w = await watchedPage(site.browser, site.server.origin);
     const { page } = w;
-    await page.goto(server.url);
+    await page.goto(site.server.url);
     await page.fill('#finder-q', 'logarithmic decrement');
     await page.waitForSelector('#finder-results li a');
     const links = await page.locator('#finder-results li a').evaluateAll((as) => as.map((a) => (a as HTMLAnchorElement).getAttribute('href')));

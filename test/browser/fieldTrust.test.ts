@@ -7,26 +7,16 @@
  * a saved set keeps the fields that were hidden when it was saved. Real Chromium.
  * Reference values: ωₙ = √(k/m) (Rao, Mechanical Vibrations, 6th ed., §2.2; closed form).
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { serveStatic, type Served } from '../../src/server/staticServer.ts';
-import { launch, watchedPage } from '../helpers/browser.ts';
-import { ROOT_BUILD } from '../helpers/site.ts';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { watchedPage } from '../helpers/browser.ts';
+import { serveBuiltSite } from '../helpers/servedSite.ts';
 
-let server: Served;
-let browser: Browser;
-beforeAll(async () => {
-  server = await serveStatic(ROOT_BUILD, '/');
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const site = serveBuiltSite();
 
 async function open(url: string): Promise<Page> {
-  const w = await watchedPage(browser, server.origin);
-  await w.page.goto(`${server.url}${url}`);
+  const w = await watchedPage(site.browser, site.server.origin);
+  await w.page.goto(`${site.server.url}${url}`);
   await w.page.waitForSelector('db-calculator[data-ready]');
   return w.page;
 }

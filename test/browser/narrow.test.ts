@@ -3,23 +3,12 @@
  * source): no horizontal page scroll, and nothing inside a calculator wider than the calculator —
  * wide tables and charts must scroll inside their own box or fit. Real Chromium, every built page.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { serveStatic, type Served } from '../../src/server/staticServer.ts';
-import { launch } from '../helpers/browser.ts';
+import { describe, expect, it } from 'vitest';
+import { serveBuiltSite } from '../helpers/servedSite.ts';
 import { builtPages } from '../helpers/crawl.ts';
 import { ROOT_BUILD } from '../helpers/site.ts';
 
-let server: Served;
-let browser: Browser;
-beforeAll(async () => {
-  server = await serveStatic(ROOT_BUILD, '/');
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const site = serveBuiltSite();
 
 /** Runs in the page: what sticks out (page scroll, and calculator children past the calculator's edges). */
 function overflow(): string[] {
@@ -51,11 +40,11 @@ function overflow(): string[] {
 
 describe('pages at 390 px', () => {
   it('no page scrolls sideways and no calculator has a child wider than itself', async () => {
-    const ctx = await browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 1 });
+    const ctx = await site.browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 1 });
     const page = await ctx.newPage();
     const found: string[] = [];
     for (const path of builtPages(ROOT_BUILD, '/')) {
-      await page.goto(server.origin + path);
+      await page.goto(site.server.origin + path);
       await page.waitForLoadState('load');
       const n = await page.locator('db-calculator').count();
       if (n) await page.waitForFunction((count) => document.querySelectorAll('db-calculator[data-ready]').length === count, n, { timeout: 30_000 });

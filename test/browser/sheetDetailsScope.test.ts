@@ -3,28 +3,17 @@
  * sheet panel must never print on another page's sheet in the same browser (found by hand: a
  * power-rating sheet printed with the ring-down job's calculation number). Real Chromium.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
-import { serveStatic, type Served } from '../../src/server/staticServer.ts';
-import { launch, watchedPage } from '../helpers/browser.ts';
-import { ROOT_BUILD } from '../helpers/site.ts';
+import { describe, expect, it } from 'vitest';
+import { watchedPage } from '../helpers/browser.ts';
+import { serveBuiltSite } from '../helpers/servedSite.ts';
 
-let server: Served;
-let browser: Browser;
-beforeAll(async () => {
-  server = await serveStatic(ROOT_BUILD, '/');
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const site = serveBuiltSite();
 
 describe('sheet details are kept per page', () => {
   it('a calculation number typed on the ring-down page does not appear on the power-rating page, and comes back on ring-down', async () => {
-    const w = await watchedPage(browser, server.origin);
+    const w = await watchedPage(site.browser, site.server.origin);
     const { page } = w;
-    await page.goto(`${server.url}damping-tests/ring-down/`);
+    await page.goto(`${site.server.url}damping-tests/ring-down/`);
     await page.waitForSelector('[data-sheet-panel][data-ready]');
     await page.locator('.sheet-details summary').click();
     await page.fill('[data-sheet-field="calc"]', 'TW-077-C-011');
@@ -32,23 +21,23 @@ describe('sheet details are kept per page', () => {
     await expect.poll(() => page.locator('[data-sheet="calc"]').first().textContent()).toBe('TW-077-C-011');
 
     // a plain link to another page (no sheet parameters in its address): the same browser storage
-    await page.goto(`${server.url}thermal/power-rating/`);
+    await page.goto(`${site.server.url}thermal/power-rating/`);
     await page.waitForSelector('[data-sheet-panel][data-ready]');
     expect(await page.locator('[data-sheet-field="calc"]').inputValue()).toBe('');
     expect(await page.locator('[data-sheet-field="project"]').inputValue()).toBe('');
     expect(await page.locator('[data-sheet="calc"]').first().textContent()).toBe('');
     expect(await page.locator('#sheet-page-css').textContent()).not.toContain('TW-077-C-011');
 
-    await page.goto(`${server.url}damping-tests/ring-down/`);
+    await page.goto(`${site.server.url}damping-tests/ring-down/`);
     await page.waitForSelector('[data-sheet-panel][data-ready]');
     expect(await page.locator('[data-sheet-field="calc"]').inputValue()).toBe('TW-077-C-011');
     expect(w.pageErrors).toEqual([]);
   });
 
   it('ignores and removes the shared storage key of earlier versions', async () => {
-    const w = await watchedPage(browser, server.origin);
+    const w = await watchedPage(site.browser, site.server.origin);
     const { page } = w;
-    await page.goto(`${server.url}thermal/power-rating/`);
+    await page.goto(`${site.server.url}thermal/power-rating/`);
     await page.evaluate(() => localStorage.setItem('dampbook:sheet', JSON.stringify({ calc: 'LEAKED-7' })));
     await page.reload();
     await page.waitForSelector('[data-sheet-panel][data-ready]');

@@ -13,11 +13,10 @@
  * (factors for units listed alphabetically; 7 significant digits or exact) and B.9 (by kind;
  * temperature conversions), published. SI prefixes and the hour/minute are exact by definition.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { getCalculator } from '../../src/calculators/registry.ts';
-import { serveStatic, type Served } from '../../src/server/staticServer.ts';
-import { launch } from '../helpers/browser.ts';
+import { serveBuiltSite } from '../helpers/servedSite.ts';
 import { calculatorPages } from '../helpers/calcPages.ts';
 import { ROOT_BUILD } from '../helpers/site.ts';
 
@@ -93,16 +92,7 @@ const NEEDS_DATA: Readonly<Record<string, string>> = {
   'recorded-motion layout=tvF': 'the demo record holds displacement (t, x), not velocity',
 };
 
-let server: Served;
-let browser: Browser;
-beforeAll(async () => {
-  server = await serveStatic(ROOT_BUILD, '/');
-  browser = await launch();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const site = serveBuiltSite();
 
 const frames = (page: Page) => page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(r, 0)))));
 
@@ -131,7 +121,7 @@ async function fieldsInError(page: Page, calc: string): Promise<string[]> {
 
 describe('the same physical results in SI and US units', () => {
   it('every calculator, every option of every choice input', async () => {
-    const ctx = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const ctx = await site.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await ctx.newPage();
     const problems: string[] = [];
     let compared = 0;
@@ -161,7 +151,7 @@ describe('the same physical results in SI and US units', () => {
           await frames(page);
         };
         // one page load per calculator for the switch; the choices are changed in the page
-        await open(page, `${server.origin}${path}`);
+        await open(page, `${site.server.origin}${path}`);
         for (const combo of combos) {
           const q = new URLSearchParams(combo).toString();
           const where = `${id}${q ? ` ?${q}` : ''}`;
@@ -194,7 +184,7 @@ describe('the same physical results in SI and US units', () => {
         // the same cases straight from an address with units=US: no field in error
         for (const combo of combos) {
           const q = new URLSearchParams(combo).toString();
-          await open(page, `${server.origin}${path}?${q ? `${q}&` : ''}units=US`);
+          await open(page, `${site.server.origin}${path}?${q ? `${q}&` : ''}units=US`);
           const errAddr = await fieldsInError(page, id);
           if (errAddr.length && NEEDS_DATA[`${id} ${q}`]) continue;
           if (errAddr.length) problems.push(`${id} ?${q ? `${q}&` : ''}units=US: fields in error on load: ${errAddr.join('; ')}`);
