@@ -2,6 +2,9 @@
  * The study CLI contract: `study run --json` prints exactly {study, steps[{id, calculator, inputs,
  * outputs, from}], verdicts[{step, check, value, limit, pass}]}; `study check` prints nothing;
  * broken studies exit 1 with one line naming the step and input.
+ * The numbers checked are the contract itself (keys, step ids, bindings equal to their source
+ * outputs) and one unit conversion: 35 °C = 308.15 K (T/K = t/°C + 273.15, NIST SP 811 (2008),
+ * Appendix B.9; published). No engineering value is asserted here (see test/studies/run.test.ts).
  */
 import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';

@@ -1,3 +1,10 @@
+/**
+ * sdof audit findings: the window-cap warning threshold, no quality factor without a resonance,
+ * one energy-audit closure. Sources of the numbers: ωn = √(k/m), c_cr = 2√(km), ζ = c/c_cr and
+ * Q = 1/(2ζ) — Rao, Mechanical Vibrations, 6th ed., §2.6 and §3.4 (sections from memory; closed
+ * form). The cap threshold ζ = ln(100)/(60π) follows from the page's own window rule (decay to 1 %
+ * within 30 periods: e^{−ζωn·30T} = 0.01 with T = 2π/ωn; closed form, no published source).
+ */
 import { describe, expect, it } from 'vitest';
 import { getCalculator } from '../../../src/calculators/registry.ts';
 import { evaluate } from '../../../src/calculators/evaluate.ts';

@@ -2,6 +2,11 @@
  * Every equilibrium the thermal core reports balances its heat: a vertical body across Ra_L = 1e9,
  * the residual checks of the solvers, and properties over the whole input range of the pages.
  * Incropera = Incropera, DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer, 6th ed.
+ * Sources of the checks: Nu_L by eq. 9.26 (Incropera; published formula, evaluated in closed form);
+ * the heat balances Q(T_s) = P are the definition of the equilibrium (closed form); √2 is the root
+ * of x² − 2 (closed form); Nu_D = 23.09 is the churchillChuCylinder doc example (Incropera
+ * Example 9.3 steam pipe, eq. 9.34; from memory); the 0.5 K and 2 % monotonicity margins are
+ * common practice, no source (they only need to exceed the solver tolerance and miss the old jump).
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
