@@ -7,7 +7,7 @@ import type { InputDef, NumberInput, Values } from '../../calculators/types.ts';
 import type { QuantityKind } from '../../core/units/index.ts';
 import { InputRangeError } from '../../core/errors.ts';
 import { isPlainNumber } from '../../core/numeric/plainNumber.ts';
-import { findUnit, fromSI, toSI } from '../../core/units/index.ts';
+import { findUnit, fromSI, splitQuantity, toSI } from '../../core/units/index.ts';
 import { formatNumber } from './format.ts';
 
 export type FieldRead = { ok: true; value: number | string | undefined } | { ok: false; message: string };
@@ -47,12 +47,11 @@ export const DECIMAL_COMMA = 'Use a decimal point (1.5, not 1,5): the handbook r
  * number gives unit ''.
  */
 export function splitTyped(text: string, kind?: QuantityKind): { number: string; unit: string } | undefined {
-  const m = /^\s*([-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
-  if (!m) return undefined;
-  const unitText = m[2] ?? '';
-  if (unitText === '') return { number: m[1]!, unit: '' };
+  const q = splitQuantity(text);
+  if (!q) return undefined;
+  if (q.unit === '') return { number: q.number, unit: '' };
   if (!kind) return undefined;
-  try { return { number: m[1]!, unit: findUnit(kind, unitText).id }; } catch { return undefined; }
+  try { return { number: q.number, unit: findUnit(kind, q.unit).id }; } catch { return undefined; }
 }
 
 /** A short, printable excerpt of untrusted text for a message. */

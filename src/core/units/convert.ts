@@ -69,13 +69,22 @@ export function siSymbol(kind: QuantityKind): string {
 }
 
 /**
+ * Splits "25 lb", "25lb" or "1.5e3" into the number as written and the unit text ('' when none),
+ * or undefined when the text does not start with a number. One reader for every "number with a
+ * unit" text (CLI, address, typed fields).
+ */
+export function splitQuantity(text: string): { readonly number: string; readonly unit: string } | undefined {
+  const m = /^\s*([-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
+  return m ? { number: m[1]!, unit: m[2] ?? '' } : undefined;
+}
+
+/**
  * Parses "25 lb", "25lb", "1.5e3" (SI assumed) into an SI number for `kind`.
  * Returns NaN-free results or throws UnitError.
  */
 export function parseQuantity(text: string, kind: QuantityKind): number {
-  const m = /^\s*([-+]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/.exec(text);
-  if (!m) throw new UnitError(`'${text.slice(0, 40)}' is not a number with an optional unit`);
-  const value = Number(m[1]);
-  const unitText = m[2] ?? '';
-  return unitText === '' ? value : toSI(value, findUnit(kind, unitText));
+  const q = splitQuantity(text);
+  if (!q) throw new UnitError(`'${text.slice(0, 40)}' is not a number with an optional unit`);
+  const value = Number(q.number);
+  return q.unit === '' ? value : toSI(value, findUnit(kind, q.unit));
 }
