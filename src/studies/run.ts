@@ -109,16 +109,33 @@ function runStep(p: PlannedStep, plan: StudyPlan, runs: ReadonlyMap<string, Step
 
 /** Plans and runs a whole study; throws a one-line StudyError naming the step and input. */
 export function runStudy(study: Study): StudyRun {
+  const r = runStudyUntilError(study);
+  if (r.error) throw r.error;
+  return r.run;
+}
+
+/**
+ * Runs the steps in order up to the first one that fails, and keeps what ran: the page a reader
+ * is on still shows its step when a later step cannot compute. A study that cannot be planned
+ * (unknown calculator, dangling binding, cycle) still throws.
+ */
+export function runStudyUntilError(study: Study): { run: StudyRun; error?: StudyError; failedStep?: string } {
   const plan = planStudy(study);
   const runs = new Map<string, StepRun>();
   const published = new Map<string, Published>();
   const steps: StepRun[] = [];
   const verdicts: Verdict[] = [];
   for (const p of plan.steps) {
-    const run = runStep(p, plan, runs, published);
+    let run: StepRun;
+    try {
+      run = runStep(p, plan, runs, published);
+    } catch (e) {
+      if (e instanceof StudyError) return { run: { study, steps, verdicts }, error: e, failedStep: p.step.id };
+      throw e;
+    }
     runs.set(run.id, run);
     steps.push(run);
     verdicts.push(...verdictsOf(p, run, plan, published));
   }
-  return { study, steps, verdicts };
+  return { run: { study, steps, verdicts } };
 }

@@ -36,6 +36,11 @@ export class CalculatorElement extends HTMLElement {
     // input sets and records: their code (and zod) loads only when the panel is opened
     const rec = this.querySelector<HTMLDetailsElement>('details.calc-records');
     rec?.addEventListener('toggle', () => void import('./record-panel.ts').then((m) => m.attachRecords(this, rec)), { once: true });
+    // the study code (runner, every calculator, zod) loads after the page is live; with a study
+    // open it fills this calculator's step, and `data-study` says when that is done
+    if (document.querySelector('[data-study-bar]')) {
+      void import('./study-link.ts').then(async (m) => (await m.studySession()).attach(this)).then(() => { this.dataset.study = ''; });
+    }
     this.dataset.ready = '';
   }
 

@@ -1,0 +1,232 @@
+/**
+ * A calculator page inside the open study. Loaded only when a study is open (or being started):
+ * the page's calculators that are steps of the study take their inputs from the study run, each
+ * bound field says where its value comes from, and a change on the page is written back
+ * (src/studies/edit.ts decides where). The whole study is re-run on open and after every change,
+ * so no later step is ever shown stale; the study bar above the page lists the steps and verdicts.
+ * No calculator logic here: the study runner and the calculator definitions do the work.
+ */
+import type { Values } from '../../calculators/types.ts';
+import { applyPageValues, addStep, clearOverride, startStudy, studyKnows } from '../../studies/edit.ts';
+import { runStudyUntilError, type Origin, type StudyRun } from '../../studies/run.ts';
+import { parseStudy, type Study } from '../../studies/schema.ts';
+import { verdictLine } from '../../studies/package.ts';
+import type { CalculatorElement } from './calculator-element.ts';
+import { closeOpenStudy, readOpenStudy, saveOpenStudy } from './study-store.ts';
+import { renderStudyBar } from './study-bar.ts';
+
+interface Attached { readonly el: CalculatorElement; readonly stepId: string | undefined }
+
+/** camelCase study quantity name → words ("airTemperature" → "air temperature"). */
+export const words = (name: string) => name.replace(/([a-z0-9])([A-Z])/g, '$1 $2').toLowerCase();
+
+class StudySession {
+  study: Study | undefined;
+  run: StudyRun | undefined;
+  error: { step?: string; message: string } | undefined;
+  private attached: Attached[] = [];
+  private pageId = document.querySelector<HTMLElement>('article[data-page-id]')?.dataset.pageId ?? '';
+  private bar = document.querySelector<HTMLElement>('[data-study-bar]');
+
+  /** Reads the open study (or the one the address names) and runs it. */
+  async open(): Promise<void> {
+    const params = new URLSearchParams(location.search);
+    const named = params.get('study');
+    if (named !== null) {
+      params.delete('study');
+      history.replaceState(history.state, '', `${location.pathname}${params.size ? `?${params}` : ''}${location.hash}`);
+      await this.fetchBuiltIn(named);
+    }
+    const stored = readOpenStudy();
+    if (stored && !stored.ok) this.error = { message: `The study kept in this browser is not valid and was not opened (${stored.message}).` };
+    this.study = stored?.ok ? stored.study : undefined;
+    this.rerun();
+  }
+
+  private async fetchBuiltIn(id: string): Promise<void> {
+    if (!/^[a-z0-9-]{1,80}$/.test(id)) { this.error = { message: 'The address names no study of this handbook.' }; return; }
+    const base = this.bar?.dataset.base ?? '/';
+    try {
+      const res = await fetch(`${base}studies/${id}.json`);
+      const parsed = res.ok ? parseStudy(await res.text()) : { ok: false as const, message: `no study '${id}' in this handbook` };
+      if (parsed.ok) saveOpenStudy(parsed.study);
+      else this.error = { message: `The study named in the address could not be opened: ${parsed.message}` };
+    } catch {
+      this.error = { message: `The study '${id}' could not be loaded.` };
+    }
+  }
+
+  private rerun(): void {
+    this.run = undefined;
+    if (!this.study) return;
+    try {
+      const r = runStudyUntilError(this.study);
+      this.run = r.run;
+      this.error = r.error ? { step: r.failedStep, message: r.error.message } : undefined;
+    } catch (e) {
+      this.error = { message: e instanceof Error ? e.message : 'The study could not be run.' };
+    }
+  }
+
+  /** Joins a calculator element: fills its step's inputs from the study and follows its changes. */
+  attach(el: CalculatorElement): void {
+    const step = this.study?.steps.find((s) => s.page === this.pageId && s.calculator === el.calc?.id);
+    const a = { el, stepId: step?.id };
+    this.attached.push(a);
+    if (step) this.fill(a);
+    el.addEventListener('db-computed', (e) => this.onComputed(a, (e as CustomEvent<{ values: Values }>).detail.values));
+    this.renderBar();
+  }
+
+  private stepRun(a: Attached) {
+    return this.run?.steps.find((s) => s.id === a.stepId);
+  }
+
+  private fill(a: Attached): void {
+    const s = this.stepRun(a);
+    if (s) a.el.applyInputs(s.inputs, {});
+    this.markOrigins(a);
+  }
+
+  private onComputed(a: Attached, values: Values): void {
+    if (!this.study || !this.run || !a.stepId || !this.stepRun(a)) return;
+    const edit = applyPageValues(this.study, this.run, a.stepId, values);
+    if (edit.refused.length) this.say(`Not kept in the study: ${edit.refused.join(', ')} (longer than a study value may be; save the data as a file and paste it on this page).`);
+    if (edit.study === this.study) return;
+    this.study = edit.study;
+    if (!saveOpenStudy(this.study)) this.say('This browser refused to keep the study (storage full or disabled); export it before leaving the page.');
+    this.rerun();
+    this.markOrigins(a);
+    this.renderBar();
+  }
+
+  private say(text: string): void {
+    this.error = { message: text };
+    this.renderBar();
+  }
+
+  /** Writes beside each bound field where its value comes from (data-origin for the mark). */
+  private markOrigins(a: Attached): void {
+    const s = this.stepRun(a);
+    const calc = a.el.calc!;
+    const bindings = calc.study?.inputs ?? {};
+    for (const def of calc.inputs) {
+      const f = a.el.querySelector<HTMLElement>(`.field[data-key="${CSS.escape(def.key)}"]`);
+      if (!f) continue;
+      f.querySelector('.study-note')?.remove();
+      const origin: Origin | undefined = s?.origins[def.key];
+      if (!s || !origin) { delete f.dataset.origin; continue; }
+      const q = bindings[def.key];
+      const overriding = origin.kind === 'typed' && q !== undefined && this.study !== undefined && studyKnows(this.study, q);
+      const kind = overriding ? 'override' : origin.kind;
+      if (kind === 'default' && q === undefined) { delete f.dataset.origin; continue; }
+      f.dataset.origin = kind;
+      const p = document.createElement('p');
+      p.className = 'study-note';
+      p.append(this.originText(origin, q, overriding));
+      if (overriding) {
+        const back = document.createElement('button');
+        back.type = 'button';
+        back.className = 'linkish';
+        back.textContent = 'Follow the study again';
+        back.addEventListener('click', () => this.follow(a, def.key));
+        p.append(' ', back);
+      }
+      const anchor = f.querySelector('.help');
+      if (anchor) anchor.before(p); else f.append(p);
+    }
+  }
+
+  private originText(o: Origin, q: string | undefined, overriding: boolean): string {
+    const no = (id: string) => (this.run?.steps.findIndex((r) => r.id === id) ?? -1) + 1;
+    const title = (id: string) => this.run?.steps.find((r) => r.id === id)?.title ?? id;
+    switch (o.kind) {
+      case 'step': return `Study: from step ${no(o.step)} (${title(o.step)}), result ${o.output}${o.explicit ? ', bound in the study file' : ''}. A change here overrides it on this step only.`;
+      case 'study': return `Study quantity “${words(o.quantity)}”: a change here changes it for every step.`;
+      case 'limit': return `Study limit “${words(o.quantity)}”: a change here changes the limit for every step.`;
+      case 'typed': return overriding ? `Typed on this step, overriding the study's “${words(q!)}”.` : 'Typed on this step of the study.';
+      case 'default': return `Page default; a change here adds “${words(q!)}” to the study.`;
+    }
+  }
+
+  private follow(a: Attached, key: string): void {
+    if (!this.study || !a.stepId) return;
+    this.study = clearOverride(this.study, a.stepId, key);
+    saveOpenStudy(this.study);
+    this.rerun();
+    this.fill(a);
+    this.renderBar();
+  }
+
+  renderBar(): void {
+    if (!this.bar) return;
+    const here = this.attached.map((a) => a.el.calc!).filter(Boolean);
+    renderStudyBar(this.bar, {
+      study: this.study, run: this.run, error: this.error, pageId: this.pageId, pageUrls: pageUrls(),
+      stepsHere: this.attached.flatMap((a) => (a.stepId ? [a.stepId] : [])),
+      calculatorsHere: here.map((c) => ({ id: c.id, title: c.title })),
+      verdictLine,
+      actions: {
+        start: (calcId) => this.start(calcId),
+        add: (calcId) => this.add(calcId),
+        close: () => { closeOpenStudy(); location.reload(); },
+        load: (text) => this.load(text),
+      },
+    });
+  }
+
+  private start(calcId: string): void {
+    const a = this.attached.find((x) => x.el.calc?.id === calcId);
+    if (!a?.el.values) { this.say('Fix the highlighted fields first: a study starts from the values the page computes with.'); return; }
+    this.study = startStudy(this.pageId, calcId, a.el.values, new Date().toISOString().slice(0, 10));
+    this.commit();
+  }
+
+  private add(calcId: string): void {
+    if (!this.study) return;
+    const a = this.attached.find((x) => x.el.calc?.id === calcId);
+    if (!a?.el.values) { this.say('Fix the highlighted fields first: the step starts from the values the page computes with.'); return; }
+    const r = addStep(this.study, this.pageId, calcId, a.el.values);
+    this.study = r.study;
+    if (a) (a as { stepId: string | undefined }).stepId = r.id;
+    this.commit();
+  }
+
+  private load(text: string): void {
+    const p = parseStudy(text);
+    if (!p.ok) { this.say(p.message); return; }
+    this.study = p.study;
+    this.commit();
+  }
+
+  /** Saves, re-runs and refills every attached calculator. */
+  private commit(): void {
+    if (this.study && !saveOpenStudy(this.study)) this.error = { message: 'This browser refused to keep the study (storage full or disabled).' };
+    for (const a of this.attached) (a as { stepId: string | undefined }).stepId = this.study?.steps.find((s) => s.page === this.pageId && s.calculator === a.el.calc?.id)?.id;
+    this.rerun();
+    for (const a of this.attached) if (a.stepId) this.fill(a); else this.markOrigins(a);
+    this.renderBar();
+  }
+}
+
+function pageUrls(): Readonly<Record<string, string>> {
+  const el = document.getElementById('db-page-urls');
+  try {
+    const v: unknown = JSON.parse(el?.textContent ?? '{}');
+    return v && typeof v === 'object' ? (v as Record<string, string>) : {};
+  } catch {
+    return {};
+  }
+}
+
+let session: Promise<StudySession> | undefined;
+
+/** The page's one study session (opened once, shared by every calculator on the page). */
+export function studySession(): Promise<StudySession> {
+  return (session ??= (async () => {
+    const s = new StudySession();
+    await s.open();
+    return s;
+  })());
+}
+

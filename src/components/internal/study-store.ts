@@ -1,0 +1,28 @@
+/**
+ * The study open in this browser: one study file kept in localStorage, re-validated on every read
+ * (storage is as untrusted as any file). Pages read it on load; a page that changes a value writes
+ * the whole study back. Other tabs see the change on their next load (the "storage" event is not
+ * followed: a page never changes under the reader's hands).
+ */
+import { parseStudy, type Study } from '../../studies/schema.ts';
+
+export const STUDY_STORE = 'dampbook:study';
+
+export type StoredStudy = { ok: true; study: Study } | { ok: false; message: string } | undefined;
+
+/** The open study; undefined when none is open; a message when the stored text is not a valid study. */
+export function readOpenStudy(): StoredStudy {
+  let text: string | null = null;
+  try { text = localStorage.getItem(STUDY_STORE); } catch { return undefined; }
+  if (text === null) return undefined;
+  return parseStudy(text);
+}
+
+/** Keeps the study; false when the browser refuses (storage full or disabled). */
+export function saveOpenStudy(study: Study): boolean {
+  try { localStorage.setItem(STUDY_STORE, JSON.stringify(study, null, 1)); return true; } catch { return false; }
+}
+
+export function closeOpenStudy(): void {
+  try { localStorage.removeItem(STUDY_STORE); } catch { /* storage blocked: nothing is open */ }
+}
