@@ -21,6 +21,7 @@ export const CLIENT_ENTRIES = {
   calculator: 'src/components/internal/calculator-element.ts',
   finder: 'src/components/internal/finder.ts',
   sheetDetails: 'src/components/internal/sheet-details.ts',
+  studyPackage: 'src/components/internal/study-package.ts',
 } as const;
 
 export type ClientEntry = keyof typeof CLIENT_ENTRIES;

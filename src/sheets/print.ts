@@ -34,6 +34,10 @@ export interface PrintOptions {
    */
   readonly expect?: Readonly<Record<string, Readonly<Record<string, number | string>>>>;
   readonly sheet?: SheetFields;
+  /** localStorage entries set before the page loads (e.g. the study to print on /studies/open/). */
+  readonly storage?: Readonly<Record<string, string>>;
+  /** A selector the page shows once it is ready to print; `[role=alert]` text instead refuses the sheet. */
+  readonly ready?: string;
   readonly paper?: Paper;
   readonly pdf: string;
   readonly chromium?: string;
@@ -120,10 +124,17 @@ export async function printSheet(o: PrintOptions): Promise<{ url: string }> {
     } catch (e) {
       throw new SheetError(`Chromium at ${chromiumPath} could not start: ${firstLine(e)}`);
     }
-    const page = await (await browser.newContext({ viewport: { width: 1100, height: 1400 } })).newPage();
+    const context = await browser.newContext({ viewport: { width: 1100, height: 1400 } });
+    if (o.storage) await context.addInitScript((entries) => { for (const [k, v] of Object.entries(entries)) localStorage.setItem(k, v); }, o.storage);
+    const page = await context.newPage();
     const url = `${served.url}${path}/?${params.toString()}`;
     const res = await page.goto(url);
     if (!res || !res.ok()) throw new SheetError(`could not open ${url}: HTTP ${res?.status() ?? 'no response'}`);
+    if (o.ready) {
+      await page.locator(`${o.ready}, [role="alert"]`).first().waitFor({ timeout: 20_000 });
+      const alert = await page.locator('[role="alert"]').allTextContents();
+      if (alert.length) throw new SheetError(alert.join('; ').trim());
+    }
     const calcs = page.locator('db-calculator');
     const n = await calcs.count();
     for (let i = 0; i < n; i++) await calcs.nth(i).and(page.locator('[data-ready]')).waitFor({ timeout: 20_000 });

@@ -14,6 +14,8 @@ export function readStudies(content = process.env.DAMPBOOK_CONTENT ?? './content
   return readdirSync(dir).filter((f) => /^[a-z0-9-]+\.json$/.test(f)).sort().map((f) => {
     const p = parseStudy(readFileSync(join(dir, f), 'utf8'));
     if (!p.ok) throw new Error(`${join(dir, f)}: ${p.message}`);
+    // /studies/open/ prints the study open in a browser: no built-in study may take that address
+    if (f === 'open.json') throw new Error(`${join(dir, f)}: the study id 'open' is reserved; rename the file`);
     return { id: f.replace(/\.json$/, ''), study: p.study };
   });
 }

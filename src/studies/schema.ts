@@ -16,6 +16,7 @@
 import { z } from 'zod';
 
 export const STUDY_FORMAT = 'dampbook-study';
+export { STUDY_STORE } from './storeKey.ts';
 /** Largest study file accepted, in characters. */
 export const MAX_STUDY_CHARS = 200_000;
 const FORBIDDEN_KEYS = new Set(['__proto__', 'constructor', 'prototype']);

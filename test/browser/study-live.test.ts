@@ -63,6 +63,8 @@ describe('a study open in the handbook pages', () => {
       const step = expected.steps.find((s) => s.id === id)!;
       page = await visit(w, PAGE_URL[step.calculator]!, step.calculator);
       const got = await live(page, step.calculator);
+      // the printed sheet of a step carries the study's calculation number (sheet details follow the open study)
+      expect(await page.locator('[data-sheet="calc"]').first().textContent()).toBe('TW-210-C-031');
       const calc = getCalculator(step.calculator)!;
       const active = (k: string) => { const d = calc.inputs.find((x) => x.key === k)!; return !d.when || d.when.is.includes(String(step.inputs[d.when.key])); };
       for (const [k, v] of Object.entries(step.inputs)) if (active(k)) expect(close(got.values![k], v), `${id} input ${k}: ${got.values![k]} vs ${v}`).toBe(true);
@@ -77,6 +79,15 @@ describe('a study open in the handbook pages', () => {
         expect(await page.locator(`db-calculator[data-calc="${step.calculator}"] .field[data-key="${key}"]`).getAttribute('data-origin'), `${id}.${key}`).not.toBe('default');
       }
     }
+    // the package of the open study, printed from this browser, carries the recomputed verdicts
+    await w.page.goto(`${site.server.url}studies/open/`);
+    await w.page.waitForSelector('[data-open-package][data-ready="package"]');
+    const cover = (await w.page.locator('.study-cover').textContent())!.replace(/\s+/g, ' ');
+    const failed = expected.verdicts.filter((v) => !v.pass).length;
+    expect(cover).toContain(failed ? `${failed} of ${expected.verdicts.length} verdicts fail.` : `All ${expected.verdicts.length} verdicts pass.`);
+    for (const v of expected.verdicts) expect(cover).toContain(`(${v.step}): ${v.pass ? 'PASS' : 'FAIL'}`);
+    expect(await w.page.locator('.study-sheet').count()).toBe(5);
+    expect(await w.page.locator('.study-sheet[data-step="steady"] tr[data-in="V"] td').nth(1).textContent()).toBe('22 m/s');
     // the speed change moved the answers (a test that the change travelled, not only that nothing broke)
     const before = runStudy(file.study);
     expect(expected.steps.find((s) => s.id === 'steady')!.outputs.Ts).not.toBeCloseTo(before.steps.find((s) => s.id === 'steady')!.outputs.Ts as number, 3);

@@ -5,7 +5,7 @@
  * example, no input of a law the study does not use.
  */
 import { execFileSync } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -17,10 +17,10 @@ import { ROOT_BUILD } from '../helpers/site.ts';
 const tmp = mkdtempSync(join(tmpdir(), 'dampbook-study-'));
 afterAll(() => rmSync(tmp, { recursive: true, force: true }));
 
-async function print(id: string, paper: 'a4' | 'letter') {
+async function print(id: string, paper: 'a4' | 'letter', file = `content/studies/${id}.json`) {
   const pdf = join(tmp, `${id}-${paper}.pdf`);
   const err: string[] = [];
-  const code = await main(['study', 'sheet', `content/studies/${id}.json`, '--pdf', pdf, '--paper', paper, '--site', ROOT_BUILD], () => {}, (s) => err.push(s));
+  const code = await main(['study', 'sheet', file, '--pdf', pdf, '--paper', paper, '--site', ROOT_BUILD], () => {}, (s) => err.push(s));
   expect(err).toEqual([]);
   expect(code).toBe(0);
   const info = execFileSync('pdfinfo', [pdf], { encoding: 'utf8' });
@@ -66,5 +66,19 @@ describe('study calculation package', () => {
     expect(info).toMatch(/\(letter\)/i);
     expect(pages.at(-1)).toContain(`page ${count} of ${count}`);
     expect(pages.join('\n')).toContain('All 3 verdicts pass.');
+  });
+
+  it('a study file that is not part of the built handbook prints too (the class D study at 22 m/s)', async () => {
+    const study = JSON.parse(JSON.stringify(readStudies().find((f) => f.id === 'tw-210-rear-damper-class-d')!.study));
+    study.quantities.vehicleSpeed = 22;
+    study.project.calculationNo = 'TW-210-C-099';
+    const file = join(tmp, 'faster.json');
+    writeFileSync(file, JSON.stringify(study));
+    const run = runStudy(study);
+    const { pages, count } = await print('faster', 'a4', file);
+    pages.forEach((p, i) => { expect(p).toContain(`page ${i + 1} of ${count}`); expect(p).toContain('TW-210-C-099'); });
+    const all = pages.join('\n').replace(/\s+/g, ' ');
+    for (const v of run.verdicts) expect(all).toContain(`(${v.step}): ${v.pass ? 'PASS' : 'FAIL'}`);
+    expect(all).toMatch(/Vehicle speed 22 m\/s study: vehicleSpeed/);
   });
 });

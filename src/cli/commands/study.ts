@@ -5,13 +5,13 @@
  * invalid input, a dangling binding or a cycle exits 1 with one line naming the step and input.
  */
 import { readFileSync, statSync } from 'node:fs';
-import { basename, resolve } from 'node:path';
+import { resolve } from 'node:path';
 import { getCalculator } from '../../calculators/registry.ts';
 import { siSymbol } from '../../core/units/index.ts';
 import { printSheet } from '../../sheets/print.ts';
 import { planStudy, StudyError } from '../../studies/plan.ts';
 import { runStudy } from '../../studies/run.ts';
-import { MAX_STUDY_CHARS, parseStudy, type Study } from '../../studies/schema.ts';
+import { MAX_STUDY_CHARS, parseStudy, STUDY_STORE, type Study } from '../../studies/schema.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
 
 function readStudy(args: ParsedArgs): { study: Study; file: string } {
@@ -67,16 +67,20 @@ function check(args: ParsedArgs): number {
 }
 
 async function sheet(args: ParsedArgs, out: (s: string) => void): Promise<number> {
-  const { file } = readStudy(args);
+  const { study } = readStudy(args);
   const pdf = args.flags.get('pdf');
   if (typeof pdf !== 'string') throw new UsageError('study sheet needs --pdf <out.pdf>');
   const paper = args.flags.get('paper') ?? 'a4';
   if (paper !== 'a4' && paper !== 'letter') throw new UsageError(`--paper ${String(paper)}: use a4 or letter`);
   check(args);
   const site = typeof args.flags.get('site') === 'string' ? (args.flags.get('site') as string) : 'dist';
-  const id = basename(file).replace(/\.json$/, '');
   const base = typeof args.flags.get('base') === 'string' ? (args.flags.get('base') as string) : process.env.DAMPBOOK_BASE ?? '/';
-  const { url } = await printSheet({ site, base, page: paper === 'letter' ? `studies/letter/${id}` : `studies/${id}`, paper, pdf: resolve(pdf) });
+  // any study file prints through the page that prints the study open in a browser: the same
+  // element tree as the built packages, so a study need not be in content/ when the site is built
+  const { url } = await printSheet({
+    site, base, page: 'studies/open', paper, pdf: resolve(pdf),
+    storage: { [STUDY_STORE]: JSON.stringify(study) }, ready: '[data-open-package][data-ready="package"]',
+  });
   out(`wrote ${pdf} (${paper === 'letter' ? 'US Letter' : 'A4'}) from ${url}`);
   return 0;
 }

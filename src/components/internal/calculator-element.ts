@@ -26,6 +26,9 @@ export class CalculatorElement extends HTMLElement {
 
   async connectedCallback(): Promise<void> {
     const id = this.dataset.calc ?? '';
+    // the study code (runner, every calculator, zod) loads beside this calculator, not after it;
+    // with a study open it fills this calculator's step, and `data-study` says when that is done
+    const study = document.querySelector('[data-study-bar]') ? import('./study-link.ts').then((m) => m.studySession()) : undefined;
     this.calc = Object.hasOwn(calculatorLoaders, id) ? await calculatorLoaders[id]!() : undefined;
     if (!this.calc) return;
     this.applyUrl();
@@ -36,11 +39,7 @@ export class CalculatorElement extends HTMLElement {
     // input sets and records: their code (and zod) loads only when the panel is opened
     const rec = this.querySelector<HTMLDetailsElement>('details.calc-records');
     rec?.addEventListener('toggle', () => void import('./record-panel.ts').then((m) => m.attachRecords(this, rec)), { once: true });
-    // the study code (runner, every calculator, zod) loads after the page is live; with a study
-    // open it fills this calculator's step, and `data-study` says when that is done
-    if (document.querySelector('[data-study-bar]')) {
-      void import('./study-link.ts').then(async (m) => (await m.studySession()).attach(this)).then(() => { this.dataset.study = ''; });
-    }
+    if (study) void study.then((s) => { s.attach(this); this.dataset.study = ''; });
     this.dataset.ready = '';
   }
 

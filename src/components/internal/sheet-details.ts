@@ -7,6 +7,7 @@
  * ever reaches the page through textContent and cssString().
  */
 import { pageCss, type Paper } from '../../sheets/pageCss.ts';
+import { STUDY_STORE } from '../../studies/storeKey.ts';
 
 const KEYS = ['project', 'no', 'calc', 'by', 'checker', 'date'] as const;
 type Key = (typeof KEYS)[number];
@@ -27,6 +28,26 @@ function stored(): Partial<Record<Key | 'paper', string>> {
       const v = (o as Record<string, unknown>)[k];
       if (typeof v === 'string') out[k] = v.slice(0, MAX);
     }
+    return out;
+  } catch { return {}; }
+}
+
+/**
+ * With a study open that has this page as a step, the study's project is this sheet's project (its
+ * calculation number on the header), unless details were typed for this page or the address has
+ * them. Read without the study schema (this script stays small): only strings are taken, and
+ * they reach the page through textContent and cssString() like typed text.
+ */
+function fromStudy(): Partial<Record<Key, string>> {
+  try {
+    const o: unknown = JSON.parse(localStorage.getItem(STUDY_STORE) ?? 'null');
+    const pageId = document.querySelector<HTMLElement>('article[data-page-id]')?.dataset.pageId;
+    if (!o || typeof o !== 'object' || !pageId) return {};
+    const { project, steps } = o as { project?: Record<string, unknown>; steps?: unknown };
+    if (!project || !Array.isArray(steps) || !steps.some((s) => s && typeof s === 'object' && (s as { page?: unknown }).page === pageId)) return {};
+    const map: Record<Key, string> = { project: 'name', no: 'number', calc: 'calculationNo', by: 'preparedBy', checker: 'checkedBy', date: 'date' };
+    const out: Partial<Record<Key, string>> = {};
+    for (const k of KEYS) { const v = project[map[k]]; if (typeof v === 'string') out[k] = v.slice(0, MAX); }
     return out;
   } catch { return {}; }
 }
@@ -61,7 +82,8 @@ function render(write: boolean): void {
 if (panel) {
   try { localStorage.removeItem(LEGACY_STORE); } catch { /* storage blocked: nothing to remove */ }
   const params = new URLSearchParams(location.search);
-  const saved = stored();
+  const typed = stored();
+  const saved = KEYS.some((k) => typed[k]) ? typed : { ...typed, ...fromStudy() };
   const fromUrl = KEYS.some((k) => params.has(`sheet-${k}`));
   for (const k of KEYS) {
     const el = field(k);

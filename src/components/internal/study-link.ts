@@ -59,8 +59,11 @@ class StudySession {
   private rerun(): void {
     this.run = undefined;
     if (!this.study) return;
+    const t0 = performance.now();
     try {
       const r = runStudyUntilError(this.study);
+      // `npm run bench` reads these marks (open and recompute time in a real browser)
+      performance.measure('db-study-run', { start: t0 });
       this.run = r.run;
       this.error = r.error ? { step: r.failedStep, message: r.error.message } : undefined;
     } catch (e) {
@@ -74,6 +77,7 @@ class StudySession {
     const a = { el, stepId: step?.id };
     this.attached.push(a);
     if (step) this.fill(a);
+    performance.mark('db-study-attached');
     el.addEventListener('db-computed', (e) => this.onComputed(a, (e as CustomEvent<{ values: Values }>).detail.values));
     this.renderBar();
   }

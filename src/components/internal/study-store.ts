@@ -4,9 +4,9 @@
  * the whole study back. Other tabs see the change on their next load (the "storage" event is not
  * followed: a page never changes under the reader's hands).
  */
-import { parseStudy, type Study } from '../../studies/schema.ts';
+import { parseStudy, STUDY_STORE, type Study } from '../../studies/schema.ts';
 
-export const STUDY_STORE = 'dampbook:study';
+export { STUDY_STORE };
 
 export type StoredStudy = { ok: true; study: Study } | { ok: false; message: string } | undefined;
 

@@ -1,0 +1,39 @@
+/**
+ * Opening a five-step study in Chromium: the TW-210 class D study opened from the road page's
+ * address, measured in the page from the load event to the moment the calculator holds its step's
+ * values (study code loaded, study fetched, validated, all five steps run, fields filled), and the
+ * time of one whole-study recompute after a change. Target: ≤ 150 ms after load (issue: studies).
+ * Needs a built site: dist/ (npm run build) or DAMPBOOK_SITE=<folder>. Run: npx tsx bench/study.bench.ts
+ */
+import { existsSync } from 'node:fs';
+import { serveStatic } from '../src/server/staticServer.ts';
+import { launch } from '../test/helpers/browser.ts';
+
+const SITE = process.env.DAMPBOOK_SITE ?? (existsSync('dist/index.html') ? 'dist' : '.test-out/root');
+const RUNS = 9;
+
+const served = await serveStatic(SITE, '/');
+const browser = await launch();
+const open: number[] = [];
+const recompute: number[] = [];
+try {
+  for (let i = 0; i < RUNS; i++) {
+    const page = await (await browser.newContext()).newPage();
+    await page.goto(`${served.url}duty/road-power/?study=tw-210-rear-damper-class-d`);
+    await page.waitForSelector('db-calculator[data-calc="road-power"][data-study]');
+    open.push(await page.evaluate(() => {
+      const nav = performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming;
+      return performance.getEntriesByName('db-study-attached')[0]!.startTime - nav.loadEventEnd;
+    }));
+    await page.fill('input[name="V"]', String(16 + i));
+    await page.waitForFunction(() => performance.getEntriesByName('db-study-run').length >= 2);
+    recompute.push(await page.evaluate(() => performance.getEntriesByName('db-study-run').at(-1)!.duration));
+    await page.context().close();
+  }
+} finally {
+  await browser.close();
+  await served.close();
+}
+const med = (x: number[]) => [...x].sort((a, b) => a - b)[Math.floor(x.length / 2)]!;
+console.log(`study open (5 steps) after load: median ${med(open).toFixed(1)} ms, worst ${Math.max(...open).toFixed(1)} ms; target ≤ 150 ms: ${med(open) <= 150 ? 'met' : 'NOT MET'}`);
+console.log(`whole-study recompute after a change: median ${med(recompute).toFixed(1)} ms, worst ${Math.max(...recompute).toFixed(1)} ms`);

@@ -1,0 +1,2 @@
+/** The browser's localStorage key of the open study (pages, /studies/open/, `dampbook study sheet`). Its own module so small page scripts can use it without the study schema. */
+export const STUDY_STORE = 'dampbook:study';
