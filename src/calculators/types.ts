@@ -197,6 +197,12 @@ export interface CalculatorDefinition {
 export interface StudyBindings {
   readonly inputs?: Readonly<Record<string, string>>;
   readonly publishes?: Readonly<Record<string, string>>;
+  /**
+   * Refuses a step whose bound inputs do not mean their study quantity under the step's other
+   * inputs (e.g. warm-up's P is the power while on: the study's mean power only at duty 1).
+   * `bound` holds the input keys filled from the study or an earlier step; returns the reason.
+   */
+  readonly refuse?: (values: Values, bound: ReadonlySet<string>) => string | undefined;
 }
 
 /** Identity with checking: keeps the literal types and catches typos in keys at compile time. */

@@ -21,6 +21,10 @@ export const CHECK_CALCULATOR: Record<CheckName, string | undefined> = {
   'time-to-limit': 'warm-up',
   fade: 'damping-fade',
   'power-rating': 'power-rating',
+  'tyre-load': 'road-power',
+  travel: 'road-power',
+  'stroke-energy': 'impact',
+  'hourly-energy': 'impact',
 };
 
 /** The limit quantity each check compares against (power-rating: the duty's mean power against P_max). */
@@ -30,6 +34,10 @@ export const CHECK_LIMIT: Record<CheckName, string | undefined> = {
   'time-to-limit': 'dutyLength',
   fade: 'allowedFade',
   'power-rating': undefined,
+  'tyre-load': 'allowedTyreLoadRatio',
+  travel: 'availableTravel',
+  'stroke-energy': 'ratedStrokeEnergy',
+  'hourly-energy': 'ratedHourlyEnergy',
 };
 
 export interface PlannedStep {

@@ -55,6 +55,10 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('allowedTemperature', 'temperature', 'Highest body (oil, seal) temperature the maker allows.', 'limit'),
   q('dutyLength', 'time', 'Length of the duty the damper must carry without passing the allowed temperature.', 'limit'),
   q('allowedFade', 'dimensionless', 'Largest share of the damping coefficient that may be lost to fade (1 − c/c_ref).', 'limit'),
+  q('allowedTyreLoadRatio', 'dimensionless', 'Largest RMS dynamic tyre load as a share of the static load (road holding; at 1/3 a Gaussian load lifts the tyre about 0.13 % of the time).', 'limit'),
+  q('availableTravel', 'length', 'Suspension travel available from the static position to the bump stop (at the wheel).', 'limit'),
+  q('ratedStrokeEnergy', 'energy', 'Energy per stroke the end-stop damper is rated for (its maker\'s data).', 'limit'),
+  q('ratedHourlyEnergy', 'energy', 'Energy per hour the end-stop damper is rated for (its maker\'s data; the heat it can shed).', 'limit'),
 ];
 
 const byName = new Map(STUDY_QUANTITIES.map((x) => [x.name, x]));

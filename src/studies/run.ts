@@ -90,6 +90,9 @@ function runStep(p: PlannedStep, plan: StudyPlan, runs: ReadonlyMap<string, Step
     if (e instanceof ComputationError) throw new StudyError(`study: step '${id}' (${p.calc.id}): ${e.message}`);
     throw e;
   }
+  const bound = new Set(Object.entries(origins).filter(([, o]) => o.kind !== 'typed').map(([k]) => k));
+  const refused = p.calc.study?.refuse?.(r.values, bound);
+  if (refused) throw new StudyError(`study: step '${id}' (${p.calc.id}): ${refused}`);
   const used: Record<string, Origin> = {};
   const from: Record<string, string> = {};
   for (const key of Object.keys(r.values)) {

@@ -24,7 +24,7 @@ const MAX_DEPTH = 6;
 const KEY = /^[A-Za-z][A-Za-z0-9_]{0,39}$/;
 const STEP_ID = /^[a-z][a-z0-9-]{0,39}$/;
 
-export const CHECKS = ['steady-temperature', 'surroundings', 'time-to-limit', 'fade', 'power-rating'] as const;
+export const CHECKS = ['steady-temperature', 'surroundings', 'time-to-limit', 'fade', 'power-rating', 'tyre-load', 'travel', 'stroke-energy', 'hourly-energy'] as const;
 export type CheckName = (typeof CHECKS)[number];
 
 const value = z.union([z.number().finite(), z.string().min(1).max(6000)]);

@@ -33,6 +33,17 @@ function present(run: StepRun, keys: readonly string[]): string[] {
 
 const n = (v: unknown): number => v as number;
 
+/**
+ * Peak of a Gaussian response taken as three standard deviations: exceeded about 0.13 % of the
+ * time on one side (common practice, no source; the normal distribution's 3σ point).
+ */
+const GAUSSIAN_PEAK = 3;
+
+/** Value against an upper limit. */
+function upTo(base: { step: string; check: CheckName }, value: number, limit: number, what: string, restsOn: string[]): Verdict {
+  return { ...base, value, limit, pass: value <= limit, margin: limit - value, what, restsOn };
+}
+
 function one(check: CheckName, p: PlannedStep, run: StepRun, plan: StudyPlan, published: ReadonlyMap<string, { value: number | string }>): Verdict {
   const limitOf = (name: string) => plan.quantities.get(name) as number;
   const base = { step: run.id, check };
@@ -71,6 +82,14 @@ function one(check: CheckName, p: PlannedStep, run: StepRun, plan: StudyPlan, pu
       if (!Number.isFinite(value)) return { ...base, value: null, limit, pass: false, margin: null, what: 'no earlier step gives the duty\'s mean power', restsOn: ['meanPower'] };
       return { ...base, value, limit, pass: value <= limit, margin: limit - value, what: 'duty mean power against the continuous rating P_max', restsOn: ['meanPower', ...present(run, ['Tmax', ...BODY])] };
     }
+    case 'tyre-load':
+      return upTo(base, n(run.outputs.tyreLoadRatio), limitOf('allowedTyreLoadRatio'), 'RMS dynamic tyre load / static load against the allowed ratio (road holding)', [...present(run, ['roadClass', 'Gd0', 'V', 'ms', 'mu', 'ks', 'kt', 'law', 'c']), 'allowedTyreLoadRatio']);
+    case 'travel':
+      return upTo(base, GAUSSIAN_PEAK * n(run.outputs.travelRms), limitOf('availableTravel'), 'suspension travel 3 × RMS (exceeded about 0.13 % of the time) against the travel available to the bump stop', [...present(run, ['roadClass', 'Gd0', 'V', 'ms', 'mu', 'ks', 'kt', 'law', 'c']), 'availableTravel']);
+    case 'stroke-energy':
+      return upTo(base, n(run.outputs.E), limitOf('ratedStrokeEnergy'), 'energy per stroke against the damper\'s rated energy per stroke', [...present(run, ['m', 'v', 'Fp', 's', 'vertical']), 'ratedStrokeEnergy']);
+    case 'hourly-energy':
+      return upTo(base, n(run.outputs.Ehour), limitOf('ratedHourlyEnergy'), 'energy per hour against the damper\'s rated energy per hour', [...present(run, ['m', 'v', 'Fp', 's', 'vertical', 'cph']), 'ratedHourlyEnergy']);
   }
 }
 

@@ -45,7 +45,7 @@ describe('a study open in the handbook pages', () => {
     // the bar lists the five steps, this one current, and the verdicts of the study as filed
     expect(await page.locator('[data-study-bar] .study-steplist li').count()).toBe(5);
     expect(await page.locator('[data-study-bar] li[aria-current="step"]').getAttribute('data-step')).toBe('road');
-    expect(await page.locator('[data-study-bar] .study-summary').textContent()).toBe('4 of 5 verdicts fail.');
+    expect(await page.locator('[data-study-bar] .study-summary').textContent()).toBe('5 of 7 verdicts fail.');
     expect(await page.locator('.field[data-key="V"]').getAttribute('data-origin')).toBe('study');
     expect(await page.locator('.field[data-key="V"] .study-note').textContent()).toContain('vehicle speed');
     expect((await live(page, 'road-power')).values!.V).toBe(15);

@@ -43,7 +43,7 @@ describe('study calculation package', () => {
     const cover = pages.slice(0, pages.findIndex((p) => /step 1 of 5/.test(p))).join('\n').replace(/\s+/g, ' ');
     expect(cover).toContain('Calculation package');
     expect(cover).toContain('Fellrunner site utility vehicle');
-    expect(cover).toContain('4 of 5 verdicts fail.');
+    expect(cover).toContain('5 of 7 verdicts fail.');
     for (const v of run.verdicts) expect(cover).toContain(`(${v.step}): ${v.pass ? 'PASS' : 'FAIL'}`);
     expect(cover).toMatch(/Prepared Rana Oduya/);
     // one sheet per step: each starts a new page with its own heading, once
@@ -65,7 +65,7 @@ describe('study calculation package', () => {
     const { info, pages, count } = await print('tw-118-end-stop', 'letter');
     expect(info).toMatch(/\(letter\)/i);
     expect(pages.at(-1)).toContain(`page ${count} of ${count}`);
-    expect(pages.join('\n')).toContain('All 3 verdicts pass.');
+    expect(pages.join('\n')).toContain('All 5 verdicts pass.');
   });
 
   it('a study file that is not part of the built handbook prints too (the class D study at 22 m/s)', async () => {

@@ -10,6 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/calculators/evaluate.ts';
 import { getCalculator } from '../../src/calculators/registry.ts';
 import { runStudy } from '../../src/studies/run.ts';
+import { readStudies } from '../../src/studies/files.ts';
 import { parseStudy, validateStudy, type Study } from '../../src/studies/schema.ts';
 import { changeBetween, staleSteps } from '../../src/studies/stale.ts';
 
@@ -77,6 +78,28 @@ describe('demo studies', () => {
     expect(fade!.outputs.Teq).toBeUndefined();
     expect(verdict.fade!.value!).toBeGreaterThan(fade!.outputs.fade as number);
     expect(verdict['steady-temperature']!.restsOn).toEqual(expect.arrayContaining(['P', 'V', 'allowedTemperature']));
+    // road holding and travel: the road step's own outputs against the limits (3σ for the Gaussian travel)
+    expect(verdict['tyre-load']).toMatchObject({ value: road!.outputs.tyreLoadRatio, limit: 0.33, pass: false });
+    expect(verdict.travel!.value).toBeCloseTo(3 * (road!.outputs.travelRms as number), 15);
+    expect(verdict.travel).toMatchObject({ limit: 0.08, pass: true });
+  });
+
+  it('a warm-up step that cycles the power refuses the study\'s mean power as its power while on', () => {
+    const u = fellrunner();
+    u.steps[2]!.inputs = { ...(u.steps[2]!.inputs ?? {}), duty: 0.5 };
+    expect(() => runStudy(u)).toThrow(/step 'warm-up' \(warm-up\): P \(the power while on\) came from the study's mean power, but the power is on for only 0.5/);
+    u.steps[2]!.inputs = { ...u.steps[2]!.inputs, P: 485 };
+    expect(() => runStudy(u)).not.toThrow();
+  });
+
+  it('TW-118 end stop: energy per stroke ½mv² + F_p·s and per hour against the buffer ratings', () => {
+    const file = readStudies().find((f) => f.id === 'tw-118-end-stop')!;
+    const run = runStudy(file.study);
+    const v = Object.fromEntries(run.verdicts.map((x) => [x.check, x]));
+    // closed form (Meriam & Kraige, Engineering Mechanics: Dynamics, work–energy, §3/6): ½·12·1.5² + 60·0.025 = 15 J
+    expect(v['stroke-energy']).toMatchObject({ value: 15, limit: 25, pass: true, margin: 10 });
+    expect(v['hourly-energy']!.value).toBeCloseTo(15 * 900, 9);
+    expect(v['hourly-energy']).toMatchObject({ limit: 30000, pass: true });
   });
 
   it('Fellrunner class C and the Packline end stop pass every verdict', () => {

@@ -46,7 +46,7 @@ export const roadPower = defineCalculator({
     { key: 'accRms', label: 'RMS body acceleration (ride)', kind: 'acceleration' },
     { key: 'travelRms', label: 'RMS suspension travel', kind: 'length' },
     { key: 'tyreLoadRms', label: 'RMS dynamic tyre load', kind: 'force' },
-    { key: 'tyreLoadRatio', label: 'Dynamic / static tyre load', kind: 'dimensionless', help: 'Road holding: above about 1/3 the tyre unloads fully about 0.3 % of the time (Gaussian).' },
+    { key: 'tyreLoadRatio', label: 'Dynamic / static tyre load', kind: 'dimensionless', help: 'Road holding: at 1/3 a Gaussian dynamic load exceeds the static load, and the tyre leaves the road, about 0.13 % of the time.' },
     { key: 'Gd0Used', label: 'G_d(n0) used', kind: 'roadRoughness' },
     { key: 'ceq', label: 'Linear (or equivalent) damping', kind: 'damping' },
     { key: 'PClosed', label: 'Mean power, closed form (w = 2)', kind: 'power', optional: true, help: 'π²·k_t·G_d(n0)·n0²·V: no damper or mass term.' },

@@ -213,5 +213,8 @@ export const warmUpCalc = defineCalculator({
   study: {
     inputs: { P: 'meanPower', Cth: 'heatCapacity', UA: 'conductance', Tamb: 'airTemperature', Tlimit: 'allowedTemperature', t: 'dutyLength', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
     publishes: { CthTotal: 'heatCapacity' },
+    refuse: (values, bound) => bound.has('P') && values.power === 'steady' && values.duty !== 1
+      ? `P (the power while on) came from the study's mean power, but the power is on for only ${String(values.duty)} of each period: type P = mean power / on fraction on this step, or set the on fraction to 1`
+      : undefined,
   },
 });
