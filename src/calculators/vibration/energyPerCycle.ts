@@ -47,7 +47,7 @@ export const energyPerCycle = defineCalculator({
       return { outputs: { E: d.E, P: d.P, ceq: d.ceq, zetaEq: k === undefined ? undefined : equivalentDampingRatio(d.E, k, X), Fmax: d.Fmax, vmax: d.vmax }, warnings };
     }
     const s = seriesHarmonic(law, ks, X, omega);
-    if (law.kind !== 'linear' && law.kind !== 'hysteretic') warnings.push(`Series stiffness with a ${law.kind} law: evaluated by equivalent linearisation (first harmonic of the damper's own stroke, ${q(s.Xd, 'length', 3)}); exact for the linear law only. The damper simulation page integrates the nonlinear element in time.`);
+    if (law.kind !== 'linear' && law.kind !== 'hysteretic') warnings.push(`Series stiffness with a ${law.kind} law: evaluated by equivalent linearisation (first harmonic of the damper's own stroke, ${(s.Xd * 1000).toPrecision(3)} mm); exact for the linear law only. The damper simulation page integrates the nonlinear element in time.`);
     if (s.stuck) warnings.push(`The friction damper never slips: 4F_f/π exceeds k_s·X, so the spring takes the whole stroke and nothing is dissipated.`);
     if (law.kind === 'bilinear' && (law.rebound.c1 !== law.compression.c1 || law.rebound.c2 !== law.compression.c2)) warnings.push('Unequal rebound and compression with a series spring make the damper drift to an offset; the first harmonic ignores it.');
     return {

@@ -79,7 +79,7 @@ export interface SeriesHarmonic extends MaxwellStiffness {
  * @param ks series stiffness, N/m, (0, ∞)
  * @param X stroke amplitude of the whole element (spring + damper), m, (0, ∞)
  * @param omega circular frequency, rad/s, (0, ∞)
- * @example seriesHarmonic({ kind: 'linear', c: 1e6 }, 1e7, 0.01, 2 * Math.PI).E // 1.4153e3 J (π·K″·X²)
+ * @example seriesHarmonic({ kind: 'linear', c: 1e6 }, 1e7, 0.01, 2 * Math.PI).E // 1415.2 J (π·K″·X²)
  * @source christopoulos2006 (Maxwell model, from memory); chopra2017 §3.9 (equivalent viscous damping, from memory); linearisation: common practice, no source
  */
 export function seriesHarmonic(law: DamperLaw, ks: number, X: number, omega: number): SeriesHarmonic {

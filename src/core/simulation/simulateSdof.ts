@@ -149,7 +149,7 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
       continue;
     }
     const left = MAX_STEPS - stats.accepted - stats.rejected;
-    const budgetError = (at: number) => new ComputationError(`simulation: more than ${MAX_STEPS.toLocaleString('en-GB').replace(/,/g, ' ')} integration steps in all before t = ${tEnd} s (stopped at t = ${at.toPrecision(6)} s, ${stats.segments} stick–slip phases): shorten the duration or lower the excitation frequency`);
+    const budgetError = (at: number) => new ComputationError(`simulation: more than ${MAX_STEPS.toLocaleString('en-GB').replace(/,/g, ' ')} integration steps in all before t = ${tEnd} s (stopped at t = ${at.toPrecision(6)} s, ${stats.segments} stick–slip phases): shorten the duration or lower the excitation frequency${ks !== undefined ? '; a series stiffness far stiffer than the damper (small c/k_s) needs tiny steps: leave ks empty for a rigid connection' : ''}`);
     if (left <= 0) throw budgetError(t);
     let sol;
     try {
