@@ -14,7 +14,7 @@ function setup(values: Values) {
 function duty(law: DamperLaw, ks: number | undefined, X: number, omega: number) {
   if (ks === undefined) return harmonicDuty(law, X, omega);
   const s = seriesHarmonic(law, ks, X, omega);
-  return { E: s.E, P: s.P, ceq: s.ceq, Fmax: s.Fmax, vmax: s.vmax, vrms: s.vmax / Math.SQRT2 };
+  return { E: s.E, P: s.P, ceq: s.ceq, Fmax: s.Fmax, vmax: s.vmax, vrms: s.vmax / Math.SQRT2, strokeShare: s.strokeShare };
 }
 
 /** Harmonic stroke → energy per cycle, mean power, RMS velocity and peak force for any damper law. */
@@ -41,7 +41,7 @@ export const harmonicDutyCalc = defineCalculator({
     const d = duty(law, ks, X, omega);
     const warnings = law.kind === 'hysteretic' ? ['A loss-factor law describes harmonic motion only: its energy per cycle πηkX² does not depend on frequency, so at a fixed stroke its power P = πηkX²·f rises linearly with frequency.'] : [];
     if (ks !== undefined) warnings.push(law.kind === 'linear'
-      ? `Series stiffness k_s: the damper takes ${(100 * d.vmax / (X * omega)).toPrecision(3)} % of the stroke (Maxwell model, closed form); peak and RMS velocity are the damper's own.`
+      ? `Series stiffness k_s: the damper takes ${(100 * ('strokeShare' in d ? d.strokeShare : 1)).toPrecision(3)} % of the stroke (Maxwell model, closed form); peak and RMS velocity are the damper's own.`
       : `Series stiffness with a ${law.kind} law: evaluated by equivalent linearisation (first harmonic of the damper's own stroke); peak and RMS velocity are the damper's own.`);
     return { outputs: { P: d.P, E: d.E, vRms: d.vrms, vPeak: d.vmax, Fpeak: d.Fmax, ceq: d.ceq }, warnings };
   },

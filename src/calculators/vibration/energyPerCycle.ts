@@ -1,4 +1,5 @@
 import { damperForce, equivalentDampingRatio, harmonicDuty, seriesHarmonic } from '../../core/dampers/index.ts';
+import { InputRangeError } from '../../core/errors.ts';
 import { defineCalculator, num, optNum, type ChartSpec, type Values } from '../types.ts';
 import { lawChart } from '../damperLaw/chart.ts';
 import { lawFromValues, lawInputs, lawStudy, seriesStiffness } from '../damperLaw/inputs.ts';
@@ -40,7 +41,11 @@ export const energyPerCycle = defineCalculator({
   compute(values) {
     const { X, omega, k, ks, law } = setup(values);
     const warnings: string[] = [];
-    if (law.kind === 'hysteretic') warnings.push(`Hysteretic law evaluated as the viscous damper c = ηk_h/ω = ${((law.eta * law.k) / omega).toPrecision(4)} N·s/m at this frequency.`);
+    if (law.kind === 'hysteretic') {
+      const cH = (law.eta * law.k) / omega;
+      if (!Number.isFinite(cH)) throw new InputRangeError('f', omega / (2 * Math.PI), undefined, 'Hz', 'too low for the hysteretic law: its viscous equivalent ηk_h/ω has no finite value');
+      warnings.push(`Hysteretic law evaluated as the viscous damper c = ηk_h/ω = ${cH.toPrecision(4)} N·s/m at this frequency.`);
+    }
     if (ks === undefined) {
       const d = harmonicDuty(law, X, omega);
       if (law.kind === 'bilinear' && d.vmax <= law.vknee) warnings.push('Peak velocity below the knee: only the low-speed slopes act.');

@@ -6,7 +6,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { main } from '../../../src/cli/main.ts';
-import { calculators } from '../../../src/calculators/registry.ts';
+import { calculators, getCalculator } from '../../../src/calculators/registry.ts';
+import { evaluate } from '../../../src/calculators/evaluate.ts';
+import { lawChart } from '../../../src/calculators/damperLaw/chart.ts';
 import { LAW_KEYS } from '../../../src/calculators/damperLaw/inputs.ts';
 import { LEGACY_LAW_KEYS } from '../../../src/calculators/damperLaw/migrate.ts';
 
@@ -55,5 +57,12 @@ describe('canonical damper-law keys', async () => {
 
   it('every input shown only for some laws is a canonical law key', () => {
     for (const c of calculators) for (const i of c.inputs) if (i.when?.key === 'law') expect(Object.keys(LAW_KEYS), `${c.id}.${i.key}`).toContain(i.key);
+  });
+
+  it.each(['energy-per-cycle', 'harmonic-duty', 'damper-simulation'])('%s draws its law with the shared force–velocity chart', (id) => {
+    const calc = getCalculator(id)!;
+    const r = evaluate(calc, { law: 'bilinear' });
+    const title = lawChart({ kind: 'linear', c: 1 }, 1).title;
+    expect(calc.charts!(r.values, r).some((c) => c.title === title)).toBe(true);
   });
 });
