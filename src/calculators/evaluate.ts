@@ -4,7 +4,6 @@
  * or an InputRangeError naming the input.
  */
 import { ComputationError, InputRangeError, type Range } from '../core/errors.ts';
-import { isPlainNumber } from '../core/numeric/plainNumber.ts';
 import { parseQuantity, siSymbol, UnitError } from '../core/units/index.ts';
 import type { CalculatorDefinition, InputDef, Result, Values } from './types.ts';
 
@@ -25,13 +24,6 @@ export interface EvaluateOptions {
 
 export function rangeOf(def: Extract<InputDef, { min: number }>): Range {
   return { min: def.min, max: def.max, minExclusive: def.minExclusive, maxExclusive: def.maxExclusive };
-}
-
-/** True when a number input accepts only SI base units for the current choices (see `siOnlyWhen`). */
-export function siOnly(def: InputDef, values: Values): boolean {
-  if (def.kind === 'choice' || def.kind === 'text' || !def.siOnlyWhen) return false;
-  const v = values[def.siOnlyWhen.key];
-  return typeof v === 'string' && def.siOnlyWhen.is.includes(v);
 }
 
 /** True when an input applies under the current choices (see `when`). */
@@ -79,9 +71,6 @@ export function checkInput(def: InputDef, v: unknown, values: Values, fill: bool
   if (typeof v === 'number') n = v;
   else if (typeof v === 'string') {
     if (v.length > MAX_NUMBER_TEXT) throw new InputRangeError(def.key, `${v.length} characters`, r, unit, 'too long for a number');
-    if (siOnly(def, values) && !isPlainNumber(v)) {
-      throw new InputRangeError(def.key, v, r, unit, `give a plain number in SI base units here: ${def.siOnlyWhen!.why}`);
-    }
     try {
       n = parseQuantity(v, def.kind);
     } catch (e) {

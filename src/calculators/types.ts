@@ -22,12 +22,6 @@ export interface NumberInput {
   readonly optional?: boolean;
   /** Only shown when another (choice) input has one of these values. */
   readonly when?: { readonly key: string; readonly is: readonly string[] };
-  /**
-   * Only SI base units are accepted while another (choice) input has one of these values: for a
-   * coefficient whose unit depends on another input (C of a power-law damper, N·(s/m)^α), a
-   * conversion of the kind's other units would be exact only for one value of that input.
-   */
-  readonly siOnlyWhen?: { readonly key: string; readonly is: readonly string[]; readonly why: string };
 }
 
 export interface ChoiceOption<V extends string = string> {

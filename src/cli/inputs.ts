@@ -6,6 +6,7 @@
  */
 import { createHash } from 'node:crypto';
 import { basename } from 'node:path';
+import { isLegacyLawKey, migrateLawKeys } from '../calculators/damperLaw/migrate.ts';
 import { evaluate } from '../calculators/evaluate.ts';
 import type { CalculatorDefinition, Result, Values } from '../calculators/types.ts';
 import { InputRangeError } from '../core/errors.ts';
@@ -28,6 +29,8 @@ export interface TextSummary {
 export interface ReadInputs {
   readonly raw: Record<string, unknown>;
   readonly texts: TextSummary[];
+  /** Deprecation notes for old damper-law keys that were mapped to the canonical ones (for stderr). */
+  readonly notes: string[];
 }
 
 /** One line naming a text input without its contents: "dyno.csv, 401 rows, 9876 characters, sha256 0a1b2c3d4e5f". */
@@ -53,6 +56,12 @@ export function readInputs(def: CalculatorDefinition, inputs: readonly (readonly
   const seen = new Set<string>();
   for (const [key, value] of inputs) {
     const input = def.inputs.find((i) => i.key === key);
+    if (!input && isLegacyLawKey(def, key)) {
+      if (seen.has(key)) throw new UsageError(`--in ${key} is given twice`);
+      seen.add(key);
+      raw[key] = isPlainNumber(value) ? Number(value) : value;
+      continue;
+    }
     if (!input) throw new UsageError(`${def.id} has no input '${key}'; inputs: ${def.inputs.map((i) => i.key).join(', ')}`);
     if (seen.has(key)) throw new UsageError(`--in ${key} is given twice`);
     seen.add(key);
@@ -77,7 +86,9 @@ export function readInputs(def: CalculatorDefinition, inputs: readonly (readonly
     } else if (input.kind !== 'choice' && isPlainNumber(value)) raw[key] = Number(value);
     else raw[key] = value;
   }
-  return { raw, texts };
+  // old damper-law keys (cRebound, c with the power law, k as the hysteretic stiffness) → canonical keys
+  const m = migrateLawKeys(def, raw);
+  return { raw: m.raw, texts, notes: m.notes };
 }
 
 /** A summary of text given inline or a default (checksum of its UTF-8 bytes). */

@@ -13,7 +13,8 @@ import { newPage } from './commands/new.ts';
 import { sheet } from './commands/sheet.ts';
 import { study } from './commands/study.ts';
 
-type Command = (args: ParsedArgs, out: (s: string) => void) => number | Promise<number>;
+/** `err` is stderr (deprecation notes); `out` is the command's output. */
+type Command = (args: ParsedArgs, out: (s: string) => void, err: (s: string) => void) => number | Promise<number>;
 
 /** Each command's options (besides --help) and whether it reads --in. */
 interface CommandSpec { run: Command; help: string; options: readonly string[]; inputs: boolean }
@@ -42,7 +43,7 @@ export async function main(argv: readonly string[], rawOut = (s: string) => cons
     const cmd = commands[name];
     if (!cmd) throw new UsageError(`unknown command '${name}'; commands: ${Object.keys(commands).join(', ')} (dampbook help shows usage)`);
     requireKnownOptions(name, args, cmd.options, cmd.inputs);
-    return await cmd.run(args, out);
+    return await cmd.run(args, out, err);
   } catch (e) {
     if (process.env.DAMPBOOK_DEBUG === '1' && e instanceof Error) for (const l of (e.stack ?? e.message).split('\n')) err(l);
     else if (e instanceof DampbookError || e instanceof UsageError || e instanceof SheetError) err(`dampbook: ${e.message}`);

@@ -3,10 +3,11 @@
  * SI, recomputes through the same evaluate() as the page and the CLI, and compares every
  * recorded output. Differences in page revision or core version become warnings.
  */
-import { evaluate, rangeOf, siOnly } from '../calculators/evaluate.ts';
+import { LEGACY_LAW_KEYS, migrateLawKeys } from '../calculators/damperLaw/migrate.ts';
+import { evaluate } from '../calculators/evaluate.ts';
 import type { CalculatorDefinition, InputDef, Outputs, Values } from '../calculators/types.ts';
-import { DampbookError, InputRangeError } from '../core/errors.ts';
-import { findUnit, fromSI, siSymbol, siUnit, toSI } from '../core/units/index.ts';
+import { DampbookError } from '../core/errors.ts';
+import { findUnit, fromSI, siUnit, toSI } from '../core/units/index.ts';
 import { RECORD_FORMAT, type CalcRecord, type Quantity } from './record.ts';
 
 /**
@@ -61,29 +62,34 @@ export type Replay =
   | { ok: true; values: Values; outputs: Outputs; shown: Record<string, Shown>; diffs: OutputDiff[]; matched: number; warnings: string[] }
   | { ok: false; message: string };
 
-/** Converts a record's inputs to raw SI values for evaluate(); throws a message for bad entries. */
-function rawInputs(calc: CalculatorDefinition, rec: CalcRecord): { raw: Record<string, number | string>; shown: Record<string, Shown> } {
+/**
+ * Converts a record's inputs to raw SI values for evaluate(); throws a message for bad entries.
+ * Old damper-law keys (migrate.ts) are converted too and mapped to the canonical keys, with notes.
+ */
+function rawInputs(calc: CalculatorDefinition, rec: CalcRecord): { raw: Record<string, number | string>; shown: Record<string, Shown>; notes: string[] } {
   const raw: Record<string, number | string> = Object.create(null);
   const shown: Record<string, Shown> = Object.create(null);
-  // the record's choices, for inputs accepted in SI base units only under some choices (siOnlyWhen)
-  const choices: Values = Object.fromEntries(Object.entries(rec.inputs).filter(([k, q]) => calc.inputs.some((d) => d.key === k && d.kind === 'choice') && typeof q.value === 'string').map(([k, q]) => [k, q.value]));
   for (const [key, q] of Object.entries(rec.inputs)) {
     const def = calc.inputs.find((d) => d.key === key);
-    if (!def) throw new Error(`input '${key}' is not an input of ${calc.id}`);
-    if (def.kind === 'choice' || def.kind === 'text') {
+    const legacy = !def && calc.inputs.some((d) => d.key === 'law') ? LEGACY_LAW_KEYS[key] : undefined;
+    if (!def && !legacy) throw new Error(`input '${key}' is not an input of ${calc.id}`);
+    const kind = def ? def.kind : legacy!;
+    if (kind === 'choice' || kind === 'text') {
       if (typeof q.value !== 'string') throw new Error(`input '${key}' must be text`);
       raw[key] = q.value;
       continue;
     }
     if (typeof q.value !== 'number') throw new Error(`input '${key}' must be a number`);
-    const u = q.unit === undefined ? siUnit(def.kind) : findUnit(def.kind, q.unit);
-    if (u.id !== siUnit(def.kind).id && siOnly(def, choices)) {
-      throw new InputRangeError(key, `${q.value} ${u.symbol}`, rangeOf(def as Extract<InputDef, { min: number }>), siSymbol(def.kind), `give a plain number in SI base units here: ${def.siOnlyWhen!.why}`);
-    }
+    const u = q.unit === undefined ? siUnit(kind) : findUnit(kind, q.unit);
+    // the old power-law C (key c) was accepted in SI base units only: its unit depends on α
+    if (key === 'c' && rec.inputs.law?.value === 'power' && u.id !== siUnit(kind).id) throw new Error(`input 'c' (old key, power-law C) must be in SI base units, N·(s/m)^α, not ${u.symbol}`);
     raw[key] = toSI(q.value, u);
     shown[key] = { value: q.value, unit: u.id };
   }
-  return { raw, shown };
+  const m = migrateLawKeys(calc, raw);
+  // a mapped value is no longer what the reader typed: show it in SI
+  for (const key of Object.keys(shown)) if (m.raw[key] !== raw[key]) delete shown[key];
+  return { raw: m.raw as Record<string, number | string>, shown, notes: m.notes };
 }
 
 /** Recomputes a record. `ctx` is what the reader has now (page revision, core version). */
@@ -91,9 +97,11 @@ export function replayRecord(calc: CalculatorDefinition, rec: CalcRecord, ctx: R
   if (rec.calculator !== calc.id) return { ok: false, message: `This record is for calculator '${rec.calculator}', not '${calc.id}'.` };
   let result;
   let shown: Record<string, Shown>;
+  let notes: string[];
   try {
     const r = rawInputs(calc, rec);
     shown = r.shown;
+    notes = r.notes;
     result = evaluate(calc, r.raw, { fillDefaults: false });
   } catch (e) {
     const msg = e instanceof DampbookError || e instanceof Error ? e.message : String(e);
@@ -113,7 +121,7 @@ export function replayRecord(calc: CalculatorDefinition, rec: CalcRecord, ctx: R
     } else if (computed !== undefined && String(computed) === String(q.value)) matched++;
     else diffs.push({ key, recorded: q.value, computed });
   }
-  const warnings: string[] = [];
+  const warnings: string[] = notes.map((n) => `Old input: ${n}`);
   if (rec.page && ctx.page && rec.page.id !== ctx.page.id) warnings.push(`The record was made on page '${rec.page.id}', this is page '${ctx.page.id}'.`);
   else if (rec.page && ctx.page && rec.page.revision !== ctx.page.revision) warnings.push(`The record was made with page revision ${rec.page.revision}; this page is revision ${ctx.page.revision}.`);
   if (rec.coreVersion !== ctx.coreVersion) warnings.push(`The record was made with core version ${rec.coreVersion}; this handbook runs ${ctx.coreVersion}.`);

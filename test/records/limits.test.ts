@@ -65,11 +65,11 @@ describe('record size limits', () => {
   });
 });
 
-describe('record replay and SI-only inputs', () => {
-  // the power-law C is accepted in SI base units only (siOnlyWhen): a record giving it in another
-  // unit is refused as the page and calc refuse "1500 lbf·s/in" (behaviour; no reference value)
+describe('record replay and the old power-law key c', () => {
+  // an old record's power-law C (key c) is read in SI base units only, N·(s/m)^α: its unit depends
+  // on α, so a record giving it in another unit is refused (behaviour; no reference value)
   const epc = getCalculator('energy-per-cycle')!;
-  const base = evaluate(epc, { law: 'power', c: 1500 });
+  const base = evaluate(epc, { law: 'power', Fref: 1500 });
   const rec = makeRecord(epc, base.values, base.outputs, {}, { coreVersion: '0.1.0' }, new Date('2026-12-02T10:00:00Z'));
 
   it('replays a power-law record in SI', () => {

@@ -1,10 +1,20 @@
-import { damperForce, DAMPER_LAW_KINDS, harmonicDuty } from '../../core/dampers/index.ts';
+import { damperForce, harmonicDuty, seriesHarmonic, type DamperLaw } from '../../core/dampers/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
-import { describeLaw, lawFromValues, lawInputs } from './lawInputs.ts';
+import { lawChart } from '../damperLaw/chart.ts';
+import { describeLaw, lawFromValues, lawInputs, lawStudy, seriesStiffness } from '../damperLaw/inputs.ts';
 import { q } from '../quantityText.ts';
 
+const LAW = lawInputs({ defaults: { law: 'linear', c: 1500, Fref: 800, vref: 1, alpha: 0.5 } });
+
 function setup(values: Values) {
-  return { law: lawFromValues(values), X: num(values, 'X'), omega: 2 * Math.PI * num(values, 'f') };
+  return { law: lawFromValues(values), ks: seriesStiffness(values), X: num(values, 'X'), omega: 2 * Math.PI * num(values, 'f') };
+}
+
+/** The duty at stroke X and ω, with the series spring when given (equivalent linearisation; exact for the linear law). */
+function duty(law: DamperLaw, ks: number | undefined, X: number, omega: number) {
+  if (ks === undefined) return harmonicDuty(law, X, omega);
+  const s = seriesHarmonic(law, ks, X, omega);
+  return { E: s.E, P: s.P, ceq: s.ceq, Fmax: s.Fmax, vmax: s.vmax, vrms: s.vmax / Math.SQRT2, strokeShare: s.strokeShare };
 }
 
 /** Harmonic stroke → energy per cycle, mean power, RMS velocity and peak force for any damper law. */
@@ -15,7 +25,7 @@ export const harmonicDutyCalc = defineCalculator({
   inputs: [
     { key: 'X', label: 'Stroke amplitude (half of peak-to-peak)', kind: 'length', default: 0.025, min: 0, max: 10, minExclusive: true, required: true, help: 'Displacement amplitude across the damper: x = X·sin ωt.' },
     { key: 'f', label: 'Frequency', kind: 'frequency', default: 1.5, min: 1e-6, max: 1e4, required: true, help: 'Cycles per second of the stroke (from 10⁻⁶ Hz: slower motion makes no heat worth checking).' },
-    ...lawInputs(DAMPER_LAW_KINDS, { law: 'linear', c: 1500, Fref: 800, vref: 1, alpha: 0.5 }),
+    ...LAW,
   ],
   outputs: [
     { key: 'P', label: 'Mean power', kind: 'power', help: 'Heat generated in the damper, averaged over a cycle.',
@@ -27,27 +37,31 @@ export const harmonicDutyCalc = defineCalculator({
     { key: 'ceq', label: 'Equivalent viscous coefficient', kind: 'damping', help: 'The linear damper that dissipates the same energy per cycle at this amplitude and frequency.' },
   ],
   compute(values) {
-    const { law, X, omega } = setup(values);
-    const d = harmonicDuty(law, X, omega);
+    const { law, ks, X, omega } = setup(values);
+    const d = duty(law, ks, X, omega);
     const warnings = law.kind === 'hysteretic' ? ['A loss-factor law describes harmonic motion only: its energy per cycle πηkX² does not depend on frequency, so at a fixed stroke its power P = πηkX²·f rises linearly with frequency.'] : [];
+    if (ks !== undefined) warnings.push(law.kind === 'linear'
+      ? `Series stiffness k_s: the damper takes ${(100 * ('strokeShare' in d ? d.strokeShare : 1)).toPrecision(3)} % of the stroke (Maxwell model, closed form); peak and RMS velocity are the damper's own.`
+      : `Series stiffness with a ${law.kind} law: evaluated by equivalent linearisation (first harmonic of the damper's own stroke); peak and RMS velocity are the damper's own.`);
     return { outputs: { P: d.P, E: d.E, vRms: d.vrms, vPeak: d.vmax, Fpeak: d.Fmax, ceq: d.ceq }, warnings };
   },
   charts(values, result): ChartSpec[] {
-    const { law, X, omega } = setup(values);
+    const { law, ks, X, omega } = setup(values);
     const th = Array.from({ length: 181 }, (_, i) => (2 * Math.PI * i) / 180);
     const x = th.map((t) => X * Math.sin(t));
-    const F = th.map((t) => damperForce(law, X * omega * Math.cos(t), omega));
+    const F = ks === undefined ? th.map((t) => damperForce(law, X * omega * Math.cos(t), omega)) : undefined;
     const f0 = omega / (2 * Math.PI);
     // a decade either side; frequencies so small that ω underflows to 0 are left out
     const fs = Array.from({ length: 41 }, (_, i) => f0 * 10 ** (-1 + i / 20)).filter((f) => 2 * Math.PI * f > 0);
-    const Pf = fs.map((f) => harmonicDuty(law, X, 2 * Math.PI * f).P);
+    const Pf = fs.map((f) => duty(law, ks, X, 2 * Math.PI * f).P);
     return [
-      {
+      ...(F ? [{
         id: 'loop', title: 'Force against stroke over one cycle',
-        x: { label: 'Stroke', kind: 'length' }, y: { label: 'Force', kind: 'force' },
+        x: { label: 'Stroke', kind: 'length' as const }, y: { label: 'Force', kind: 'force' as const },
         series: [{ label: describeLaw(law), x, y: F, tone: 0 }],
         summary: `The loop encloses ${q(result.outputs.E as number, 'energy')} per cycle; peak force ${q(result.outputs.Fpeak as number, 'force')}.`,
-      },
+      }] : []),
+      lawChart(law, result.outputs.vPeak as number, omega),
       {
         id: 'power-frequency', title: 'Mean power against frequency at this stroke',
         x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
@@ -90,13 +104,22 @@ export const harmonicDutyCalc = defineCalculator({
       source: { key: 'chopra2017', locator: '§3.10 rate-independent damping (from memory)' },
       provenance: 'from memory',
     },
+    {
+      name: 'Linear c = 1 MN·s/m on a k_s = 10 MN/m brace, X = 10 mm at 1 Hz: E = π·K″·X² with K″ = 4.505 MN/m',
+      inputs: { X: 0.01, f: 1, law: 'linear', c: 1e6, ks: 1e7 },
+      expected: { E: Math.PI * 4.5048e6 * 1e-4, ceq: 7.1696e5 },
+      tolerance: 1e-4, why: 'Maxwell closed form, K″ = k_s·ωτ/(1+(ωτ)²) with ωτ = 0.6283, worked by hand to 5 s.f.',
+      source: { key: 'christopoulos2006', locator: 'Maxwell model of a viscous damper (from memory)' },
+      provenance: 'closed form',
+    },
   ],
   sources: [
     { key: 'chopra2017', locator: 'eq. 3.8.1; §3.9–3.10 (from memory)' },
+    { key: 'christopoulos2006', locator: 'Maxwell model (from memory)' },
     { key: 'fema274', locator: '§9.3 (from memory)' },
   ],
   study: {
-    inputs: { X: 'strokeAmplitude', f: 'strokeFrequency', law: 'damperLaw', c: 'dampingCoefficient', Fref: 'powerLawForce', vref: 'powerLawVelocity', alpha: 'powerLawExponent' },
+    inputs: { X: 'strokeAmplitude', f: 'strokeFrequency', ...lawStudy(LAW) },
     publishes: { P: 'meanPower' },
   },
 });

@@ -2,7 +2,7 @@ import { MAX_POWER_BLOCKS, parseRecordedMotion, recordedMotion, type ColumnLayou
 import { formatPowerProfile } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { demoDynoRecord, sineRecord } from './demoRecord.ts';
-import { lawFromValues, lawInputs } from './lawInputs.ts';
+import { lawFromValues, lawInputs } from '../damperLaw/inputs.ts';
 import { q } from '../quantityText.ts';
 
 type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion> };
@@ -43,7 +43,7 @@ export const recordedMotionCalc = defineCalculator({
       { value: 'txF', label: 'time, displacement, force' }, { value: 'tvF', label: 'time, velocity, force' },
     ], default: 'auto', help: 'How to read the columns when the header does not name them.' },
     { key: 'gapFactor', label: 'Gap threshold (× median interval)', kind: 'dimensionless', default: 5, min: 1.5, max: 1000, help: 'A sampling interval longer than this starts a new segment; nothing is differentiated or integrated across a gap.' },
-    ...lawInputs(['linear', 'power', 'coulomb', 'bilinear'], { law: 'linear', c: 1500, Fref: 800, vref: 1, alpha: 0.5 }),
+    ...lawInputs({ kinds: ['linear', 'power', 'coulomb', 'bilinear'], defaults: { law: 'linear', c: 1500, Fref: 800, vref: 1, alpha: 0.5 }, series: false }),
   ],
   outputs: [
     { key: 'P', label: 'Mean power', kind: 'power', help: 'Energy of the record divided by the time it covers (gaps excluded).',

@@ -3,7 +3,10 @@ import {
   type ClassValue, type RoadDamper, type RoadInput,
 } from '../../core/duty/index.ts';
 import { choice, defineCalculator, num, optNum, type ChartSpec, type Values } from '../types.ts';
-import { lawInputs } from './lawInputs.ts';
+import { lawInputs, lawStudy } from '../damperLaw/inputs.ts';
+
+// road-power's `ks` is the suspension spring (its CLI key since 0.1): the law here takes no series stiffness
+const LAW = lawInputs({ kinds: ['linear', 'power'], defaults: { c: 980, Fref: 800, vref: 1, alpha: 0.5 }, limits: { cMin: 10, cMax: 1e6, FrefMin: 1 }, series: false });
 import { q as qty } from '../quantityText.ts';
 
 function setup(values: Values) {
@@ -37,7 +40,7 @@ export const roadPower = defineCalculator({
     { key: 'mu', label: 'Unsprung mass', kind: 'mass', default: 36, min: 0.5, max: 5e3, required: true, help: 'Wheel, tyre, hub, brake and part of the links.' },
     { key: 'ks', label: 'Suspension spring rate (at wheel)', kind: 'stiffness', default: 16000, min: 100, max: 5e6, required: true, help: 'Wheel rate of the spring.' },
     { key: 'kt', label: 'Tyre vertical rate', kind: 'stiffness', default: 160000, min: 1000, max: 1e7, required: true, help: 'Radial stiffness of the tyre.' },
-    ...lawInputs(['linear', 'power'], { c: 980, Fref: 800, vref: 1, alpha: 0.5 }, { cMin: 10, cMax: 1e6, FrefMin: 1 }),
+    ...LAW,
   ],
   outputs: [
     { key: 'vRms', label: 'RMS damper velocity', kind: 'velocity' },
@@ -157,7 +160,7 @@ export const roadPower = defineCalculator({
     { key: 'newland1993', locator: 'ch. 7 (from memory)' },
   ],
   study: {
-    inputs: { V: 'vehicleSpeed', ms: 'sprungMass', mu: 'unsprungMass', ks: 'springRate', kt: 'tyreRate', law: 'damperLaw', c: 'dampingCoefficient', Fref: 'powerLawForce', vref: 'powerLawVelocity', alpha: 'powerLawExponent' },
+    inputs: { V: 'vehicleSpeed', ms: 'sprungMass', mu: 'unsprungMass', ks: 'springRate', kt: 'tyreRate', ...lawStudy(LAW) },
     publishes: { P: 'meanPower' },
   },
 });

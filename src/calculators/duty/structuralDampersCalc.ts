@@ -1,4 +1,5 @@
 import { adiabaticRise, storeyDampers } from '../../core/duty/index.ts';
+import { ALPHA_RANGE } from '../../core/dampers/index.ts';
 import { InputRangeError } from '../../core/errors.ts';
 import { formatPowerProfile } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
@@ -22,7 +23,7 @@ export const structuralDampers = defineCalculator({
   inputs: [
     { key: 'Fref', label: 'Damper force at reference velocity', kind: 'force', default: 200e3, min: 0, max: 1e9, minExclusive: true, required: true, help: 'F_ref = C·v_ref^α. With v_ref = 1 m/s this is C in N·(s/m)^α.' },
     { key: 'vref', label: 'Reference velocity', kind: 'velocity', default: 1, min: 0, max: 100, minExclusive: true, help: 'Velocity at which F_ref is quoted.' },
-    { key: 'alpha', label: 'Velocity exponent α', kind: 'dimensionless', default: 0.4, min: 0.05, max: 2, required: true, help: 'Fluid viscous dampers: 0.3–1; 1 is linear.' },
+    { key: 'alpha', label: 'Velocity exponent α', kind: 'dimensionless', default: 0.4, min: ALPHA_RANGE.min, max: ALPHA_RANGE.max, required: true, help: 'Fluid viscous dampers: 0.3–1; 1 is linear.' },
     { key: 'n', label: 'Dampers in the storey (this direction)', kind: 'dimensionless', default: 4, min: 1, max: 1000, required: true, help: 'Identical dampers acting in the direction of the drift.' },
     { key: 'theta', label: 'Brace angle to the horizontal', kind: 'angle', default: (40 * Math.PI) / 180, min: 0, max: Math.PI / 2, maxExclusive: true, help: 'Diagonal brace: damper stroke = storey drift × cos θ.' },
     { key: 'drift', label: 'Storey drift amplitude', kind: 'length', default: 0.015, min: 0, max: 2, minExclusive: true, required: true, help: 'Design displacement amplitude of the storey (earthquake) or steady wind-induced amplitude.' },

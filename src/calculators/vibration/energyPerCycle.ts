@@ -1,13 +1,16 @@
-import { damperForce, equivalentDampingRatio, harmonicDuty, lawBreakpoints } from '../../core/dampers/index.ts';
-import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
-import { lawInputs, lawFromValues, stiffness } from './damperLawInputs.ts';
+import { damperForce, equivalentDampingRatio, harmonicDuty, seriesHarmonic } from '../../core/dampers/index.ts';
+import { InputRangeError } from '../../core/errors.ts';
+import { defineCalculator, num, optNum, type ChartSpec, type Values } from '../types.ts';
+import { lawChart } from '../damperLaw/chart.ts';
+import { lawFromValues, lawInputs, lawStudy, seriesStiffness } from '../damperLaw/inputs.ts';
 import { q } from '../quantityText.ts';
+
+const LAW = lawInputs({ defaults: { law: 'linear', c: 1500, Fref: 1500, c1: 2000, c2: 600, c1c: 800, c2c: 240, kh: 16000 } });
 
 function setup(values: Values) {
   const X = num(values, 'X');
   const omega = 2 * Math.PI * num(values, 'f');
-  const k = stiffness(values);
-  return { X, omega, k, law: lawFromValues(values, k) };
+  return { X, omega, k: optNum(values, 'k'), ks: seriesStiffness(values), law: lawFromValues(values) };
 }
 
 /** Energy a damper law dissipates per cycle of harmonic stroke, its mean power and equivalent viscous damping. */
@@ -16,10 +19,10 @@ export const energyPerCycle = defineCalculator({
   title: 'Damper laws: energy per cycle',
   summary: 'Energy dissipated per cycle of harmonic stroke, mean power, equivalent viscous coefficient and damping ratio, and peak force for linear, power-law, Coulomb, bilinear and hysteretic dampers.',
   inputs: [
-    ...lawInputs('linear'),
+    ...LAW,
     { key: 'X', label: 'Stroke amplitude X', kind: 'length', default: 0.025, min: 0, max: 10, minExclusive: true, required: true, help: 'Displacement amplitude across the damper, x = X sin ωt.' },
     { key: 'f', label: 'Frequency f', kind: 'frequency', default: 1.5, min: 0, max: 1e5, minExclusive: true, required: true, help: 'Frequency of the harmonic stroke.' },
-    { key: 'k', label: 'Spring rate k', kind: 'stiffness', default: 16000, min: 0, max: 1e12, minExclusive: true, optional: true, help: 'Optional: stiffness in parallel, for ζ_eq. The hysteretic law needs it (η acts on k).' },
+    { key: 'k', label: 'Spring rate k', kind: 'stiffness', default: 16000, min: 0, max: 1e12, minExclusive: true, optional: true, help: 'Optional: stiffness in parallel, for ζ_eq.' },
   ],
   outputs: [
     { key: 'E', label: 'Energy per cycle E_D', kind: 'energy' },
@@ -30,46 +33,58 @@ export const energyPerCycle = defineCalculator({
     { key: 'ceq', label: 'Equivalent viscous coefficient c_eq', kind: 'damping', help: 'Linear damper dissipating the same E_D at this X and f.' },
     { key: 'zetaEq', label: 'Equivalent damping ratio ζ_eq', kind: 'dimensionless', optional: true, help: 'E_D/(4π·½kX²); needs k.' },
     { key: 'Fmax', label: 'Peak force F_max', kind: 'force' },
-    { key: 'vmax', label: 'Peak stroke velocity', kind: 'velocity' },
+    { key: 'vmax', label: 'Peak stroke velocity', kind: 'velocity', help: 'Of the damper itself (with a series stiffness its own stroke is smaller).' },
+    { key: 'Kstorage', label: 'Storage stiffness K′', kind: 'stiffness', optional: true, help: 'With a series stiffness k_s: the part of the force in phase with the stroke (Maxwell model).' },
+    { key: 'Kloss', label: 'Loss stiffness K″', kind: 'stiffness', optional: true, help: 'With k_s: the part in phase with the stroke velocity; E_D = π·K″·X².' },
+    { key: 'strokeShare', label: 'Share of the stroke taken by the damper', kind: 'dimensionless', optional: true, help: 'With k_s: |x_d|/|x| (the spring takes the rest).' },
   ],
   compute(values) {
-    const { X, omega, k, law } = setup(values);
-    const d = harmonicDuty(law, X, omega);
+    const { X, omega, k, ks, law } = setup(values);
     const warnings: string[] = [];
-    if (law.kind === 'hysteretic') warnings.push(`Hysteretic law evaluated as the viscous damper c = ηk/ω = ${d.ceq.toPrecision(4)} N·s/m at this frequency.`);
-    if (law.kind === 'bilinear' && d.vmax <= law.vknee) warnings.push('Peak velocity below the knee: only the low-speed slopes act.');
+    if (law.kind === 'hysteretic') {
+      const cH = (law.eta * law.k) / omega;
+      if (!Number.isFinite(cH)) throw new InputRangeError('f', omega / (2 * Math.PI), undefined, 'Hz', 'too low for the hysteretic law: its viscous equivalent ηk_h/ω has no finite value');
+      warnings.push(`Hysteretic law evaluated as the viscous damper c = ηk_h/ω = ${cH.toPrecision(4)} N·s/m at this frequency.`);
+    }
+    if (ks === undefined) {
+      const d = harmonicDuty(law, X, omega);
+      if (law.kind === 'bilinear' && d.vmax <= law.vknee) warnings.push('Peak velocity below the knee: only the low-speed slopes act.');
+      return { outputs: { E: d.E, P: d.P, ceq: d.ceq, zetaEq: k === undefined ? undefined : equivalentDampingRatio(d.E, k, X), Fmax: d.Fmax, vmax: d.vmax }, warnings };
+    }
+    const s = seriesHarmonic(law, ks, X, omega);
+    if (law.kind !== 'linear' && law.kind !== 'hysteretic') warnings.push(`Series stiffness with a ${law.kind} law: evaluated by equivalent linearisation (first harmonic of the damper's own stroke, ${(s.Xd * 1000).toPrecision(3)} mm); exact for the linear law only. The damper simulation page integrates the nonlinear element in time.`);
+    if (s.stuck) warnings.push(`The friction damper never slips: 4F_f/π exceeds k_s·X, so the spring takes the whole stroke and nothing is dissipated.`);
+    if (law.kind === 'bilinear' && (law.rebound.c1 !== law.compression.c1 || law.rebound.c2 !== law.compression.c2)) warnings.push('Unequal rebound and compression with a series spring make the damper drift to an offset; the first harmonic ignores it.');
     return {
-      outputs: { E: d.E, P: d.P, ceq: d.ceq, zetaEq: k === undefined ? undefined : equivalentDampingRatio(d.E, k, X), Fmax: d.Fmax, vmax: d.vmax },
+      outputs: {
+        E: s.E, P: s.P, ceq: s.ceq, zetaEq: k === undefined ? undefined : equivalentDampingRatio(s.E, k, X), Fmax: s.Fmax, vmax: s.vmax,
+        Kstorage: s.Kstorage, Kloss: s.Kloss, strokeShare: s.strokeShare,
+      },
       warnings,
     };
   },
   charts(values, result): ChartSpec[] {
-    const { X, omega, law } = setup(values);
-    const V = X * omega;
+    const { X, omega, ks, law } = setup(values);
     const n = 241;
     const th = Array.from({ length: n }, (_, i) => (2 * Math.PI * i) / (n - 1));
-    const loopX = th.map((t) => X * Math.sin(t));
-    const loopF = th.map((t) => damperForce(law, V * Math.cos(t), omega));
-    // velocity grid with the law's breakpoints inserted, so kinks and the Coulomb jump are drawn sharp
-    const vs = Array.from({ length: 201 }, (_, i) => -V + (2 * V * i) / 200);
-    for (const b of lawBreakpoints(law)) if (Math.abs(b) < V) vs.push(b, b);
-    vs.sort((a, b) => a - b);
-    const fv = vs.map((v, i) => (law.kind === 'coulomb' && v === 0 ? (vs[i - 1] === 0 ? law.Ff : -law.Ff) : damperForce(law, v, omega)));
     const E = result.outputs.E as number;
     const Fmax = result.outputs.Fmax as number;
+    const vd = result.outputs.vmax as number;
+    // with k_s the loop is the first-harmonic ellipse F = K′x + (K″/ω)ẋ of the whole element
+    const Ks = result.outputs.Kstorage as number | undefined;
+    const Kl = result.outputs.Kloss as number | undefined;
+    const loopX = th.map((t) => X * Math.sin(t));
+    const loopF = ks === undefined || Ks === undefined || Kl === undefined
+      ? th.map((t) => damperForce(law, X * omega * Math.cos(t), omega))
+      : th.map((t) => Ks * X * Math.sin(t) + Kl * X * Math.cos(t));
     return [
       {
         id: 'loop', title: 'Force–displacement loop',
         x: { label: 'Stroke x', kind: 'length' }, y: { label: 'Damper force F', kind: 'force' },
-        series: [{ label: 'F(x) over one cycle', x: loopX, y: loopF, tone: 0 }],
+        series: [{ label: ks === undefined ? 'F(x) over one cycle' : 'F(x) of damper and series spring (first harmonic)', x: loopX, y: loopF, tone: 0 }],
         summary: `One cycle of stroke ±${q(X, 'length', 3)} at ${q(omega / (2 * Math.PI), 'frequency', 3)}: the loop encloses E_D = ${q(E, 'energy')}; peak force ${q(Fmax, 'force')}.`,
       },
-      {
-        id: 'fv', title: 'Force–velocity curve',
-        x: { label: 'Stroke velocity v (+ rebound)', kind: 'velocity' }, y: { label: 'Damper force F', kind: 'force' },
-        series: [{ label: `${law.kind} law`, x: vs, y: fv, tone: 1 }],
-        summary: `Force of the ${law.kind} law from −${q(V, 'velocity', 3)} to +${q(V, 'velocity', 3)} (positive = rebound); largest magnitude ${q(Fmax, 'force')}.`,
-      },
+      lawChart(law, vd > 0 ? vd : X * omega, omega),
     ];
   },
   verification: [
@@ -84,7 +99,7 @@ export const energyPerCycle = defineCalculator({
     },
     {
       name: 'Power-law damper C = 800 N·(s/m)^0.5, α = 0.5, same motion: P̄ = 50.911 W',
-      inputs: { law: 'power', c: 800, alpha: 0.5, X: 0.025, f: 1.5 },
+      inputs: { law: 'power', Fref: 800, vref: 1, alpha: 0.5, X: 0.025, f: 1.5 },
       expected: { P: 50.911 },
       tolerance: 1e-4,
       why: 'λ(α) formula from memory, value computed from it to 5 s.f. and confirmed by quadrature',
@@ -102,7 +117,7 @@ export const energyPerCycle = defineCalculator({
     },
     {
       name: 'Hysteretic η = 0.1 on k = 100 kN/m, X = 10 mm, ω = 50 rad/s: E = πηkX² = π J, c_eq = ηk/ω = 200 N·s/m',
-      inputs: { law: 'hysteretic', eta: 0.1, k: 1e5, X: 0.01, f: 50 / (2 * Math.PI) },
+      inputs: { law: 'hysteretic', eta: 0.1, kh: 1e5, X: 0.01, f: 50 / (2 * Math.PI) },
       expected: { E: Math.PI, ceq: 200 },
       tolerance: 1e-12,
       why: 'closed form, same arithmetic',
@@ -118,10 +133,24 @@ export const energyPerCycle = defineCalculator({
       source: { key: 'chopra2017', locator: '§3.9, equivalent viscous damping (from memory)' },
       provenance: 'closed form',
     },
+    {
+      name: 'Linear c = 1 MN·s/m in series with k_s = 10 MN/m at 1 Hz (ωτ = 0.6283): K′ = 2.830 MN/m, K″ = 4.505 MN/m, c_eq = 0.717 MN·s/m',
+      inputs: { law: 'linear', c: 1e6, ks: 1e7, X: 0.01, f: 1 },
+      expected: { Kstorage: 2.8304e6, Kloss: 4.5048e6, ceq: 7.1696e5, E: Math.PI * 4.5048e6 * 1e-4 },
+      tolerance: 1e-4,
+      why: 'Maxwell closed form K′ = k_s(ωτ)²/(1+(ωτ)²), K″ = k_s·ωτ/(1+(ωτ)²), c_eq = K″/ω, worked by hand to 5 s.f.',
+      source: { key: 'christopoulos2006', locator: 'ch. on fluid viscous dampers, Maxwell model (from memory)' },
+      provenance: 'closed form',
+    },
   ],
   sources: [
+    { key: 'christopoulos2006', locator: 'Maxwell model of a viscous damper on a flexible brace (from memory)' },
     { key: 'chopra2017', locator: 'eq. 3.8.1 (published); §3.9–3.10 (from memory)' },
     { key: 'fema274', locator: '§9.3, fluid viscous devices (from memory)' },
     { key: 'dixon2007', locator: 'damper characteristics, bilinear tuning (from memory)' },
   ],
+  study: {
+    inputs: { X: 'strokeAmplitude', f: 'strokeFrequency', ...lawStudy(LAW) },
+    publishes: { P: 'meanPower' },
+  },
 });

@@ -8,7 +8,7 @@ import { recordCheck } from './recordCheck.ts';
  * `dampbook calc <id> --in key=value … [--json]`: SI values (or "25 lb"); a missing required or
  * invalid input exits non-zero naming the input and its allowed range.
  */
-export function calc(args: ParsedArgs, out: (s: string) => void): number {
+export function calc(args: ParsedArgs, out: (s: string) => void, err: (s: string) => void = () => {}): number {
   if (args.flags.has('record')) {
     if (args.inputs.length) throw new UsageError('--in is not read with --record (the record holds the inputs)');
     return recordCheck(args, out);
@@ -19,6 +19,7 @@ export function calc(args: ParsedArgs, out: (s: string) => void): number {
   const def = getCalculator(id);
   if (!def) throw new UsageError(`unknown calculator '${id}'; known: ${calculatorIds().join(', ')}`);
   const read = readInputs(def, args.inputs);
+  for (const n of read.notes) err(`dampbook: note: ${n}`);
   const r = evaluateInputs(def, read);
   const outputs = Object.fromEntries(def.outputs.filter((o) => r.outputs[o.key] !== undefined).map((o) => [o.key, r.outputs[o.key]]));
   if (args.flags.has('json')) {

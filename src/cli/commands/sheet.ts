@@ -1,6 +1,7 @@
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { getCalculator } from '../../calculators/registry.ts';
+import { isLegacyLawKey } from '../../calculators/damperLaw/migrate.ts';
 import { checkBase, findPage, printSheet, SheetError, type SheetFields, type SheetText } from '../../sheets/print.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
 import { evaluateInputs, readInputs, summariseText, textLabel } from '../inputs.ts';
@@ -15,7 +16,7 @@ import { evaluateInputs, readInputs, summariseText, textLabel } from '../inputs.
  * text put into its field) and the sheet is refused unless the page computes with them. Each
  * text input is printed with its file name, rows and SHA-256.
  */
-export async function sheet(args: ParsedArgs, out: (s: string) => void): Promise<number> {
+export async function sheet(args: ParsedArgs, out: (s: string) => void, err: (s: string) => void = () => {}): Promise<number> {
   const page = args.positionals[1];
   if (!page) throw new UsageError('sheet needs a page id or path, e.g. dampbook sheet sdof --pdf sdof.pdf');
   if (args.positionals.length > 2) throw new UsageError(`sheet takes one page; also given: ${args.positionals.slice(2).join(' ')}`);
@@ -33,17 +34,19 @@ export async function sheet(args: ParsedArgs, out: (s: string) => void): Promise
   // the same reading and checks as calc, for every calculator on the page
   const defs = built.calculators.map((id) => getCalculator(id)).filter((d) => d !== undefined);
   const keys = new Set(defs.flatMap((d) => d.inputs.map((i) => i.key)));
-  const unknown = args.inputs.map(([k]) => k).filter((k) => !keys.has(k));
+  const unknown = args.inputs.map(([k]) => k).filter((k) => !keys.has(k) && !defs.some((d) => isLegacyLawKey(d, k)));
   if (unknown.length) throw new SheetError(`the page has no input ${unknown.map((k) => `'${k}'`).join(', ')}; inputs: ${[...keys].join(', ') || 'none'}`);
   const address: [string, string][] = [];
   const texts: SheetText[] = [];
   const expect: Record<string, Record<string, number | string>> = {};
   for (const def of defs) {
-    const mine = args.inputs.filter(([k]) => def.inputs.some((i) => i.key === k));
+    const mine = args.inputs.filter(([k]) => def.inputs.some((i) => i.key === k) || isLegacyLawKey(def, k));
     const read = readInputs(def, mine);
+    for (const n of read.notes) err(`dampbook: note: ${n}`);
     const r = evaluateInputs(def, read);
     expect[def.id] = Object.fromEntries(Object.entries(r.values).filter((e): e is [string, number | string] => e[1] !== undefined));
-    for (const [k] of mine) {
+    // the keys given, after old damper-law keys were mapped to the canonical ones
+    for (const k of Object.keys(read.raw)) {
       const v = r.values[k];
       const input = def.inputs.find((i) => i.key === k)!;
       if (v === undefined) continue; // an input that does not apply under the chosen options

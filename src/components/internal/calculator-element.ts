@@ -5,7 +5,7 @@
  * inputs in the page URL, and hands charts to the chart element. No calculator logic here:
  * everything comes from the definition.
  */
-import { evaluate, inputOrder, isActive, siOnly } from '../../calculators/evaluate.ts';
+import { evaluate, inputOrder, isActive } from '../../calculators/evaluate.ts';
 import { feedQuery, urlValue } from '../../calculators/feeds.ts';
 import type { CalculatorDefinition, Outputs, Result, Values } from '../../calculators/types.ts';
 import { DampbookError, InputRangeError } from '../../core/errors.ts';
@@ -255,10 +255,7 @@ export class CalculatorElement extends HTMLElement {
     for (const def of this.calc!.inputs) {
       if (def.kind === 'choice' || def.kind === 'text') continue;
       const sel = this.unitSelect(def.key);
-      // a field that takes SI base units only for the current choice (siOnlyWhen) stays in SI
-      const gate = def.siOnlyWhen;
-      const pinned = gate !== undefined && siOnly(def, { [gate.key]: this.control(gate.key)?.value });
-      const want = pinned ? displayUnit(def.kind, 'SI').id : displayUnit(def.kind, system).id;
+      const want = displayUnit(def.kind, system).id;
       if (sel && sel.value !== want && [...sel.options].some((o) => o.value === want)) {
         sel.value = want;
         this.convertField(sel);

@@ -2,7 +2,7 @@
  * Reading and checking one field of the widget, in the reader's units. Pure (no DOM): the
  * element passes the field's text and unit id, and gets an SI value or a message for the field.
  */
-import { checkInput, MAX_NUMBER_TEXT, rangeOf, siOnly } from '../../calculators/evaluate.ts';
+import { checkInput, MAX_NUMBER_TEXT, rangeOf } from '../../calculators/evaluate.ts';
 import type { InputDef, NumberInput, Values } from '../../calculators/types.ts';
 import type { QuantityKind } from '../../core/units/index.ts';
 import { InputRangeError } from '../../core/errors.ts';
@@ -85,9 +85,6 @@ export function readField(def: InputDef, text: string, unitId: string | undefine
       if (!typed || typed.unit === '') return { ok: false, message: `Not a number. Type digits, e.g. 12.5 or 1.2e3, or a number with a unit of this field (${unit.symbol || 'no unit'}).` };
       n = Number(typed.number);
       unit = findUnit(def.kind, typed.unit);
-    }
-    if (siOnly(def, values) && def.siOnlyWhen && unit.factor !== 1) {
-      return { ok: false, message: `Choose the SI unit for this field: ${def.siOnlyWhen.why}` };
     }
     const si = toSI(n, unit);
     return { ok: true, value: checkInput(def, si, values, true) };

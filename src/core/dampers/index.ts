@@ -1,8 +1,9 @@
 /** Damper laws and what they do under harmonic and Gaussian random motion: public API. */
-export { DAMPER_LAW_KINDS, type DamperLaw, type DamperLawKind } from './laws.ts';
+export { ALPHA_RANGE, DAMPER_LAW_KINDS, type DamperLaw, type DamperLawKind } from './laws.ts';
 export { validateLaw } from './validateLaw.ts';
 export { damperForce, lawBreakpoints } from './damperForce.ts';
 export { lambdaAlpha } from './lambdaAlpha.ts';
 export { energyPerCycle, energyPerCycleQuadrature } from './energyPerCycle.ts';
 export { harmonicDuty, equivalentDampingRatio, type HarmonicDuty } from './harmonicDuty.ts';
 export { gaussianMomentFactor, gaussianMeanPower } from './gaussianDuty.ts';
+export { maxwellStiffness, seriesHarmonic, type MaxwellStiffness, type SeriesHarmonic } from './seriesStiffness.ts';

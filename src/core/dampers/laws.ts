@@ -28,4 +28,12 @@ export type DamperLaw =
 
 export type DamperLawKind = DamperLaw['kind'];
 
+/**
+ * The one range of the power-law velocity exponent α accepted anywhere in the handbook (inputs,
+ * core validation, road and structural duty). Fluid viscous dampers are made with α ≈ 0.3–1
+ * (common practice, no source); below 0.05 a power law is a friction damper in all but name and the
+ * time simulation's regularisation dominates, above 2 no damper is built.
+ */
+export const ALPHA_RANGE = { min: 0.05, max: 2 } as const;
+
 export const DAMPER_LAW_KINDS: readonly DamperLawKind[] = ['linear', 'power', 'coulomb', 'bilinear', 'hysteretic'];

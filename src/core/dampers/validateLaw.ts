@@ -1,5 +1,5 @@
 import { NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
-import type { DamperLaw } from './laws.ts';
+import { ALPHA_RANGE, type DamperLaw } from './laws.ts';
 
 /** Checks every parameter of a law; throws InputRangeError naming the parameter. */
 export function validateLaw(law: DamperLaw): DamperLaw {
@@ -9,7 +9,7 @@ export function validateLaw(law: DamperLaw): DamperLaw {
       break;
     case 'power':
       requireInRange('c', law.C, NON_NEGATIVE, 'N·(s/m)^α');
-      requireInRange('alpha', law.alpha, { min: 0, max: 2, minExclusive: true });
+      requireInRange('alpha', law.alpha, ALPHA_RANGE);
       break;
     case 'coulomb':
       requireInRange('Ff', law.Ff, NON_NEGATIVE, 'N');
@@ -17,13 +17,13 @@ export function validateLaw(law: DamperLaw): DamperLaw {
     case 'bilinear':
       requireInRange('c1', law.rebound.c1, NON_NEGATIVE, 'N·s/m');
       requireInRange('c2', law.rebound.c2, NON_NEGATIVE, 'N·s/m');
-      requireInRange('c1Compression', law.compression.c1, NON_NEGATIVE, 'N·s/m');
-      requireInRange('c2Compression', law.compression.c2, NON_NEGATIVE, 'N·s/m');
+      requireInRange('c1c', law.compression.c1, NON_NEGATIVE, 'N·s/m');
+      requireInRange('c2c', law.compression.c2, NON_NEGATIVE, 'N·s/m');
       requireInRange('vknee', law.vknee, POSITIVE, 'm/s');
       break;
     case 'hysteretic':
       requireInRange('eta', law.eta, { min: 0, max: 10 });
-      requireInRange('k', law.k, POSITIVE, 'N/m');
+      requireInRange('kh', law.k, POSITIVE, 'N/m');
       break;
   }
   return law;

@@ -2,7 +2,7 @@
  * Damper duty of a quarter car on an ISO 8608 road: RMS responses and mean damper power by
  * frequency-domain integration, with the white-velocity closed forms beside them when w = 2.
  */
-import { gaussianMomentFactor } from '../dampers/index.ts';
+import { ALPHA_RANGE, gaussianMomentFactor } from '../dampers/index.ts';
 import { POSITIVE, requireInRange } from '../errors.ts';
 import { checkQuarterCar, type QuarterCar } from './quarterCar.ts';
 import { damperVelocityVariance, quarterCarRandom } from './quarterCarRandom.ts';
@@ -62,7 +62,7 @@ export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: Ro
   if (damper.kind === 'linear') c = damper.c;
   else {
     requireInRange('C', damper.C, POSITIVE, 'N·(s/m)^α');
-    requireInRange('alpha', damper.alpha, { min: 0.05, max: 2 }, '');
+    requireInRange('alpha', damper.alpha, ALPHA_RANGE, '');
     checkQuarterCar({ ...car, c: 1 });
     const sig = (cc: number) => Math.sqrt(damperVelocityVariance({ ...car, c: cc }, road));
     const lin = statisticalLinearisation(damper.C, damper.alpha, sig, damper.C * gaussianMomentFactor(damper.alpha) * 0.3 ** (damper.alpha - 1));

@@ -2,7 +2,7 @@
  * Fluid viscous dampers in the diagonal braces of a storey: energy per cycle, supplemental
  * damping ratio by the energy method, mean power and adiabatic temperature rise per event.
  */
-import { lambdaAlpha } from '../dampers/index.ts';
+import { ALPHA_RANGE, lambdaAlpha } from '../dampers/index.ts';
 import { NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
 
 export interface StoreyDampers {
@@ -52,7 +52,7 @@ export interface StoreyDamperResult {
  */
 export function storeyDampers(d: StoreyDampers): StoreyDamperResult {
   requireInRange('C', d.C, POSITIVE, 'N·(s/m)^α');
-  requireInRange('alpha', d.alpha, { min: 0.05, max: 2 }, '');
+  requireInRange('alpha', d.alpha, ALPHA_RANGE, '');
   requireInRange('n', d.n, { min: 1, max: 1000 }, '');
   requireInRange('theta', d.theta, { min: 0, max: Math.PI / 2, maxExclusive: true }, 'rad');
   requireInRange('drift', d.drift, POSITIVE, 'm');

@@ -4,3 +4,4 @@ export { timeDomainLaw, POWER_LAW_LINEAR_FRACTION, POWER_LAW_RATE_CAP, type Time
 export { stickRelease } from './stickRelease.ts';
 export { RunRecorder, type SimulationHistory } from './recorder.ts';
 export { simulateSdof, type SimulationOptions, type SimulationResult } from './simulateSdof.ts';
+export { seriesLaw, type SeriesLaw } from './seriesLaw.ts';

@@ -21,6 +21,8 @@ export interface SdofModel {
   readonly excitation: Excitation;
   readonly x0: number; // m
   readonly v0: number; // m/s
+  /** Series stiffness between the damper and the mass (Maxwell element), N/m; undefined = rigid. */
+  readonly ks?: number;
 }
 
 /**
@@ -46,6 +48,7 @@ export function validateModel(model: SdofModel): void {
   requireInRange('x0', model.x0, { min: -1e3, max: 1e3 }, 'm');
   requireInRange('v0', model.v0, { min: -1e4, max: 1e4 }, 'm/s');
   validateLaw(model.law);
+  if (model.ks !== undefined) requireInRange('ks', model.ks, POSITIVE, 'N/m');
   const e = model.excitation;
   if (e.kind === 'force') { requireInRange('F0', e.F0, NON_NEGATIVE, 'N'); requireInRange('fExc', e.omega, POSITIVE, 'rad/s'); }
   if (e.kind === 'base') { requireInRange('Y', e.Y, NON_NEGATIVE, 'm'); requireInRange('fExc', e.omega, POSITIVE, 'rad/s'); }

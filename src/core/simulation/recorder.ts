@@ -11,8 +11,8 @@ export interface SimulationHistory {
   readonly input: number[]; // J
 }
 
-/** State layout of the simulated system: z, ż, E_D, W. */
-export const Z = 0, V = 1, ED = 2, W = 3;
+/** State layout of the simulated system: z, ż, E_D, W, and the damper's own displacement x_d with a series spring. */
+export const Z = 0, V = 1, ED = 2, W = 3, XD = 4;
 
 /**
  * Watches a simulation step by step: keeps the energy-audit residual
@@ -32,12 +32,15 @@ export class RunRecorder {
   xLast = 0;
   edAtLastFrom = 0;
   private next = 0;
-  private readonly tmp = new Float64Array(4);
+  // the dense output fills as many components as the buffer has: sized to the state (4, or 5 with a series spring)
+  private tmp = new Float64Array(4);
 
   constructor(
     private readonly m: number, private readonly k: number, readonly E0: number,
     private readonly tEnd: number, private readonly samples: number, readonly tLastFrom: number,
     private readonly forceAt: (t: number, y: ArrayLike<number>) => number,
+    /** Energy stored besides ½mż² + ½kz² (a series spring), J. */
+    private readonly extraStored: (y: ArrayLike<number>) => number = () => 0,
   ) {
     this.maxStored = E0;
   }
@@ -49,12 +52,12 @@ export class RunRecorder {
   private sample(t: number, y: ArrayLike<number>): void {
     const h = this.history;
     h.t.push(t); h.x.push(y[Z]!); h.v.push(y[V]!); h.force.push(this.forceAt(t, y));
-    h.stored.push(0.5 * this.m * y[V]! ** 2 + 0.5 * this.k * y[Z]! ** 2); h.dissipated.push(y[ED]!); h.input.push(y[W]!);
+    h.stored.push(0.5 * this.m * y[V]! ** 2 + 0.5 * this.k * y[Z]! ** 2 + this.extraStored(y)); h.dissipated.push(y[ED]!); h.input.push(y[W]!);
   }
 
   /** Audits one state. */
   audit(t: number, y: ArrayLike<number>): void {
-    const stored = 0.5 * this.m * y[V]! ** 2 + 0.5 * this.k * y[Z]! ** 2;
+    const stored = 0.5 * this.m * y[V]! ** 2 + 0.5 * this.k * y[Z]! ** 2 + this.extraStored(y);
     this.residual = Math.max(this.residual, Math.abs(stored + y[ED]! - y[W]! - this.E0));
     this.maxStored = Math.max(this.maxStored, stored);
     this.maxInput = Math.max(this.maxInput, Math.abs(y[W]!));
@@ -74,6 +77,7 @@ export class RunRecorder {
   /** An accepted integrator step. */
   step(s: AcceptedStep): void {
     const h = s.t1 - s.t0;
+    if (this.tmp.length !== s.y0.length) this.tmp = new Float64Array(s.y0.length);
     const tmp = this.tmp;
     for (let q = 1; q <= 3; q++) { s.interpolate(0.25 * q, tmp); this.audit(s.t0 + 0.25 * q * h, tmp); }
     if (s.y0[V]! * s.y1[V]! < 0) {

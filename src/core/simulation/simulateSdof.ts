@@ -2,7 +2,8 @@ import type { DamperLaw } from '../dampers/index.ts';
 import { ComputationError, requireInRange } from '../errors.ts';
 import { integrateAdaptive, type OdeStats, type OdeSystem } from '../ode/index.ts';
 import { effectiveLoad, validateModel, type SdofModel } from './model.ts';
-import { ED, RunRecorder, V, W, Z, type SimulationHistory } from './recorder.ts';
+import { ED, RunRecorder, V, W, XD, Z, type SimulationHistory } from './recorder.ts';
+import { seriesLaw } from './seriesLaw.ts';
 import { stickRelease } from './stickRelease.ts';
 import { timeDomainLaw } from './timeDomainLaw.ts';
 
@@ -63,7 +64,9 @@ export interface SimulationResult {
  * split at every velocity reversal (located on the dense output); there the mass sticks while
  * |p − kz| ≤ F_f and slides again, in the direction of p − kz, when that force exceeds F_f.
  * Hysteretic damping is replaced by c = ηk/ω_ref, and a power law with α < 1 is made linear below
- * a small speed v_ε (see timeDomainLaw). For base excitation z is
+ * a small speed v_ε (see timeDomainLaw). With a series stiffness k_s (model.ks) the damper's own
+ * displacement x_d is a fifth state moved by the law's inverse, the damper force is k_s(z − x_d)
+ * and ½k_s(z − x_d)² joins the stored energy of the audit (see seriesLaw). For base excitation z is
  * the relative motion, E_k = ½mż² its kinetic energy and W the work of the inertia load −mÿ.
  *
  * @example simulateSdof({ m: 1, k: 100, law: { kind: 'linear', c: 4 }, excitation: { kind: 'none' }, x0: 0.01, v0: 0 }, { duration: 1 }).xEnd // −1.36092e-3 m
@@ -87,30 +90,36 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
   const L = Math.max(Math.abs(model.x0), Math.abs(model.v0) / wn, pAmp / k, 1e-9);
   const vScale = L * Math.max(wn, omegaRef);
   const Escale0 = 0.5 * k * L * L;
-  const atol = [rtol * L, rtol * vScale, rtol * Escale0, rtol * Escale0];
-  const td = timeDomainLaw(model.law, omegaRef, vScale, m, Math.max(wn, omegaRef));
+  const ks = model.ks;
+  const atol = [rtol * L, rtol * vScale, rtol * Escale0, rtol * Escale0, rtol * L];
+  const sl = ks === undefined ? undefined : seriesLaw(model.law, ks, omegaRef, vScale, Math.max(wn, omegaRef));
+  const td = sl ? { law: sl.law, force: (v: number) => v, vLinear: sl.vLinear } : timeDomainLaw(model.law, omegaRef, vScale, m, Math.max(wn, omegaRef));
   const law = td.law;
   const damper = td.force;
+  // with a series spring the damper force is the spring's, k_s(z − x_d), and x_d moves at the law's inverse
+  const springForce = (y: ArrayLike<number>) => ks! * (y[Z]! - y[XD]!);
+  const seriesEnergy = ks === undefined ? undefined : (y: ArrayLike<number>) => 0.5 * ks * (y[Z]! - y[XD]!) ** 2;
   const coulomb = law.kind === 'coulomb' ? law.Ff : 0;
   const periodRef = (2 * Math.PI) / omegaRef;
   const hMax = Math.min((2 * Math.PI) / wn, periodRef) / 8;
 
   let slip = 0; // Coulomb: +1/−1 sliding direction, 0 stuck
   const forceAt = (t: number, y: ArrayLike<number>): number => {
+    if (sl) return springForce(y);
     if (!coulomb) return damper(y[V]!);
     return slip !== 0 ? slip * coulomb : p(t) - k * y[Z]!; // while stuck the friction holds p − kz
   };
   const E0 = 0.5 * m * model.v0 ** 2 + 0.5 * k * model.x0 ** 2;
-  const rec = new RunRecorder(m, k, E0, tEnd, Math.max(0, Math.floor(opts.samples ?? 0)), tEnd - periodRef, forceAt);
+  const rec = new RunRecorder(m, k, E0, tEnd, Math.max(0, Math.floor(opts.samples ?? 0)), tEnd - periodRef, forceAt, seriesEnergy);
   const sys: OdeSystem = {
-    dim: 4,
+    dim: sl ? 5 : 4,
     f(t, y, dy) {
       const v = y[V]!;
-      const fd = coulomb ? slip * coulomb : damper(v);
+      const fd = sl ? springForce(y) : coulomb ? slip * coulomb : damper(v);
       const load = p(t);
       dy[Z] = v;
       dy[V] = (load - fd - k * y[Z]!) / m;
-      dy[ED] = fd * v;
+      if (sl) { dy[XD] = sl.velocity(fd); dy[ED] = fd * dy[XD]!; } else dy[ED] = fd * v;
       dy[W] = load * v;
     },
   };
@@ -120,7 +129,8 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
   };
 
   let t = 0;
-  let y: Float64Array = Float64Array.from([model.x0, model.v0, 0, 0]);
+  // a series spring starts relaxed: the damper holds the initial displacement
+  let y: Float64Array = Float64Array.from(sl ? [model.x0, model.v0, 0, 0, model.x0] : [model.x0, model.v0, 0, 0]);
   if (coulomb) slip = model.v0 !== 0 ? Math.sign(model.v0) : decide(0, model.x0);
   rec.start(y);
   const stats = { accepted: 0, rejected: 0, evaluations: 0, segments: 0 };
@@ -139,7 +149,7 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
       continue;
     }
     const left = MAX_STEPS - stats.accepted - stats.rejected;
-    const budgetError = (at: number) => new ComputationError(`simulation: more than ${MAX_STEPS.toLocaleString('en-GB').replace(/,/g, ' ')} integration steps in all before t = ${tEnd} s (stopped at t = ${at.toPrecision(6)} s, ${stats.segments} stick–slip phases): shorten the duration or lower the excitation frequency`);
+    const budgetError = (at: number) => new ComputationError(`simulation: more than ${MAX_STEPS.toLocaleString('en-GB').replace(/,/g, ' ')} integration steps in all before t = ${tEnd} s (stopped at t = ${at.toPrecision(6)} s, ${stats.segments} stick–slip phases): shorten the duration or lower the excitation frequency${ks !== undefined ? '; a series stiffness far stiffer than the damper (small c/k_s) needs tiny steps: leave ks empty for a rigid connection' : ''}`);
     if (left <= 0) throw budgetError(t);
     let sol;
     try {
@@ -165,7 +175,7 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
   const energyScale = Math.max(E0, rec.maxStored, rec.maxInput);
   return {
     history: rec.history, E0, dissipated: y[ED]!, input: y[W]!,
-    finalEnergy: 0.5 * m * y[V]! ** 2 + 0.5 * k * y[Z]! ** 2, xEnd: y[Z]!, vEnd: y[V]!,
+    finalEnergy: 0.5 * m * y[V]! ** 2 + 0.5 * k * y[Z]! ** 2 + (seriesEnergy ? seriesEnergy(y) : 0), xEnd: y[Z]!, vEnd: y[V]!,
     residual: rec.residual, energyScale, closure: energyScale > 0 ? rec.residual / energyScale : 0,
     xMax: rec.xMax, vMax: rec.vMax, forceMax: rec.forceMax, xLastPeriod: rec.xLast,
     powerLastPeriod: (y[ED]! - rec.edAtLastFrom) / (tEnd - Math.max(0, rec.tLastFrom)),

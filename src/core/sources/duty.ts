@@ -3,6 +3,8 @@ import type { Source } from './source.ts';
 export const duty = {
   dixon2007: { kind: 'book', citation: 'J. C. Dixon, The Shock Absorber Handbook, 2nd ed., Wiley, 2007.' },
   fema356: { kind: 'report', citation: 'FEMA 356, Prestandard and Commentary for the Seismic Rehabilitation of Buildings, Federal Emergency Management Agency, 2000.' },
+  christopoulos2006: { kind: 'book', citation: 'C. Christopoulos and A. Filiatrault, Principles of Passive Supplemental Damping and Seismic Isolation, IUSS Press, Pavia, 2006.' },
+  lakes2009: { kind: 'book', citation: 'R. Lakes, Viscoelastic Materials, Cambridge University Press, 2009.' },
   fema274: { kind: 'report', citation: 'FEMA 274, NEHRP Commentary on the Guidelines for the Seismic Rehabilitation of Buildings, Federal Emergency Management Agency, 1997.' },
   iso8608: { kind: 'standard', citation: 'ISO 8608:2016, Mechanical vibration — Road surface profiles — Reporting of measured data, 2nd ed., International Organization for Standardization, 2016.' },
   wong2008: { kind: 'book', citation: 'J. Y. Wong, Theory of Ground Vehicles, 4th ed., Wiley, 2008.' },

@@ -15,8 +15,8 @@ describe('damper-simulation calculator', () => {
 
   it('says when hysteretic damping is simulated as its viscous equivalent', () => {
     const r = run({ law: 'hysteretic', eta: 0.2 });
-    expect(r.warnings.join(' ')).toMatch(/ηk\/ω/);
-    // c = ηk/ω = 0.2 · 16000 / (2π · 1.5) (Chopra, Dynamics of Structures 5th ed. §3.10, from memory)
+    expect(r.warnings.join(' ')).toMatch(/ηk_h\/ω/);
+    // c = ηk_h/ω = 0.2 · 16000 / (2π · 1.5), k_h at its default 16 kN/m (Chopra, Dynamics of Structures 5th ed. §3.10, from memory)
     expect(r.outputs.ceqHyst as number).toBeCloseTo((0.2 * 16000) / (3 * Math.PI), 9);
   });
 
@@ -25,10 +25,10 @@ describe('damper-simulation calculator', () => {
     expect(run({ law: 'coulomb', Ff: 5000 }).outputs.stuckTime).toBe(10);
   });
 
-  it('draws four charts with the energy balance flat at E₀', () => {
+  it('draws four charts and the law\'s force–velocity curve, with the energy balance flat at E₀', () => {
     const r = run({ law: 'bilinear', excitation: 'none', x0: 0.05 });
     const charts = damperSimulation.charts!(r.values);
-    expect(charts.map((c) => c.id)).toEqual(['displacement', 'force', 'loop', 'energy']);
+    expect(charts.map((c) => c.id)).toEqual(['displacement', 'force', 'loop', 'energy', 'law']);
     const balance = charts[3]!.series[3]!.y;
     const E0 = r.outputs.E0 as number;
     for (const b of balance) expect(Math.abs(b - E0)).toBeLessThan(1e-6 * E0);
