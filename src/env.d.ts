@@ -11,4 +11,6 @@ declare module '*.astro' {
 declare module 'virtual:dampbook/client' {
   const urls: Readonly<Record<import('./build/client-scripts.ts').ClientEntry, string>>;
   export default urls;
+  /** Every chunk URL of a lazy module (src/build/client-scripts.ts LAZY_PRELOADS). */
+  export const preloads: Readonly<Record<import('./build/client-scripts.ts').LazyPreload, readonly string[]>>;
 }
