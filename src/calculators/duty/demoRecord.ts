@@ -39,3 +39,20 @@ export function sineRecord(o: { X: number; f: number; cycles: number; rate: numb
   }
   return rows.join('\n');
 }
+
+/**
+ * A synthetic loop record for verification cases: x = X·sin(2πft) through F = k·x + c·ẋ
+ * (+ F_f·sgn ẋ), columns time [s], x [mm], force [N], an integer number of samples per cycle.
+ */
+export function kelvinVoigtRecord(o: { k: number; c: number; Ff?: number; X: number; f: number; cycles: number; perCycle: number }): string {
+  const w = 2 * Math.PI * o.f;
+  const rows = ['time [s],x [mm],force [N]'];
+  for (let i = 0; i <= o.cycles * o.perCycle; i++) {
+    const t = i / (o.perCycle * o.f);
+    const x = o.X * Math.sin(w * t);
+    const v = o.X * w * Math.cos(w * t);
+    const F = o.k * x + o.c * v + (o.Ff ?? 0) * Math.sign(v);
+    rows.push(`${t.toPrecision(15)},${(x * 1000).toPrecision(15)},${F.toPrecision(15)}`);
+  }
+  return rows.join('\n');
+}
