@@ -15,7 +15,7 @@ describe('recorded-motion: the TW-402 Hall C prototype loop record (demo data)',
   it('gives the numbers the page quotes, and hides the law under a measured force', () => {
     const calc = getCalculator('recorded-motion')!;
     const r = evaluate(calc, { csv: file });
-    const o = r.outputs as Record<string, number>;
+    const o = r.outputs as Record<string, number> & { Eloop: number; F0: number; keff: number; EloopDevMax: number; loopFullness: number };
     // page text, 3–4 significant figures (demo numbers, common practice, no source)
     expect(o.cycles).toBe(4);
     expect(Number((o.Eloop / 1000).toFixed(2))).toBe(10.54);
