@@ -26,11 +26,15 @@ export function rangeOf(def: Extract<InputDef, { min: number }>): Range {
   return { min: def.min, max: def.max, minExclusive: def.minExclusive, maxExclusive: def.maxExclusive };
 }
 
-/** True when an input applies under the current choices (see `when`). */
+function holds(cond: { readonly key: string; readonly is: readonly string[] } | undefined, values: Values): boolean {
+  if (!cond) return true;
+  const v = values[cond.key];
+  return typeof v === 'string' && cond.is.includes(v);
+}
+
+/** True when an input applies under the current choices (its `when` and `alsoWhen` both hold). */
 export function isActive(def: InputDef, values: Values): boolean {
-  if (!def.when) return true;
-  const v = values[def.when.key];
-  return typeof v === 'string' && def.when.is.includes(v);
+  return holds(def.when, values) && holds(def.alsoWhen, values);
 }
 
 /**

@@ -5,6 +5,12 @@
 import type { Provenance, SourceRef } from '../core/sources/index.ts';
 import type { QuantityKind } from '../core/units/index.ts';
 
+/** A choice input holding one of these values. */
+export interface Condition {
+  readonly key: string;
+  readonly is: readonly string[];
+}
+
 export interface NumberInput {
   readonly key: string;
   readonly label: string;
@@ -21,7 +27,9 @@ export interface NumberInput {
   /** When true the input may be left empty: compute receives undefined. */
   readonly optional?: boolean;
   /** Only shown when another (choice) input has one of these values. */
-  readonly when?: { readonly key: string; readonly is: readonly string[] };
+  readonly when?: Condition;
+  /** A second condition: the input applies only when both hold (see `onlyWhen`). */
+  readonly alsoWhen?: Condition;
 }
 
 export interface ChoiceOption<V extends string = string> {
@@ -37,7 +45,9 @@ export interface ChoiceInput<V extends string = string> {
   readonly default: V;
   readonly help: string;
   readonly required?: boolean;
-  readonly when?: { readonly key: string; readonly is: readonly string[] };
+  readonly when?: Condition;
+  /** A second condition: the input applies only when both hold (see `onlyWhen`). */
+  readonly alsoWhen?: Condition;
 }
 
 /**
@@ -55,7 +65,9 @@ export interface TextInput {
   readonly help: string;
   readonly rows?: number;
   readonly required?: boolean;
-  readonly when?: { readonly key: string; readonly is: readonly string[] };
+  readonly when?: Condition;
+  /** A second condition: the input applies only when both hold (see `onlyWhen`). */
+  readonly alsoWhen?: Condition;
   /**
    * When true the page fills this input from its address (`?key=…`, as a feed link from another
    * page does), through the same checks as typing, shown as text. Keep maxLength small (a few
@@ -202,6 +214,20 @@ export interface StudyBindings {
 /** Identity with checking: keeps the literal types and catches typos in keys at compile time. */
 export function defineCalculator<const D extends CalculatorDefinition>(def: D): D {
   return def;
+}
+
+/**
+ * Adds a condition to a group of inputs (e.g. a shared damper-law block that applies only when
+ * the force is not measured): an input without `when` takes it as its `when`, one with a `when`
+ * as its `alsoWhen`. General: the widget, the sheet, the CLI and evaluate() read both through
+ * `isActive`.
+ */
+export function onlyWhen(cond: Condition, inputs: readonly InputDef[]): InputDef[] {
+  return inputs.map((d) => {
+    if (!d.when) return { ...d, when: cond };
+    if (d.alsoWhen) throw new TypeError(`calculator bug: '${d.key}' already has two conditions`);
+    return { ...d, alsoWhen: cond };
+  });
 }
 
 /** Reads a number input the definition guarantees is present. */

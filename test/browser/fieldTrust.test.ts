@@ -100,7 +100,8 @@ describe('what a link carries', () => {
     const page = await open('duty/recorded-motion/');
     const area = page.locator('db-calculator textarea').first();
     const name = await area.getAttribute('name');
-    await area.fill('t,x\n0,0\n0.01,0.001\n0.02,0.002\n0.03,0.001\n0.04,0\n0.05,-0.001\n0.06,-0.002\n0.07,-0.001\n0.08,0');
+    // with a force column: the page's default layout reads a measured force
+    await area.fill('t,x,F\n0,0,1\n0.01,0.001,1\n0.02,0.002,0\n0.03,0.001,-1\n0.04,0,-1\n0.05,-0.001,-1\n0.06,-0.002,0\n0.07,-0.001,1\n0.08,0,1');
     await settle(page);
     await expect.poll(() => new URL(page.url()).searchParams.get(`${name}.sha`)).toMatch(/^[0-9a-f]{8}$/);
     const again = await open(`duty/recorded-motion/${new URL(page.url()).search}`);

@@ -135,7 +135,7 @@ describe('the same physical results in SI and US units', () => {
         for (const inp of def.inputs) {
           if (inp.kind !== 'choice') continue;
           // a choice that shows only under another choice is varied with that one set to show it
-          const gate = inp.when ? { [inp.when.key]: inp.when.is[0]! } : {};
+          const gate = { ...(inp.when ? { [inp.when.key]: inp.when.is[0]! } : {}), ...(inp.alsoWhen ? { [inp.alsoWhen.key]: inp.alsoWhen.is[0]! } : {}) };
           for (const o of inp.options) if (o.value !== inp.default || inp.when) combos.push({ ...gate, [inp.key]: o.value });
         }
         const calcSel = `db-calculator[data-calc="${id}"]`;

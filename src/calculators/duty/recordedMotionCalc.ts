@@ -1,20 +1,27 @@
 import { MAX_POWER_BLOCKS, parseRecordedMotion, recordedMotion, type ColumnLayout } from '../../core/duty/index.ts';
 import { formatPowerProfile } from '../../core/thermal/index.ts';
-import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
-import { demoDynoRecord, sineRecord } from './demoRecord.ts';
+import { InputRangeError } from '../../core/errors.ts';
+import type { DamperLaw } from '../../core/dampers/index.ts';
+import { choice, defineCalculator, num, onlyWhen, optNum, text, type ChartSpec, type Values } from '../types.ts';
+import { demoDynoRecord, kelvinVoigtRecord, sineRecord } from './demoRecord.ts';
+import { LAW_LAYOUTS, loopCharts, loopInputs, loopOf, loopOutputs, loopResults } from './recordedMotionLoop.ts';
 import { lawFromValues, lawInputs } from '../damperLaw/inputs.ts';
 import { q } from '../quantityText.ts';
 
-type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion> };
+type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion>; law?: DamperLaw; loop: ReturnType<typeof loopOf> };
 // charts(values, result) receives the same values object compute saw: parse a long record once.
 const analysed = new WeakMap<Values, Analysis>();
 
 function analyse(values: Values): Analysis {
   const hit = analysed.get(values);
   if (hit) return hit;
-  const rec = parseRecordedMotion(text(values, 'csv'), choice<ColumnLayout>(values, 'layout'));
-  const law = rec.F ? undefined : lawFromValues(values);
-  const a = { rec, r: recordedMotion(rec, law, num(values, 'gapFactor')) };
+  const layout = choice<ColumnLayout | 'autoF'>(values, 'layout');
+  const rec = parseRecordedMotion(text(values, 'csv'), layout === 'autoF' ? 'auto' : layout);
+  if (layout === 'autoF' && !rec.F) throw new InputRangeError('layout', layout, undefined, '', 'the header names no force column: choose "from the header, force from the damper law" (auto), or tx / tv, and a damper law');
+  // the law's inputs apply only under the layouts that may lack a force column (their `alsoWhen`)
+  const law = (LAW_LAYOUTS as readonly string[]).includes(layout) ? lawFromValues(values) : undefined;
+  const r = recordedMotion(rec, rec.F ? undefined : law, num(values, 'gapFactor'));
+  const a = { rec, r, law, loop: loopOf(rec, r) };
   analysed.set(values, a);
   return a;
 }
@@ -39,11 +46,16 @@ export const recordedMotionCalc = defineCalculator({
   inputs: [
     { key: 'csv', label: 'Record (CSV)', kind: 'text', default: demoDynoRecord(), maxLength: 5_000_000, rows: 10, help: 'Header names such as "time [s]", "stroke [mm]" or "x (mm)", "v [m/s]", "force [kN]"; or a units row under the header. Delimiter , ; tab or spaces; lines starting with # are comments.' },
     { key: 'layout', label: 'Columns', kind: 'choice', options: [
-      { value: 'auto', label: 'from the header' }, { value: 'tx', label: 'time, displacement' }, { value: 'tv', label: 'time, velocity' },
+      { value: 'autoF', label: 'from the header, force measured' }, { value: 'auto', label: 'from the header, force from the damper law' },
+      { value: 'tx', label: 'time, displacement (law)' }, { value: 'tv', label: 'time, velocity (law)' },
       { value: 'txF', label: 'time, displacement, force' }, { value: 'tvF', label: 'time, velocity, force' },
-    ], default: 'auto', help: 'How to read the columns when the header does not name them.' },
+    ], default: 'autoF', help: 'How to read the columns, and where the force comes from: a measured force column (the damper law is not asked for) or the damper law. Under "from the header, force from the damper law" a force column the header names is still used, with a warning.' },
     { key: 'gapFactor', label: 'Gap threshold (× median interval)', kind: 'dimensionless', default: 5, min: 1.5, max: 1000, help: 'A sampling interval longer than this starts a new segment; nothing is differentiated or integrated across a gap.' },
-    ...lawInputs({ kinds: ['linear', 'power', 'coulomb', 'bilinear'], defaults: { law: 'linear', c: 1500, Fref: 800, vref: 1, alpha: 0.5 }, series: false }),
+    // law inputs only where the force may come from the law (measured force: hidden, not printed)
+    ...onlyWhen({ key: 'layout', is: LAW_LAYOUTS },
+      lawInputs({ kinds: ['linear', 'power', 'coulomb', 'bilinear'], defaults: { law: 'linear', c: 1500, Fref: 800, vref: 1, alpha: 0.5 }, series: false }),
+    ),
+    ...loopInputs,
   ],
   outputs: [
     { key: 'P', label: 'Mean power', kind: 'power', help: 'Energy of the record divided by the time it covers (gaps excluded).',
@@ -65,11 +77,13 @@ export const recordedMotionCalc = defineCalculator({
     { key: 'gaps', label: 'Gaps in the sampling', kind: 'dimensionless', digits: 6 },
     { key: 'forceSource', label: 'Force', kind: 'text' },
     { key: 'sampling', label: 'Sampling', kind: 'text' },
+    ...loopOutputs,
   ],
   handoffs: [{ key: 'profile', help: `Power of the record averaged over at most ${MAX_POWER_BLOCKS} equal blocks of covered time (energy kept), for the warm-up page.`, maxLength: 6000 }],
   compute(values) {
-    const { rec, r } = analyse(values);
+    const { rec, r, law, loop } = analyse(values);
     const warnings: string[] = [];
+    if (rec.F && law) warnings.push('The record has a measured force column: the chosen damper law is not used for the power (it is drawn over the measured loop). Choose "from the header, force measured" to hide it.');
     if (rec.rejected.length > 0) {
       const list = rec.rejected.slice(0, 8).map((b) => `row ${b.row}: ${b.reason}`).join('; ');
       warnings.push(`${rec.rejected.length} row${rec.rejected.length > 1 ? 's' : ''} rejected — ${list}${rec.rejected.length > 8 ? '; …' : ''}.`);
@@ -94,6 +108,8 @@ export const recordedMotionCalc = defineCalculator({
       warnings.push(`Only ${perCycle.toPrecision(3)} samples per cycle: velocity differentiated from displacement reads low, the mean power by about ${(100 * bias).toPrecision(2)} % ((ωh)²/3 for a sine); sample at ${MIN_SAMPLES_PER_CYCLE} or more per cycle to keep it below about 0.13 %.`);
     }
     const even = s.dtMax - s.dtMin <= 1e-6 * s.dtMedian;
+    const lr = loopResults(loop, rec.F !== undefined, optNum(values, 'loopTol'));
+    warnings.push(...lr.warnings);
     return {
       outputs: {
         P: r.meanPower, E: r.E, duration: r.duration, cycles: ce.length,
@@ -103,13 +119,14 @@ export const recordedMotionCalc = defineCalculator({
         rowsUsed: rec.t.length, rowsRejected: rec.rejected.length, rowsSkipped: rec.skipped, gaps: s.gaps,
         forceSource: rec.F ? 'measured' : 'from the chosen damper law',
         sampling: even ? `even, ${s.dtMedian.toPrecision(4)} s` : `uneven, ${s.dtMin.toPrecision(3)}–${s.dtMax.toPrecision(3)} s (median ${s.dtMedian.toPrecision(3)} s)`,
+        ...lr.outputs,
       },
       warnings,
       handoff: { profile },
     };
   },
   charts(values, result): ChartSpec[] {
-    const { r } = analyse(values);
+    const { rec, r, law, loop } = analyse(values);
     const vs = stride(r.t, r.v);
     const fs = stride(r.t, r.F);
     const ps = stride(r.t, r.p);
@@ -123,12 +140,13 @@ export const recordedMotionCalc = defineCalculator({
       { id: 'power', title: 'Instantaneous power', x: { label: 'Time', kind: 'time' }, y: { label: 'Power', kind: 'power' },
         series: [{ label: 'F·v', x: ps.x, y: ps.y, style: 'thin', tone: 2 }, { label: 'mean', x: [ps.x[0]!, ps.x[ps.x.length - 1]!], y: [r.meanPower, r.meanPower], style: 'dash', tone: 3 }],
         summary: `Instantaneous power F·v; mean ${q(r.meanPower, 'power')} over the record, ${q(r.E, 'energy')} in all.` },
+      ...loopCharts(rec, r, loop, law),
     ];
   },
   verification: [
     {
       name: 'Sinusoidal stroke ±25 mm at 1 Hz through a linear damper c = 1500 N·s/m: P = ½·c·ω²·X² (two cycles, 1 kHz)',
-      inputs: { csv: sineRecord({ X: 0.025, f: 1, cycles: 2, rate: 1000, columns: 'tx' }), law: 'linear', c: 1500 },
+      inputs: { csv: sineRecord({ X: 0.025, f: 1, cycles: 2, rate: 1000, columns: 'tx' }), layout: 'auto', law: 'linear', c: 1500 },
       expected: { P: 0.5 * 1500 * (2 * Math.PI) ** 2 * 0.025 ** 2, EperCycle: Math.PI * 1500 * 2 * Math.PI * 0.025 ** 2, cycles: 1 },
       tolerance: 1e-4, why: 'second-order differentiation at 1000 samples per cycle: error ≈ (ωh)²/6 ≈ 7e-6',
       source: { key: 'chopra2017', locator: 'eq. 3.8.1, E_D = πcωX²' },
@@ -136,7 +154,7 @@ export const recordedMotionCalc = defineCalculator({
     },
     {
       name: 'Velocity record through a friction damper F_f = 200 N: 4·F_f·X per cycle (X = 10 mm, 2 Hz)',
-      inputs: { csv: sineRecord({ X: 0.01, f: 2, cycles: 3, rate: 2000, columns: 'tv' }), law: 'coulomb', Ff: 200 },
+      inputs: { csv: sineRecord({ X: 0.01, f: 2, cycles: 3, rate: 2000, columns: 'tv' }), layout: 'auto', law: 'coulomb', Ff: 200 },
       expected: { EperCycle: 8, P: 16 },
       tolerance: 1e-4, why: 'trapezoid on |v| with 1000 samples per cycle; kink at v = 0 costs ~1e-6',
       source: { key: 'chopra2017', locator: '§3.10 Coulomb friction, E_D = 4F_fX (from memory)' },
@@ -152,15 +170,40 @@ export const recordedMotionCalc = defineCalculator({
     },
     {
       name: 'Power-law damper C = 800 N·(s/m)^0.5, α = 0.5, ±25 mm at 1.5 Hz: 50.911 W',
-      inputs: { csv: sineRecord({ X: 0.025, f: 1.5, cycles: 3, rate: 3000, columns: 'tx' }), law: 'power', Fref: 800, vref: 1, alpha: 0.5 },
+      inputs: { csv: sineRecord({ X: 0.025, f: 1.5, cycles: 3, rate: 3000, columns: 'tx' }), layout: 'auto', law: 'power', Fref: 800, vref: 1, alpha: 0.5 },
       expected: { P: 50.911 },
       tolerance: 2e-4, why: 'λ(0.5) closed form to 5 s.f.; |v|^0.5 kink at reversal limits the trapezoid to ~1e-5',
       source: { key: 'fema274', locator: '§9.3 fluid viscous devices, λ(α) (from memory)' },
+      provenance: 'from memory',
+    },
+    {
+      name: 'Kelvin–Voigt loop k = 2e5 N/m, c = 5000 N·s/m, ±20 mm at 1.5 Hz: k_eff = k, E = πcωX², β_eff = cω/2k, F₀ = cωX',
+      inputs: { csv: kelvinVoigtRecord({ k: 2e5, c: 5000, X: 0.02, f: 1.5, cycles: 4, perCycle: 400 }) },
+      expected: { keff: 2e5, Eloop: Math.PI * 5000 * 3 * Math.PI * 0.02 ** 2, betaEff: (5000 * 3 * Math.PI) / (2 * 2e5), F0: 5000 * 3 * Math.PI * 0.02 },
+      tolerance: 1e-4, why: '400 samples per cycle: trapezoid ∮F dx exact for kx and spectral for cẋ; extremes at the parabola vertex; F₀ interpolated to (ωh)²/8 ≈ 3e-5',
+      source: { key: 'chopra2017', locator: '§3.8, eq. 3.8.1 E_D = πcωX² and the elliptical loop of a Kelvin–Voigt element (from memory)' },
+      provenance: 'from memory',
+    },
+    {
+      name: 'Dry-friction loop (rectangle) F_f = 200 N, ±10 mm: E = 4·F_f·X, fullness 1, F₀ = F_f',
+      inputs: { csv: kelvinVoigtRecord({ k: 0, c: 0, Ff: 200, X: 0.01, f: 2, cycles: 3, perCycle: 2000 }), layout: 'txF' },
+      expected: { Eloop: 8, loopFullness: 1, F0: 200 },
+      tolerance: 2e-3, why: 'the force jumps at the reversal between two samples: the trapezoid loses about one step of 2·F_f·Δx at each end, ≈ 1e-3',
+      source: { key: 'chopra2017', locator: '§3.10 Coulomb friction, E_D = 4F_fX (from memory)' },
+      provenance: 'from memory',
+    },
+    {
+      name: 'Pure spring loop k = 1 MN/m, ±50 mm at 0.5 Hz: k_eff = k (prototype-test definition) and no loop area',
+      inputs: { csv: kelvinVoigtRecord({ k: 1e6, c: 1e-6, X: 0.05, f: 0.5, cycles: 3, perCycle: 400 }) },
+      expected: { keff: 1e6, loopFullness: 0 },
+      tolerance: 1e-6, why: 'the trapezoid closes kx exactly over a cycle; the vertex interpolation is exact for a sine sampled this finely to ~1e-8',
+      source: { key: 'asce7_16', locator: '§17.8.5.1 eq. 17.8-1 effective stiffness (from memory)' },
       provenance: 'from memory',
     },
   ],
   sources: [
     { key: 'chopra2017', locator: 'eq. 3.8.1' },
     { key: 'fornberg1988', locator: 'three-point weights on uneven grids (from memory)' },
+    { key: 'asce7_16', locator: '§17.8.5 eqs. 17.8-1, 17.8-2 effective stiffness and damping of prototype tests; §18.6 damping devices (from memory)' },
   ],
 });

@@ -17,3 +17,4 @@ export { findSegments, differentiate, type Segments } from './recordSegments.ts'
 export { blockPower, MAX_POWER_BLOCKS, type BlockPower } from './blockPower.ts';
 export { recordedMotion, type RecordedMotionResult } from './recordedMotion.ts';
 export { roadDamperPower } from './roadDamperPower.ts';
+export { loopMetrics, loopDisplacement, BETA_MIN_END_FORCE, type LoopMetrics, type CycleLoop } from './loopMetrics.ts';

@@ -19,6 +19,8 @@ export interface RecordedMotionResult {
   readonly duration: number;
   readonly meanPower: number;
   readonly cycleEnergies: number[];
+  /** Index ranges [start, end] of the detected cycles (end inclusive: the next cycle's start). */
+  readonly cycleRanges: [number, number][];
   readonly Fpeak: number;
   readonly vPeak: number;
   readonly vRms: number;
@@ -78,20 +80,21 @@ export function recordedMotion(rec: ParsedRecord, law: DamperLaw | undefined, ga
   const vRms = Math.sqrt(vs / n);
   const band = 0.1 * vRms;
   const cycleEnergies: number[] = [];
+  const cycleRanges: [number, number][] = [];
   for (const [a, b] of seg.ranges) {
     let armed = false;
     let start = -1;
     for (let i = a; i < b; i++) {
       if (v[i]! < -band) armed = true;
       else if (armed && v[i]! >= 0) {
-        if (start >= 0) cycleEnergies.push(cum[i]! - cum[start]!);
+        if (start >= 0) { cycleEnergies.push(cum[i]! - cum[start]!); cycleRanges.push([start, i]); }
         start = i; armed = false;
       }
     }
   }
   const meanPower = E / duration;
   return {
-    t, v, F, p, E, duration, meanPower, cycleEnergies, Fpeak, vPeak, vRms, flipped, segments: seg,
+    t, v, F, p, E, duration, meanPower, cycleEnergies, cycleRanges, Fpeak, vPeak, vRms, flipped, segments: seg,
     summary: { meanPower, profile: blockPower(t, p, seg.ranges, MAX_POWER_BLOCKS) },
   };
 }

@@ -1,4 +1,5 @@
 import type { AcceptedStep } from '../ode/index.ts';
+import { stepPeaks } from './stepPeak.ts';
 
 /** Evenly sampled history (for charts), SI. */
 export interface SimulationHistory {
@@ -17,9 +18,10 @@ export const Z = 0, V = 1, ED = 2, W = 3, XD = 4;
 /**
  * Watches a simulation step by step: keeps the energy-audit residual
  * |½mż² + ½kz² + E_D − W − E_0| and the peaks, and fills an evenly spaced history from the
- * integrator's dense output. Peaks are taken at each step end, at θ = ¼, ½, ¾ inside it, and at
- * every velocity reversal (located by bisection on the dense output, so |z|max is exact to the
- * integration tolerance).
+ * integrator's dense output. The residual is audited at each step end and at θ = ¼, ½, ¾ inside
+ * it; the peaks of |ż|, |F_d|, the stored energy and |W| are located on the dense output
+ * (stepPeak), and |z|max at every velocity reversal (bisection), so every peak is exact to the
+ * integration tolerance rather than to the sampling.
  */
 export class RunRecorder {
   readonly history: SimulationHistory = { t: [], x: [], v: [], force: [], stored: [], dissipated: [], input: [] };
@@ -34,6 +36,16 @@ export class RunRecorder {
   private next = 0;
   // the dense output fills as many components as the buffer has: sized to the state (4, or 5 with a series spring)
   private tmp = new Float64Array(4);
+  /** States at θ = ¼, ½, ¾ of the current step (audited, then searched for peaks). */
+  private quarter = [new Float64Array(4), new Float64Array(4), new Float64Array(4)];
+  private readonly peaks = new Float64Array(4);
+  /** The peaks located on the dense output: |ż|, |F_d|, stored energy, |W|. */
+  private readonly watched = (t: number, y: ArrayLike<number>, out: Float64Array, o: number): void => {
+    out[o] = Math.abs(y[V]!);
+    out[o + 1] = Math.abs(this.forceAt(t, y));
+    out[o + 2] = 0.5 * this.m * y[V]! ** 2 + 0.5 * this.k * y[Z]! ** 2 + this.extraStored(y);
+    out[o + 3] = Math.abs(y[W]!);
+  };
 
   constructor(
     private readonly m: number, private readonly k: number, readonly E0: number,
@@ -77,9 +89,13 @@ export class RunRecorder {
   /** An accepted integrator step. */
   step(s: AcceptedStep): void {
     const h = s.t1 - s.t0;
-    if (this.tmp.length !== s.y0.length) this.tmp = new Float64Array(s.y0.length);
+    if (this.tmp.length !== s.y0.length) {
+      this.tmp = new Float64Array(s.y0.length);
+      this.quarter = this.quarter.map(() => new Float64Array(s.y0.length));
+    }
     const tmp = this.tmp;
-    for (let q = 1; q <= 3; q++) { s.interpolate(0.25 * q, tmp); this.audit(s.t0 + 0.25 * q * h, tmp); }
+    const q = this.quarter;
+    for (let i = 1; i <= 3; i++) { s.interpolate(0.25 * i, q[i - 1]!); this.audit(s.t0 + 0.25 * i * h, q[i - 1]!); }
     if (s.y0[V]! * s.y1[V]! < 0) {
       let lo = 0, hi = 1;
       for (let i = 0; i < 50; i++) {
@@ -91,6 +107,10 @@ export class RunRecorder {
       this.audit(s.t0 + 0.5 * (lo + hi) * h, tmp);
     }
     this.audit(s.t1, s.y1);
+    const pk = this.peaks;
+    pk[0] = this.vMax; pk[1] = this.forceMax; pk[2] = this.maxStored; pk[3] = this.maxInput;
+    stepPeaks(s, this.watched, pk, [s.y0, q[0]!, q[1]!, q[2]!, s.y1], tmp);
+    this.vMax = pk[0]!; this.forceMax = pk[1]!; this.maxStored = pk[2]!; this.maxInput = pk[3]!;
     if (s.t0 < this.tLastFrom && this.tLastFrom <= s.t1) { s.interpolate((this.tLastFrom - s.t0) / h, tmp); this.edAtLastFrom = tmp[ED]!; }
     while (this.next < this.samples && this.sampleTime(this.next) <= s.t1) {
       const ts = this.sampleTime(this.next);

@@ -85,9 +85,14 @@ export function simulateSdof(model: SdofModel, opts: SimulationOptions): Simulat
   const p = effectiveLoad(model);
   const pAmp = ex.kind === 'force' ? ex.F0 : ex.kind === 'base' ? m * ex.Y * ex.omega * ex.omega : 0;
 
-  // scales for the absolute tolerances: a length, its velocity and its energy
+  // scales for the absolute tolerances: a length, its velocity and its energy. The driven
+  // amplitude is taken as p_amp/max(k, mω²), the stiffness- or mass-controlled asymptote of the
+  // linear response |H(ω)|·p_amp/k, which it never exceeds away from resonance (1/max(1, r²) ≤
+  // 1/|1 − r²|): for base excitation far above resonance that is the base amplitude Y, where
+  // p_amp/k = Y·r² was r² times too large and loosened atol by as much.
   // floor of 1 nm: below it the motion is of no engineering interest and tolerances would underflow
-  const L = Math.max(Math.abs(model.x0), Math.abs(model.v0) / wn, pAmp / k, 1e-9);
+  const drive = ex.kind === 'none' ? 0 : pAmp / Math.max(k, m * ex.omega * ex.omega);
+  const L = Math.max(Math.abs(model.x0), Math.abs(model.v0) / wn, drive, 1e-9);
   const vScale = L * Math.max(wn, omegaRef);
   const Escale0 = 0.5 * k * L * L;
   const ks = model.ks;

@@ -15,5 +15,6 @@ export const duty = {
   asce41_17: { kind: 'standard', citation: 'ASCE/SEI 41-17, Seismic Evaluation and Retrofit of Existing Buildings, American Society of Civil Engineers, 2017.' },
   soong1997: { kind: 'book', citation: 'T. T. Soong and G. F. Dargush, Passive Energy Dissipation Systems in Structural Engineering, Wiley, 1997.' },
   meriam2012: { kind: 'book', citation: 'J. L. Meriam and L. G. Kraige, Engineering Mechanics: Dynamics, 7th ed., Wiley, 2012.' },
+  asce7_16: { kind: 'standard', citation: 'ASCE/SEI 7-16, Minimum Design Loads and Associated Criteria for Buildings and Other Structures, American Society of Civil Engineers, 2017.' },
   fornberg1988: { kind: 'paper', citation: 'B. Fornberg, Generation of finite difference formulas on arbitrarily spaced grids, Math. Comp. 51(184), 699–706, 1988.' },
 } as const satisfies Record<string, Source>;

@@ -15,6 +15,17 @@ export interface DecayPeaks {
   /** half of the damped period from the coarse pass, s */ readonly halfPeriod: number;
 }
 
+/**
+ * Heaviest damping at which clean records still give enough peaks, measured on noise-free
+ * synthetic records (20 to 1000 samples per cycle, 3 to 12 periods; test/core/vibration/
+ * ringDownLimit.test.ts re-measures them): released from rest (x₀, ẋ₀ = 0) the coarse pass finds
+ * too few peaks above 5 % of the release excursion from ζ ≈ 0.215; started by a tap (x₀ = 0, ẋ₀)
+ * too few usable peaks remain from ζ ≈ 0.30. Messages quote these, rounded down.
+ */
+export const RING_DOWN_ZETA_LIMIT = { release: 0.21, tap: 0.3 } as const;
+/** The part of a refusal message that says how heavy a damping is too heavy. */
+export const HEAVY_DAMPING_NOTE = `too heavily damped (clean records fail from ζ ≈ ${RING_DOWN_ZETA_LIMIT.release} when released from rest, ζ ≈ ${RING_DOWN_ZETA_LIMIT.tap} when started by a tap)`;
+
 interface Lobe { readonly sign: 1 | -1; readonly from: number; readonly to: number }
 
 /** Lobes between hysteresis crossings of ±h about the centre: one extremum per half cycle. */
@@ -110,7 +121,7 @@ export function decayPeaks(t: readonly number[], y: readonly number[]): DecayPea
       const k = extremumIndex(y, l);
       return k > 0 && k < n - 1; // the record starts or ends inside this lobe
     });
-    if (coarse.length < 2) throw new ComputationError('found fewer than 3 peaks above 5 % of the largest excursion: the record does not show a ring-down (too short, too heavily damped, or not an oscillation)');
+    if (coarse.length < 2) throw new ComputationError(`found fewer than 3 peaks above 5 % of the largest excursion: the record does not show a ring-down (too short, ${HEAVY_DAMPING_NOTE}, or not an oscillation)`);
     idx = coarse.map((l) => extremumIndex(y, l));
     half = median(idx.slice(1).map((k, i) => t[k]! - t[idx[i]!]!));
     centre = equilibrium(t, y, coarse, idx, half) ?? wholeCycleMean(y, coarse, centre);

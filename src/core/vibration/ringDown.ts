@@ -1,6 +1,6 @@
 import { ComputationError } from '../errors.ts';
 import { linearFit } from '../records/linearFit.ts';
-import { decayPeaks, type DecayPeak } from './decayPeaks.ts';
+import { decayPeaks, HEAVY_DAMPING_NOTE, type DecayPeak } from './decayPeaks.ts';
 
 export interface RingDownFit {
   /** damping ratio */ readonly zeta: number;
@@ -38,7 +38,7 @@ export function ringDown(t: readonly number[], y: readonly number[]): RingDownFi
   const found = decayPeaks(t, y);
   const p = found.peaks;
   if (p.length < 4) {
-    throw new ComputationError(`found ${p.length} usable peaks (need at least 4, i.e. 3 half cycles): the record is too short, too heavily damped (ζ above about 0.35) or too noisy`);
+    throw new ComputationError(`found ${p.length} usable peaks (need at least 4, i.e. 3 half cycles): the record is too short, ${HEAVY_DAMPING_NOTE} or too noisy`);
   }
   const tm: number[] = [];
   const la: number[] = [];

@@ -30,9 +30,9 @@ describe('recorded-motion: velocity differentiated from a coarsely sampled displ
   it('warns below 100 samples per cycle (the 3-point derivative is low by (ωh)²/6: mean power −0.53 % at 50 per cycle, closed form)', async () => {
     const { sineRecord } = await import('../../../src/calculators/duty/demoRecord.ts');
     const calc = getCalculator('recorded-motion')!;
-    const coarse = evaluate(calc, { csv: sineRecord({ X: 0.02, f: 2, cycles: 20, rate: 100, columns: 'tx' }) });
+    const coarse = evaluate(calc, { csv: sineRecord({ X: 0.02, f: 2, cycles: 20, rate: 100, columns: 'tx' }), layout: 'auto' });
     expect(coarse.warnings.join(' ')).toMatch(/samples per cycle/);
-    const fine = evaluate(calc, { csv: sineRecord({ X: 0.02, f: 1, cycles: 20, rate: 200, columns: 'tx' }) });
+    const fine = evaluate(calc, { csv: sineRecord({ X: 0.02, f: 1, cycles: 20, rate: 200, columns: 'tx' }), layout: 'auto' });
     expect(fine.warnings.join(' ')).not.toMatch(/samples per cycle/);
   });
 });
