@@ -6,3 +6,8 @@ export { lambdaAlpha } from './lambdaAlpha.ts';
 export { energyPerCycle, energyPerCycleQuadrature } from './energyPerCycle.ts';
 export { harmonicDuty, equivalentDampingRatio, type HarmonicDuty } from './harmonicDuty.ts';
 export { gaussianMomentFactor, gaussianMeanPower } from './gaussianDuty.ts';
+export { readFvPoints, type FvData } from './fvData.ts';
+export { fitLinearOrigin } from './fitLinear.ts';
+export { fitPowerLaw, type PowerLawFit } from './fitPowerLaw.ts';
+export { fitBilinear, type BilinearFit, type FitSide } from './fitBilinear.ts';
+export { fitDamperLaw, splitSides, type DamperLawFit, type FitLawKind } from './fitDamperLaw.ts';
