@@ -37,6 +37,11 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('powerLawForce', 'force', 'Power-law damper: force at the reference velocity, F_ref = C·v_ref^α.'),
   q('powerLawVelocity', 'velocity', 'Power-law damper: velocity at which F_ref is quoted.'),
   q('powerLawExponent', 'dimensionless', 'Power-law damper: velocity exponent α.'),
+  q('bilinearReboundLowSlope', 'damping', 'Bilinear damper: rebound (extension) slope below the knee velocity.'),
+  q('bilinearReboundHighSlope', 'damping', 'Bilinear damper: rebound (extension) slope above the knee velocity.'),
+  q('bilinearCompressionLowSlope', 'damping', 'Bilinear damper: compression (bump) slope below the knee velocity.'),
+  q('bilinearCompressionHighSlope', 'damping', 'Bilinear damper: compression (bump) slope above the knee velocity.'),
+  q('bilinearKneeVelocity', 'velocity', 'Bilinear damper: velocity at which the slopes change (one knee for both directions).'),
   // oil
   q('oilViscosity40', 'kinematicViscosity', 'Kinematic viscosity of the damper oil at 40 °C.'),
   q('oilViscosity100', 'kinematicViscosity', 'Kinematic viscosity of the damper oil at 100 °C.'),
