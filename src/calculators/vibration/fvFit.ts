@@ -1,6 +1,7 @@
 import { damperForce, type DamperLaw, type DamperLawFit } from '../../core/dampers/index.ts';
-import { defineCalculator, num, type Outputs, type Values } from '../types.ts';
+import { defineCalculator, num, type Outputs } from '../types.ts';
 import { analyseSheet, bandHalfWidth } from './fvFitAnalysis.ts';
+import { warningsFor } from './fvFitWarnings.ts';
 import { fvFitCharts } from './fvFitCharts.ts';
 import { bothWays, DEMO_SHEET, sheetOf, speeds } from './fvFitRecords.ts';
 
@@ -14,40 +15,6 @@ function lawOutputs(fit: DamperLawFit, vRated: number): Outputs {
     ...(fit.rebound ? { c1: law.rebound.c1, c2: law.rebound.c2 } : {}),
     ...(fit.compression ? { c1c: law.compression.c1, c2c: law.compression.c2 } : {}),
   };
-}
-
-function warningsFor(values: Values, a: ReturnType<typeof analyseSheet>, outside: number[], ratio: number | undefined): string[] {
-  const { data, fit, kind } = a;
-  const w: string[] = [];
-  const vRated = num(values, 'vRated');
-  const vmax = Math.max(...data.v.map(Math.abs));
-  if (fit.r2 < 0.98) w.push(`R² = ${fit.r2.toFixed(4)}: the ${kind} law describes these points poorly; compare the residual chart with another law.`);
-  if (fit.nRebound === 0 || fit.nCompression === 0) {
-    const has = fit.nRebound ? 'rebound' : 'compression';
-    w.push(kind === 'bilinear'
-      ? `Only ${has} points: the other direction's slopes are not given and the fitted law cannot be handed on as a bilinear law.`
-      : `Only ${has} points: the symmetric ${kind} law assumes the other direction is the same.`);
-  }
-  if (kind !== 'bilinear' && ratio !== undefined && (ratio > 1.25 || ratio < 0.8)) {
-    w.push(`Rebound/compression ratio ${ratio.toFixed(2)}: one ${kind} law for both directions averages them (same energy per harmonic cycle for equal velocity sets); the bilinear law keeps the two directions apart.`);
-  }
-  if (fit.alphaAtLimit) w.push('The best exponent lies at an end of the searched range 0.05–2: the points do not follow a power law.');
-  if (fit.law.kind === 'bilinear' && [fit.law.rebound.c1, fit.law.rebound.c2, fit.law.compression.c1, fit.law.compression.c2].some((c) => c < 0)) {
-    w.push('A fitted slope is negative: the points do not look like a passive damper (check the signs and the force offset).');
-  }
-  if (fit.nRebound > 0 && fit.nCompression > 0 && (data.F.every((f) => f > 0) || data.F.every((f) => f < 0))) {
-    w.push('Every force has the same sign although the damper moved both ways: a gas-spring force is probably still in the data; enter it as the force offset.');
-  }
-  if (vRated > vmax) w.push(`The rated velocity lies beyond the fastest point (${vmax.toPrecision(3)} m/s): the forces there are extrapolated.`);
-  if (data.T) {
-    const spread = Math.max(...data.T) - Math.min(...data.T);
-    if (spread > 10) w.push(`The temperature column spans ${spread.toFixed(1)} K: damper force changes with oil temperature, so fit one temperature at a time.`);
-  }
-  if (outside.length) {
-    const lines = outside.slice(0, 12).map((i) => data.lines[i]).join(', ');
-    w.push(`${outside.length} point(s) outside the ±${(num(values, 'band') * 100).toPrecision(3)} % band around the fitted law: line ${lines}${outside.length > 12 ? ', …' : ''}.`);
-  }
-  return w;
 }
 
 const LINEAR = bothWays(speeds(0.05, 1, 20));
