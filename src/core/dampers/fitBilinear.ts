@@ -43,7 +43,8 @@ const total = (sides: readonly FitSide[], vk: number) => sides.reduce((sum, s) =
  *
  * $$\min_{v_k}\sum_{\text{sides}}\min_{c_1,c_2}\sum_i\bigl(y_i - c_1\min(a_i,v_k) - c_2\max(a_i-v_k,0)\bigr)^2$$
  *
- * The knee is searched where every side has at least two points below and two above it.
+ * The knee is searched where every side has at least two points below and two above it, first on
+ * 101 even steps plus the measured speeds (at most about 200 of them), then by golden section.
  *
  * @param sides one or two sides (rebound, compression), each with at least four points
  * @throws ComputationError when a side has fewer than four points or no knee leaves two points on
@@ -64,7 +65,9 @@ export function fitBilinear(sides: readonly FitSide[]): BilinearFit {
   if (!(hi > lo)) throw new ComputationError('no knee velocity leaves two points below and two above it on every side: add points over a wider velocity range');
   // candidates: an even grid plus every measured speed inside the range (the SSE kinks there)
   const cands = Array.from({ length: 101 }, (_, i) => lo + ((hi - lo) * i) / 100);
-  for (const s of sides) for (const a of s.a) if (a > lo && a < hi) cands.push(a);
+  const measured = [...new Set(sides.flatMap((s) => s.a.filter((a) => a > lo && a < hi)))];
+  const every = Math.max(1, Math.ceil(measured.length / 200)); // long sheets: the grid is fine enough
+  measured.forEach((a, i) => { if (i % every === 0) cands.push(a); });
   cands.sort((x, y) => x - y);
   let best = 0;
   let bestSse = Infinity;

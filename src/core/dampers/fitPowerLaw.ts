@@ -17,16 +17,16 @@ export interface PowerLawFit {
 
 /** Best C for a fixed α and the sum of squared residuals it leaves. */
 function project(a: readonly number[], y: readonly number[], alpha: number): { C: number; sse: number } {
+  const g = a.map((ai) => Math.pow(ai, alpha));
   let sgg = 0;
   let sgy = 0;
   for (let i = 0; i < a.length; i++) {
-    const g = Math.pow(a[i]!, alpha);
-    sgg += g * g;
-    sgy += g * y[i]!;
+    sgg += g[i]! * g[i]!;
+    sgy += g[i]! * y[i]!;
   }
   const C = sgy / sgg;
   let sse = 0;
-  for (let i = 0; i < a.length; i++) sse += (y[i]! - C * Math.pow(a[i]!, alpha)) ** 2;
+  for (let i = 0; i < a.length; i++) sse += (y[i]! - C * g[i]!) ** 2;
   return { C, sse };
 }
 
