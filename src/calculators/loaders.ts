@@ -14,6 +14,7 @@ export const calculatorLoaders: Readonly<Record<string, () => Promise<Calculator
   'tmd-tuning': () => import('./vibration/tmd-tuning.ts').then((m) => m.tmdTuningCalc),
   'energy-per-cycle': () => import('./vibration/energyPerCycle.ts').then((m) => m.energyPerCycle),
   'damper-simulation': () => import('./vibration/damperSimulation.ts').then((m) => m.damperSimulation),
+  'fv-fit': () => import('./vibration/fvFit.ts').then((m) => m.fvFit),
   'harmonic-duty': () => import('./duty/harmonicDutyCalc.ts').then((m) => m.harmonicDutyCalc),
   'road-power': () => import('./duty/roadPower.ts').then((m) => m.roadPower),
   impact: () => import('./duty/impact.ts').then((m) => m.impact),

@@ -30,8 +30,17 @@ function targetInput(feed: FeedDef, key: string): InputDef | undefined {
 
 /** The link built from a result, read back as the target page reads its address. */
 function link(calc: CalculatorDefinition, out: string, feed: FeedDef, raw: Record<string, unknown> = {}) {
-  const src = evaluate(calc, { ...defaults(calc), ...raw });
-  const q = feedQuery(feed, out, src);
+  let src = evaluate(calc, { ...defaults(calc), ...raw });
+  let q = feedQuery(feed, out, src);
+  // an output of one choice only (fv-fit's power-law F_ref): try the source's choice options in turn
+  for (const d of calc.inputs) {
+    if (q !== undefined || d.kind !== 'choice' || d.key in raw) continue;
+    for (const o of d.options) {
+      if (q !== undefined) break;
+      src = evaluate(calc, { ...defaults(calc), ...raw, [d.key]: o.value });
+      q = feedQuery(feed, out, src);
+    }
+  }
   expect(q, `${calc.id}.${out} → ${feed.page}`).toBeDefined();
   const target = pageCalcs(feed.page)[0]!;
   const params = Object.fromEntries(new URLSearchParams(q));

@@ -7,7 +7,8 @@ import { ringDownCalc } from './ring-down.ts';
 import { tmdTuningCalc } from './tmd-tuning.ts';
 import { energyPerCycle } from './energyPerCycle.ts';
 import { damperSimulation } from './damperSimulation.ts';
+import { fvFit } from './fvFit.ts';
 
 export const vibrationCalculators: readonly CalculatorDefinition[] = [
-  sdof, forcedResponseCalc, logDecrementCalc, halfPowerCalc, ringDownCalc, tmdTuningCalc, energyPerCycle, damperSimulation,
+  sdof, forcedResponseCalc, logDecrementCalc, halfPowerCalc, ringDownCalc, tmdTuningCalc, energyPerCycle, damperSimulation, fvFit,
 ];

@@ -7,3 +7,8 @@ export { energyPerCycle, energyPerCycleQuadrature } from './energyPerCycle.ts';
 export { harmonicDuty, equivalentDampingRatio, type HarmonicDuty } from './harmonicDuty.ts';
 export { gaussianMomentFactor, gaussianMeanPower } from './gaussianDuty.ts';
 export { maxwellStiffness, seriesHarmonic, type MaxwellStiffness, type SeriesHarmonic } from './seriesStiffness.ts';
+export { readFvPoints, type FvData } from './fvData.ts';
+export { fitLinearOrigin } from './fitLinear.ts';
+export { fitPowerLaw, type PowerLawFit } from './fitPowerLaw.ts';
+export { fitBilinear, type BilinearFit, type FitSide } from './fitBilinear.ts';
+export { fitDamperLaw, splitSides, type DamperLawFit, type FitLawKind } from './fitDamperLaw.ts';

@@ -4,3 +4,4 @@ export { gamma } from './gamma.ts';
 export { brentRoot, type BrentOptions } from './brent.ts';
 export { bracketRoots, type Crossing } from './bracketRoots.ts';
 export { PLAIN_NUMBER, isPlainNumber } from './plainNumber.ts';
+export { goldenSection, type GoldenMinimum } from './goldenSection.ts';

@@ -13,4 +13,5 @@ export const vibration = {
   brock1946: { kind: 'paper', citation: 'J. E. Brock, A note on the damped vibration absorber, J. Appl. Mech. 13, A284, 1946.' },
   ewins2000: { kind: 'book', citation: 'D. J. Ewins, Modal Testing: Theory, Practice and Application, 2nd ed., Research Studies Press, 2000.' },
   press2007: { kind: 'book', citation: 'W. H. Press, S. A. Teukolsky, W. T. Vetterling and B. P. Flannery, Numerical Recipes: The Art of Scientific Computing, 3rd ed., Cambridge University Press, 2007.' },
+  golub1973: { kind: 'paper', citation: 'G. H. Golub and V. Pereyra, The differentiation of pseudo-inverses and nonlinear least squares problems whose variables separate, SIAM J. Numer. Anal. 10(2), 413–432, 1973.' },
 } as const satisfies Record<string, Source>;
