@@ -175,7 +175,7 @@ export const dampingFadeCalc = defineCalculator({
       inputs: { ...TW210, cRef: 980, share: 0.3, fluid: 'vg', grade: 'VG32', VI: 100, duty: 'harmonic', X: 0.02, f: 1.5 },
       expected: { nu100Used: 5.361856e-6 },
       tolerance: 1e-6,
-      why: 'Table 1: H = 31.40 at 5.3 and 32.37 at 5.4 mm²/s, linear interpolation (the standard\'s rule) gives 5.3 + 0.06/0.097',
+      why: 'Table 1: H = 31.40 at 5.3 and 32.37 at 5.4 mm²/s, linear interpolation (the standard\'s rule) gives 5.3 + 0.1·0.60/0.97',
       source: { key: 'astmD2270', locator: 'Table 1, §6.1.1' },
       provenance: 'published',
     },
