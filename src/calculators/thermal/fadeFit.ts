@@ -1,8 +1,8 @@
 import { ComputationError } from '../../core/errors.ts';
 import { fadeFit, fadeRatio, readUnitRows } from '../../core/thermal/index.ts';
-import { defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
+import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { q } from '../quantityText.ts';
-import { betaFrom, fluidFrom, fluidInputs, lawInputs, spanWarning } from './fluidInputs.ts';
+import { betaFrom, DEFAULT_TABLE, fluidFrom, fluidInputs, lawInputs, spanWarning, type Fluid } from './fluidInputs.ts';
 
 /** TW-077 test bay: the supplier's dyno sheet for the TW-210 Fellrunner rear damper (invented demo data). */
 const DEMO_ROWS = 'T [°C], v [m/s], F [N]\n-20, 0.05, 94\n-20, 0.1, 183\n-20, 0.2, 373\n-20, 0.3, 563\n-20, 0.5, 923\n20, 0.05, 49\n20, 0.1, 101\n20, 0.2, 198\n20, 0.3, 300\n20, 0.5, 492\n80, 0.05, 47\n80, 0.1, 94\n80, 0.2, 184\n80, 0.3, 282\n80, 0.5, 464';
@@ -41,13 +41,20 @@ export const fadeFitCalc = defineCalculator({
   ],
   outputs: [
     { key: 'share', label: 'Viscous share s at T_ref', kind: 'dimensionless', help: 'Part of c_ref that follows viscosity (laminar and bleed flow).',
-      feeds: [{ page: 'damping-fade', input: 'share', label: 'use this law on the fade page', with: { cRef: 'cRef', Tref: 'Tref', law: 'law', beta: 'beta', fluid: 'fluid', nu40: 'nu40', nu100: 'nu100', grade: 'grade', VI: 'VI', nuTable: 'nuTable', Tcold: 'Tcold' } }] },
+      feeds: [{ page: 'damping-fade', input: 'share', label: 'use this law on the fade page', with: { cRef: 'cRef', Tref: 'Tref', Tcold: 'Tcold', law: 'law', beta: 'fitBeta', fluid: 'fitFluid', nu40: 'fitNu40', nu100: 'fitNu100', nuTable: 'fitTable' } }] },
     { key: 'cRef', label: 'Damping coefficient at T_ref', kind: 'damping' },
     { key: 'dcdT', label: 'Fade rate at T_ref, (1/c)·dc/dT', kind: 'perTemperature', help: 'Fractional change of c per kelvin at T_ref; negative: c falls as the oil warms.' },
     { key: 'coldRatio', label: 'Cold-force ratio c(T_cold)/c_ref', kind: 'dimensionless' },
     { key: 'r2', label: 'r² of the forces', kind: 'dimensionless', digits: 6, help: '1 − Σ(F − F_fit)²/Σ(F − F̄)² over all rows.' },
     { key: 'rmsError', label: 'rms force error', kind: 'force' },
     { key: 'temperatures', label: 'Test temperatures found', kind: 'dimensionless', digits: 1 },
+  ],
+  handoffs: [
+    { key: 'fitBeta', help: 'β of the law (the default when the share law hides it), SI.', maxLength: 32 },
+    { key: 'fitFluid', help: 'The fluid choice for the fade page (an ISO VG grade goes as the mineral oil it defines).', maxLength: 16 },
+    { key: 'fitNu40', help: 'ν40 of the fluid, m²/s.', maxLength: 32 },
+    { key: 'fitNu100', help: 'ν100 of the fluid (from ASTM D2270 for a grade), m²/s.', maxLength: 32 },
+    { key: 'fitTable', help: 'The viscosity table (only used when the fluid is a table).', maxLength: 4000 },
   ],
   compute(values) {
     const { fit, rows, fluid } = analyse(values);
@@ -63,6 +70,7 @@ export const fadeFitCalc = defineCalculator({
     return {
       outputs: { share: fit.share, cRef: fit.cRef, dcdT: fit.dcdT, coldRatio, r2: fit.r2, rmsError: fit.rmsError, temperatures: fit.temperatures.length },
       warnings,
+      handoff: handoffOf(values, fluid),
     };
   },
   charts(values, result): ChartSpec[] {
@@ -165,4 +173,19 @@ function unclippedRatio(fit: ReturnType<typeof fadeFit>, T: number): number {
   const base = fadeRatio({ ...m, viscousShare: 0 }, T); // density ratio
   const visc = fadeRatio({ ...m, viscousShare: 1 }, T); // density × viscosity ratio
   return s * visc + (1 - s) * base;
+}
+
+const sig10 = (x: number) => String(Number(x.toPrecision(10)));
+
+/** What the fade page needs to use the same fluid and law, whichever fields this page shows. */
+function handoffOf(values: Values, fluid: ReturnType<typeof fluidFrom>): Record<string, string> {
+  const f = choice<Fluid>(values, 'fluid');
+  const table = values.nuTable;
+  return {
+    fitBeta: sig10(typeof values.beta === 'number' ? values.beta : 7e-4),
+    fitFluid: f === 'vg' ? 'mineral' : f,
+    fitNu40: sig10(fluid.nu40),
+    fitNu100: sig10(fluid.nu100),
+    fitTable: f === 'table' && typeof table === 'string' ? table : DEFAULT_TABLE,
+  };
 }

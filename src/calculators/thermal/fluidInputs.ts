@@ -12,7 +12,7 @@ import { choice, num, text, type InputDef, type Values } from '../types.ts';
 export const VG_PRESETS = [10, 15, 22, 32, 46, 68, 100] as const;
 
 /** Demo table: an ISO VG 22, VI 100 oil by ASTM D341, rounded to 3 significant digits. */
-const DEMO_TABLE = 'T [°C], nu [mm²/s]\n-30, 3410\n-20, 1080\n0, 187\n25, 42.2\n40, 22.0\n70, 8.40\n100, 4.29\n120, 3.04';
+export const DEFAULT_TABLE = 'T [°C], nu [mm²/s]\n-30, 3410\n-20, 1080\n0, 187\n25, 42.2\n40, 22.0\n70, 8.40\n100, 4.29\n120, 3.04';
 
 export type Fluid = 'mineral' | 'vg' | 'silicone' | 'table';
 
@@ -28,7 +28,7 @@ export function fluidInputs(): InputDef[] {
     { key: 'nu100', label: 'Viscosity at 100 °C ν100', kind: 'kinematicViscosity', default: 4.5e-6, min: 1e-6, max: 1e-3, help: 'From the fluid data sheet; below ν40.', when: { key: 'fluid', is: ['mineral', 'silicone'] } },
     { key: 'grade', label: 'ISO 3448 grade', kind: 'choice', default: 'VG22', options: VG_PRESETS.map((g) => ({ value: `VG${g}`, label: `ISO VG ${g} (ν40 = ${g} mm²/s)` })), help: 'Mid-point viscosity at 40 °C of the grade (ISO 3448); a real oil lies within ±10 %.', when: { key: 'fluid', is: ['vg'] } },
     { key: 'VI', label: 'Viscosity index VI', kind: 'dimensionless', default: 100, min: 0, max: 200, help: 'From the oil data sheet; ν100 follows from ASTM D2270. Plain mineral oils 90–105, damper oils with VI improvers 130–200.', when: { key: 'fluid', is: ['vg'] } },
-    { key: 'nuTable', label: 'Viscosity table (T, ν)', kind: 'text', default: DEMO_TABLE, maxLength: 8000, rows: 6, help: 'One row per temperature: T, ν. Units in a header line, e.g. "T [°C], nu [mm²/s]"; without a header T is in K and ν in m²/s. At least two rows; ν must fall as T rises. Between rows ln ν is linear in 1/T.', when: { key: 'fluid', is: ['table'] } },
+    { key: 'nuTable', label: 'Viscosity table (T, ν)', kind: 'text', default: DEFAULT_TABLE, maxLength: 4000, rows: 6, fromUrl: true, help: 'One row per temperature: T, ν. Units in a header line, e.g. "T [°C], nu [mm²/s]"; without a header T is in K and ν in m²/s. At least two rows; ν must fall as T rises. Between rows ln ν is linear in 1/T.', when: { key: 'fluid', is: ['table'] } },
   ];
 }
 
