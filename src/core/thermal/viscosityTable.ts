@@ -12,6 +12,8 @@ export const MAX_VISCOSITY_ROWS = 200;
  *
  * $$\ln\nu(T) = \ln\nu_i + \frac{1/T - 1/T_i}{1/T_{i+1} - 1/T_i}\,\ln\frac{\nu_{i+1}}{\nu_i},\quad T_i \le T \le T_{i+1}$$
  *
+ * The slope d ln ν/dT is the piece's; at a row, the mean of the two pieces meeting there.
+ *
  * @param rows [T (K), ν (m²/s)] pairs, at least two, any order
  * @returns the curve and its temperature span
  * @throws InputRangeError for fewer than two rows, repeated temperatures or a viscosity that does
@@ -42,7 +44,15 @@ export function viscosityTableCurve(rows: readonly (readonly number[])[], input 
       if (!Number.isFinite(v)) throw new ComputationError(`the viscosity table gives no finite viscosity at ${T.toFixed(1)} K`);
       return v;
     },
-    dlnNu: (T) => -piece(T).slope / (T * T),
+    dlnNu(T) {
+      // at a row the slope jumps; take the mean of the two pieces there (within 1 µK, so a
+      // temperature converted from °F and back lands on the same answer)
+      const k = pts.findIndex((p) => Math.abs(p.T - T) < 1e-6);
+      const slope = k > 0 && k < pts.length - 1
+        ? 0.5 * ((y[k]! - y[k - 1]!) / (x[k]! - x[k - 1]!) + (y[k + 1]! - y[k]!) / (x[k + 1]! - x[k]!))
+        : piece(T).slope;
+      return -slope / (T * T);
+    },
   };
   return { curve, Tmin: pts[0]!.T, Tmax: pts.at(-1)!.T };
 }

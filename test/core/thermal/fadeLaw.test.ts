@@ -79,3 +79,14 @@ describe('measured viscosity table: ln ν piecewise linear in 1/T', () => {
     expect(() => parseViscosityTable('T [°C], nu [furlongs]\n40, 22\n100, 4')).toThrow(/not a unit/);
   });
 });
+
+describe('measured viscosity table: slope at a row', () => {
+  it('takes the mean of the two pieces at a row, the same a rounding step either side of it', () => {
+    const { curve } = parseViscosityTable('T [°C], nu [mm²/s]\n0, 187\n25, 42.2\n40, 22.0');
+    const piece = (T1: number, n1: number, T2: number, n2: number) => Math.log(n2 / n1) / (1 / T2 - 1 / T1);
+    const mean = 0.5 * (piece(273.15, 187, 298.15, 42.2) + piece(298.15, 42.2, 313.15, 22.0));
+    for (const T of [298.15, 298.15 + 3e-13, 298.15 - 3e-13]) {
+      expectClose({ label: `slope at ${T}`, computed: curve.dlnNu(T), expected: -mean / T ** 2, tol: 1e-9, why: 'closed form of the pieces' });
+    }
+  });
+});
