@@ -26,4 +26,5 @@ export const calculatorLoaders: Readonly<Record<string, () => Promise<Calculator
   'warm-up': () => import('./thermal/warmUp.ts').then((m) => m.warmUpCalc),
   'oil-viscosity': () => import('./thermal/oilViscosity.ts').then((m) => m.oilViscosityCalc),
   'damping-fade': () => import('./thermal/dampingFade.ts').then((m) => m.dampingFadeCalc),
+  'fade-fit': () => import('./thermal/fadeFit.ts').then((m) => m.fadeFitCalc),
 };

@@ -49,6 +49,12 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   // oil
   q('oilViscosity40', 'kinematicViscosity', 'Kinematic viscosity of the damper oil at 40 °C.'),
   q('oilViscosity100', 'kinematicViscosity', 'Kinematic viscosity of the damper oil at 100 °C.'),
+  q('damperFluid', 'choice', 'How the damper fluid is described: mineral oil by ν40/ν100, by ISO VG grade, silicone fluid, or a measured table.'),
+  q('oilExpansion', 'perTemperature', 'Volumetric thermal expansion coefficient β of the damper fluid.'),
+  // temperature law of the damper
+  q('referenceTemperature', 'temperature', 'Oil temperature at which the damping coefficient (dampingCoefficient) holds.'),
+  q('fadeLaw', 'choice', 'Temperature law of the damping coefficient: share law or physical (density) law.'),
+  q('fadeShare', 'dimensionless', 'Viscous (laminar, bleed) share of the damping coefficient at the reference temperature; fitted by fade-fit.'),
   // body and air
   q('bodyDiameter', 'length', 'Outside diameter of the damper body exposed to air.'),
   q('bodyLength', 'length', 'Length of the damper body wetted by oil and exposed to air.'),

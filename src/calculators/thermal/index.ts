@@ -5,7 +5,8 @@ import { powerRatingCalc } from './powerRating.ts';
 import { warmUpCalc } from './warmUp.ts';
 import { oilViscosityCalc } from './oilViscosity.ts';
 import { dampingFadeCalc } from './dampingFade.ts';
+import { fadeFitCalc } from './fadeFit.ts';
 
 export const thermalCalculators: readonly CalculatorDefinition[] = [
-  bodyCoolingCalc, steadyTemperatureCalc, powerRatingCalc, warmUpCalc, oilViscosityCalc, dampingFadeCalc,
+  bodyCoolingCalc, steadyTemperatureCalc, powerRatingCalc, warmUpCalc, oilViscosityCalc, dampingFadeCalc, fadeFitCalc,
 ];

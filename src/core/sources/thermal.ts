@@ -11,4 +11,8 @@ export const thermal = {
   astmD2270: { kind: 'standard', citation: 'ASTM D2270, Standard Practice for Calculating Viscosity Index from Kinematic Viscosity at 40 °C and 100 °C, ASTM International.' },
   brent1973: { kind: 'book', citation: 'R. P. Brent, Algorithms for Minimization without Derivatives, Prentice-Hall, 1973.' },
   dixon2007thermal: { kind: 'book', citation: 'J. C. Dixon, The Shock Absorber Handbook, 2nd ed., Wiley, 2007 (chapter on temperature and fade).' },
+  andrade1930: { kind: 'paper', citation: 'E. N. da C. Andrade, The viscosity of liquids, Nature 125, 309–310, 1930.' },
+  apiMpms11_1: { kind: 'standard', citation: 'API MPMS Chapter 11.1 (ASTM D1250, IP 200), Temperature and Pressure Volume Correction Factors for Generalized Crude Oils, Refined Products and Lubricating Oils, American Petroleum Institute, 2004.' },
+  hryciow2022: { kind: 'paper', citation: 'Z. Hryciów, bench tests of twin-tube shock absorbers over a range of temperatures, Applied Sciences 12(24), 12765, 2022 (MDPI).' },
+  lawson1974: { kind: 'book', citation: 'C. L. Lawson and R. J. Hanson, Solving Least Squares Problems, Prentice-Hall, 1974.' },
 } as const satisfies Record<string, Source>;

@@ -34,6 +34,7 @@ export const QUANTITY_KINDS = [
   'accelerationPsd',
   'displacementPsd',
   'eventRate',
+  'perTemperature',
 ] as const;
 
 export type QuantityKind = (typeof QUANTITY_KINDS)[number];
@@ -72,4 +73,6 @@ export const SI_SYMBOL: Record<QuantityKind, string> = {
   displacementPsd: 'm²/Hz',
   /** Events (impacts, strokes) per hour: the unit the calculators' keys (`cph`) are named in. */
   eventRate: '1/h',
+  /** A fractional change per kelvin (thermal expansion coefficient, fade rate): 1/°F is 1.8 per K. */
+  perTemperature: '1/K',
 };

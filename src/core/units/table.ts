@@ -114,6 +114,9 @@ export const UNITS: readonly UnitDef[] = [
   any('m2/Hz', 'm²/Hz', 'displacementPsd'),
 
   // an event rate is kept per hour (the CLI key `cph` is per hour); per minute and per second convert exactly
+  // a fractional change per degree: per °F is 1.8 per kelvin (NIST SP 811 B.9 applied to 1/ΔT)
+  si('1/K', '1/K', 'perTemperature'), si('%/K', '%/K', 'perTemperature', 0.01), us('1/F', '1/°F', 'perTemperature', 1 / DEGF), us('%/F', '%/°F', 'perTemperature', 0.01 / DEGF),
+
   any('1/h', 'per hour', 'eventRate'), any('1/min', 'per minute', 'eventRate', 60), any('1/s', 'per second', 'eventRate', 3600),
 ];
 
@@ -131,4 +134,5 @@ export const PREFERRED: Partial<Record<QuantityKind, { SI: string; US: string }>
   kinematicViscosity: { SI: 'cSt', US: 'cSt' },
   area: { SI: 'm2', US: 'in2' },
   force: { SI: 'N', US: 'lbf' },
+  perTemperature: { SI: '%/K', US: '%/F' },
 };
