@@ -32,7 +32,7 @@ export const dampingFadeCalc = defineCalculator({
     { key: 'Tref', label: 'Reference temperature T_ref', kind: 'temperature', default: 298.15, min: 233.15, max: 423.15, help: 'Temperature at which c_ref holds (dyno tests are often at 20–25 °C).' },
     { key: 'share', label: 'Viscous share s at T_ref', kind: 'dimensionless', default: 0.3, min: 0, max: 1, help: 'Part of c_ref that follows oil viscosity (bleed, laminar, leakage flow); the rest (valves, orifices) does not. Fit it to dyno tests at several temperatures on the fade-fit page; 0.3 is a guess that overstates cold forces for many twin-tube dampers.' },
     ...lawInputs(),
-    { key: 'rho15', label: 'Fluid density at 15 °C ρ15', kind: 'density', default: 870, min: 600, max: 1200, help: 'From the data sheet (mineral damper oils 850–890 kg/m³, silicone fluids about 960). Only sets the reported dynamic viscosity: the force ratios depend on β alone.', when: { key: 'law', is: ['physical'] } },
+    { key: 'rho15', label: 'Fluid density at 15 °C ρ15', kind: 'density', default: 870, min: 600, max: 1200, help: 'From the data sheet (mineral damper oils 850–890 kg/m³, silicone fluids about 960). Only sets the reported dynamic viscosity: the force ratios depend on β alone.', when: { key: 'fadeLaw', is: ['physical'] } },
     ...fluidInputs(),
     { key: 'Tcold', label: 'Cold-start temperature', kind: 'temperature', default: 253.15, min: 213.15, max: 313.15, help: 'For the cold-force ratio c(T_cold)/c_ref (mount and structure loads at a cold start).' },
     { key: 'duty', label: 'Duty', kind: 'choice', default: 'harmonic', options: [{ value: 'harmonic', label: 'harmonic stroke (P = ½cω²X²)' }, { value: 'random', label: 'random road (P fixed, independent of c)' }], help: 'What sets the power.' },
@@ -67,7 +67,7 @@ export const dampingFadeCalc = defineCalculator({
       coldRatio: fadeRatio(model, Tcold),
       dcdT: fadeLogSlope(model, model.Tref),
       nu100Used: choice(values, 'fluid') === 'vg' ? fluid.nu100 : undefined,
-      muRef: choice(values, 'law') === 'physical' ? oilDensity(num(values, 'rho15'), model.beta ?? 0, model.Tref) * fluid.curve.nu(model.Tref) : undefined,
+      muRef: choice(values, 'fadeLaw') === 'physical' ? oilDensity(num(values, 'rho15'), model.beta ?? 0, model.Tref) * fluid.curve.nu(model.Tref) : undefined,
     };
     for (const w of [spanWarning(fluid, Tcold, 'cold-start temperature'), spanWarning(fluid, Tlimit, 'limit'), spanWarning(fluid, body.Tamb, 'air temperature')]) if (w) warnings.push(w);
     if (Tlimit <= body.Tamb + 1) {
@@ -136,7 +136,7 @@ export const dampingFadeCalc = defineCalculator({
     { key: 'hryciow2022', locator: 'cold-temperature force ratios of twin-tube dampers (about 2.5 at −30 °C)' },
   ],
   study: {
-    inputs: { cRef: 'dampingCoefficient', Tref: 'referenceTemperature', share: 'fadeShare', law: 'fadeLaw', beta: 'oilExpansion', fluid: 'damperFluid', nu40: 'oilViscosity40', nu100: 'oilViscosity100', X: 'strokeAmplitude', f: 'strokeFrequency', P: 'meanPower', Tlimit: 'allowedTemperature', Cth: 'heatCapacity', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+    inputs: { cRef: 'dampingCoefficient', Tref: 'referenceTemperature', share: 'fadeShare', fadeLaw: 'fadeLaw', beta: 'oilExpansion', fluid: 'damperFluid', nu40: 'oilViscosity40', nu100: 'oilViscosity100', X: 'strokeAmplitude', f: 'strokeFrequency', P: 'meanPower', Tlimit: 'allowedTemperature', Cth: 'heatCapacity', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
   },
 });
 

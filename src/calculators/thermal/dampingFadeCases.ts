@@ -33,7 +33,7 @@ export const DAMPING_FADE_CASES: readonly VerificationCase[] = [
     },
     {
       name: 'Physical law, all orifice flow (s = 0, β = 7·10⁻⁴ 1/K): the cold ratio is the density ratio ρ(−20 °C)/ρ(25 °C)',
-      inputs: { ...TW210, cRef: 980, share: 0, law: 'physical', beta: 7e-4, rho15: 870, duty: 'harmonic', X: 0.02, f: 1.5, Tcold: 253.15 },
+      inputs: { ...TW210, cRef: 980, share: 0, fadeLaw: 'physical', beta: 7e-4, rho15: 870, duty: 'harmonic', X: 0.02, f: 1.5, Tcold: 253.15 },
       expected: { coldRatio: 1.032291133, dcdT: -6.95134062e-4 },
       tolerance: 1e-8,
       why: 'closed form (1 + β·10 K)/(1 − β·35 K) and −β/(1 + β·10 K)',
@@ -42,7 +42,7 @@ export const DAMPING_FADE_CASES: readonly VerificationCase[] = [
     },
     {
       name: 'Physical law, all laminar flow (s = 1): the cold ratio is the ratio of dynamic viscosities μ = ρν (ν40 = 20, ν100 = 4.5 mm²/s)',
-      inputs: { ...TW210, cRef: 980, share: 1, law: 'physical', beta: 7e-4, rho15: 870, duty: 'harmonic', X: 0.02, f: 1.5, Tcold: 253.15 },
+      inputs: { ...TW210, cRef: 980, share: 1, fadeLaw: 'physical', beta: 7e-4, rho15: 870, duty: 'harmonic', X: 0.02, f: 1.5, Tcold: 253.15 },
       expected: { coldRatio: 16.41685582, muRef: 0.0307991132 },
       tolerance: 1e-7,
       why: 'ν from an independent evaluation of the D341 line times the density ratio; μ_ref = ρ(25 °C)·ν(25 °C)',

@@ -39,7 +39,7 @@ export const fadeFitCalc = defineCalculator({
   ],
   outputs: [
     { key: 'share', label: 'Viscous share s at T_ref', kind: 'dimensionless', help: 'Part of c_ref that follows viscosity (laminar and bleed flow).',
-      feeds: [{ page: 'damping-fade', input: 'share', label: 'use this law on the fade page', with: { cRef: 'cRef', Tref: 'Tref', Tcold: 'Tcold', law: 'law', beta: 'fitBeta', fluid: 'fitFluid', nu40: 'fitNu40', nu100: 'fitNu100', nuTable: 'fitTable' } }] },
+      feeds: [{ page: 'damping-fade', input: 'share', label: 'use this law on the fade page', with: { cRef: 'cRef', Tref: 'Tref', Tcold: 'Tcold', fadeLaw: 'fadeLaw', beta: 'fitBeta', fluid: 'fitFluid', nu40: 'fitNu40', nu100: 'fitNu100', nuTable: 'fitTable' } }] },
     { key: 'cRef', label: 'Damping coefficient at T_ref', kind: 'damping' },
     { key: 'dcdT', label: 'Fade rate at T_ref, (1/c)·dc/dT', kind: 'perTemperature', help: 'Fractional change of c per kelvin at T_ref; negative: c falls as the oil warms.' },
     { key: 'coldRatio', label: 'Cold-force ratio c(T_cold)/c_ref', kind: 'dimensionless' },
@@ -122,7 +122,7 @@ export const fadeFitCalc = defineCalculator({
     { key: 'dixon2007thermal', locator: 'fade rates 0.2–2 %/K (from memory)' },
   ],
   study: {
-    inputs: { Tref: 'referenceTemperature', law: 'fadeLaw', beta: 'oilExpansion', fluid: 'damperFluid', nu40: 'oilViscosity40', nu100: 'oilViscosity100' },
+    inputs: { Tref: 'referenceTemperature', fadeLaw: 'fadeLaw', beta: 'oilExpansion', fluid: 'damperFluid', nu40: 'oilViscosity40', nu100: 'oilViscosity100' },
     publishes: { share: 'fadeShare', cRef: 'dampingCoefficient' },
   },
 });

@@ -66,18 +66,18 @@ export function spanWarning(fluid: FluidChoice, T: number, what: string): string
   return `The ${what} (${(T - 273.15).toFixed(1)} °C) is outside the viscosity table (${(fluid.span.Tmin - 273.15).toFixed(1)} to ${(fluid.span.Tmax - 273.15).toFixed(1)} °C): the end piece is extended.`;
 }
 
-/** The fade law: share law (orifice part constant) or physical law (laminar ∝ μ, orifice ∝ ρ). */
+/** The fade fadeLaw: share law (orifice part constant) or physical law (laminar ∝ μ, orifice ∝ ρ). */
 export function lawInputs(): InputDef[] {
   return [
-    { key: 'law', label: 'Temperature law', kind: 'choice', default: 'share', options: [
+    { key: 'fadeLaw', label: 'Temperature law', kind: 'choice', default: 'share', options: [
       { value: 'share', label: 'share law: viscous part ∝ ν, the rest constant' },
       { value: 'physical', label: 'physical law: laminar part ∝ μ = ρν, orifice part ∝ ρ' },
     ], help: 'The share law is the classic engineering split; the physical law adds the density change of the oil to both parts (a few percent over 100 K).' },
-    { key: 'beta', label: 'Volumetric expansion coefficient β', kind: 'perTemperature', default: 7e-4, min: 0, max: 0.005, help: 'Of the fluid: mineral oils 6.5–7.5·10⁻⁴ 1/K, silicone fluids about 9.5·10⁻⁴ 1/K (from memory; the fluid data sheet or the petroleum measurement tables).', when: { key: 'law', is: ['physical'] } },
+    { key: 'beta', label: 'Volumetric expansion coefficient β', kind: 'perTemperature', default: 7e-4, min: 0, max: 0.005, help: 'Of the fluid: mineral oils 6.5–7.5·10⁻⁴ 1/K, silicone fluids about 9.5·10⁻⁴ 1/K (from memory; the fluid data sheet or the petroleum measurement tables).', when: { key: 'fadeLaw', is: ['physical'] } },
   ];
 }
 
 /** β of the chosen law (0 for the share law). */
 export function betaFrom(values: Values): number {
-  return choice(values, 'law') === 'physical' ? num(values, 'beta') : 0;
+  return choice(values, 'fadeLaw') === 'physical' ? num(values, 'beta') : 0;
 }

@@ -17,7 +17,7 @@ const BODY = { D: 0.05, L: 0.35, cRef: 980 };
 describe('fade-fit → damping-fade carries the calibrated law', () => {
   const cases: Record<string, unknown>[] = [
     {},
-    { law: 'physical', beta: 8e-4 },
+    { fadeLaw: 'physical', beta: 8e-4 },
     { fluid: 'vg', grade: 'VG32', VI: 120 },
     { fluid: 'silicone', nu40: 70e-6, nu100: 28e-6 },
     { fluid: 'table' },
