@@ -105,7 +105,7 @@ describe('a study open in the handbook pages', () => {
     await page.fill('db-calculator[data-calc="steady-temperature"] input[name="P"]', '50');
     await page.waitForFunction(() => JSON.parse(localStorage.getItem('dampbook:study') ?? '{}').steps?.[1]?.inputs?.P === 50);
     await page.waitForSelector('.field[data-key="P"][data-origin="override"]');
-    expect(await field.locator('.study-note').textContent()).toContain('overriding');
+    expect(await field.locator('.study-note').textContent()).toContain('in place of the study');
     await field.locator('.study-note button').click();
     await page.waitForSelector('.field[data-key="P"][data-origin="step"]');
     const s = (await stored(page))!;

@@ -26,7 +26,13 @@ describe('simplifyPolyline', () => {
         for (let i = a + 1; i < b; i++) if (segDist(x[i]!, y[i]!, x[a]!, y[a]!, x[b]!, y[b]!) > tol + 1e-9) return false;
       }
       return true;
-    }));
+    }), { seed: 1, numRuns: 2000 });
+  });
+
+  it('measures a dropped point to the drawn segment, not the line through it (a steep chord once hid a point beyond its end)', () => {
+    // chord from (0, 0) to (1, 100): the point (2, 200.5) lies 0.005 px from the line but 100 px beyond the end
+    const kept = simplifyPolyline([0, 2, 1.0001], [0, 200.5, 100], 0.25);
+    expect(kept).toContain(1);
   });
 
   it('keeps a one-sample spike that every-n-th thinning would lose', () => {

@@ -17,12 +17,14 @@ export function simplifyPolyline(xs: readonly number[], ys: readonly number[], t
     const [a, b] = stack.pop()!;
     const ax = xs[a]!; const ay = ys[a]!;
     const dx = xs[b]! - ax; const dy = ys[b]! - ay;
-    const len = Math.hypot(dx, dy);
+    const l2 = dx * dx + dy * dy;
     let far = -1;
     let worst = tol;
     for (let i = a + 1; i < b; i++) {
-      // distance to the chord (to the end point when the chord has no length)
-      const d = len > 0 ? Math.abs(dx * (ys[i]! - ay) - dy * (xs[i]! - ax)) / len : Math.hypot(xs[i]! - ax, ys[i]! - ay);
+      // distance to the chord as drawn, a segment: a point whose foot falls beyond an end is
+      // measured to that end (the distance to the infinite line let a steep chord hide it)
+      const t = l2 > 0 ? Math.max(0, Math.min(1, ((xs[i]! - ax) * dx + (ys[i]! - ay) * dy) / l2)) : 0;
+      const d = Math.hypot(xs[i]! - (ax + t * dx), ys[i]! - (ay + t * dy));
       if (d > worst) { worst = d; far = i; }
     }
     if (far >= 0) { keep[far] = 1; stack.push([a, far], [far, b]); }

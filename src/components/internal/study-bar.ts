@@ -88,12 +88,14 @@ export function renderStudyBar(bar: HTMLElement, s: BarState): void {
     const verdicts = s.run?.verdicts ?? [];
     if (verdicts.length) {
       const failed = verdicts.filter((v) => !v.pass).length;
-      parts.push(el('p', { className: 'study-summary', textContent: failed ? `${failed} of ${verdicts.length} verdicts fail.` : `All ${verdicts.length} verdicts pass.` }));
-      parts.push(el('ul', { className: 'study-verdicts' }, ...verdicts.map((v) => {
+      // the count is always in view; the lines (long, with margins and what they rest on) open on demand
+      const summary = el('summary', { className: 'study-summary', textContent: failed ? `${failed} of ${verdicts.length} verdicts fail.` : `All ${verdicts.length} verdicts pass.` });
+      summary.dataset.verdicts = failed ? 'fail' : 'pass';
+      parts.push(el('details', { className: 'study-verdict-list', open: verdicts.length <= 3 }, summary, el('ul', { className: 'study-verdicts' }, ...verdicts.map((v) => {
         const li = el('li', { textContent: `${st.steps.findIndex((x) => x.id === v.step) + 1}. ${s.verdictLine(v)}` });
         li.dataset.pass = String(v.pass);
         return li;
-      })));
+      }))));
     }
     const actions = el('p', { className: 'study-actions' });
     for (const c of s.calculatorsHere) {

@@ -145,10 +145,10 @@ class StudySession {
     const no = (id: string) => (this.run?.steps.findIndex((r) => r.id === id) ?? -1) + 1;
     const title = (id: string) => this.run?.steps.find((r) => r.id === id)?.title ?? id;
     switch (o.kind) {
-      case 'step': return `Study: from step ${no(o.step)} (${title(o.step)}), result ${o.output}${o.explicit ? ', bound in the study file' : ''}. A change here overrides it on this step only.`;
-      case 'study': return `Study quantity “${words(o.quantity)}”: a change here changes it for every step.`;
-      case 'limit': return `Study limit “${words(o.quantity)}”: a change here changes the limit for every step.`;
-      case 'typed': return overriding ? `Typed on this step, overriding the study's “${words(q!)}”.` : 'Typed on this step of the study.';
+      case 'step': return `Study: from step ${no(o.step)} (${title(o.step)}), result ${o.output}${o.explicit ? ' (bound in the study file)' : ''}. A change here holds for this step only.`;
+      case 'study': return `Study: ${words(o.quantity)}, shared by every step.`;
+      case 'limit': return `Study limit: ${words(o.quantity)}, shared by every step.`;
+      case 'typed': return overriding ? `Study: typed on this step, in place of the study's ${words(q!)}.` : 'Study: typed on this step.';
       case 'default': return `Page default; a change here adds “${words(q!)}” to the study.`;
     }
   }
