@@ -5,9 +5,10 @@ import { bodyFrom, bodyInputs } from './bodyInputs.ts';
 import { betaFrom, fluidFrom, fluidInputs, lawInputs, spanWarning } from './fluidInputs.ts';
 import { q } from '../quantityText.ts';
 import { DAMPING_FADE_CASES } from './dampingFadeCases.ts';
+import { ZERO_CELSIUS } from '../../core/constants.ts';
 
 /** Highest temperature searched for the equilibrium the body would reach if nothing failed at the limit (K). */
-const SEARCH_T_MAX = 673.15;
+const SEARCH_T_MAX = ZERO_CELSIUS + 400; // 673.15 K, the top of the temperature inputs
 
 function setup(values: Values) {
   const body = bodyFrom(values);
@@ -84,8 +85,8 @@ export const dampingFadeCalc = defineCalculator({
       };
     }
     const beyond = equilibriumAbove(body, model, duty, Tlimit);
-    if (beyond) warnings.push(`Past the limit the body would settle at ${(beyond.T - 273.15).toFixed(0)} °C with c = ${beyond.c.toFixed(0)} N·s/m, if the oil and seals survived that.`);
-    else warnings.push(`No equilibrium below ${(SEARCH_T_MAX - 273.15).toFixed(0)} °C either: the duty overwhelms the body.`);
+    if (beyond) warnings.push(`Past the limit the body would settle at ${(beyond.T - ZERO_CELSIUS).toFixed(0)} °C with c = ${beyond.c.toFixed(0)} N·s/m, if the oil and seals survived that.`);
+    else warnings.push(`No equilibrium below ${(SEARCH_T_MAX - ZERO_CELSIUS).toFixed(0)} °C either: the duty overwhelms the body.`);
     return { outputs: { status: 'no equilibrium below the limit', crossings: 0, tLimit: eq.tLimit, fade: 1 - cLimit / model.cRef, cLimit, Tactual: beyond?.T, cActual: beyond?.c, ...common }, warnings };
   },
   charts(values, result): ChartSpec[] {
@@ -98,7 +99,7 @@ export const dampingFadeCalc = defineCalculator({
     const c = T.map((t) => fadeCoefficient(model, t));
     const Teq = result.outputs.Teq as number | undefined;
     const markers = [{ x: Tlimit, label: 'limit' }, ...(Teq !== undefined ? [{ x: Teq, label: 'equilibrium' }] : [])];
-    const what = Teq !== undefined ? `They cross at ${(Teq - 273.15).toFixed(1)} °C, where c = ${(result.outputs.cEq as number).toFixed(0)} N·s/m.` : `They do not cross below the ${(Tlimit - 273.15).toFixed(0)} °C limit.`;
+    const what = Teq !== undefined ? `They cross at ${(Teq - ZERO_CELSIUS).toFixed(1)} °C, where c = ${(result.outputs.cEq as number).toFixed(0)} N·s/m.` : `They do not cross below the ${(Tlimit - ZERO_CELSIUS).toFixed(0)} °C limit.`;
     return [
       {
         id: 'equilibrium',

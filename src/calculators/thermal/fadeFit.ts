@@ -4,6 +4,7 @@ import { choice, defineCalculator, num, text, type ChartSpec, type Values } from
 import { q } from '../quantityText.ts';
 import { FADE_FIT_CASES } from './fadeFitCases.ts';
 import { betaFrom, DEFAULT_TABLE, fluidFrom, fluidInputs, lawInputs, spanWarning, type Fluid } from './fluidInputs.ts';
+import { ZERO_CELSIUS } from '../../core/constants.ts';
 
 /** TW-077 test bay: the supplier's dyno sheet for the TW-210 Fellrunner rear damper (invented demo data). */
 const DEMO_ROWS = 'T [°C], v [m/s], F [N]\n-20, 0.05, 94\n-20, 0.1, 183\n-20, 0.2, 373\n-20, 0.3, 563\n-20, 0.5, 923\n20, 0.05, 49\n20, 0.1, 101\n20, 0.2, 198\n20, 0.3, 300\n20, 0.5, 492\n80, 0.05, 47\n80, 0.1, 94\n80, 0.2, 184\n80, 0.3, 282\n80, 0.5, 464';
@@ -61,10 +62,10 @@ export const fadeFitCalc = defineCalculator({
     if (fit.temperatures.length === 2) warnings.push('Two test temperatures fix the two unknowns exactly: r² then shows only the scatter within each temperature. A third temperature checks the law.');
     const Ts = rows.map((r) => r[0]!);
     const Tcold = num(values, 'Tcold');
-    if (Tcold < Math.min(...Ts) - 1) warnings.push(`The cold-start temperature is below the coldest test (${(Math.min(...Ts) - 273.15).toFixed(1)} °C): the ratio is an extrapolation of the law.`);
+    if (Tcold < Math.min(...Ts) - 1) warnings.push(`The cold-start temperature is below the coldest test (${(Math.min(...Ts) - ZERO_CELSIUS).toFixed(1)} °C): the ratio is an extrapolation of the law.`);
     for (const w of [spanWarning(fluid, Tcold, 'cold-start temperature'), spanWarning(fluid, Math.min(...Ts), 'coldest test'), spanWarning(fluid, Math.max(...Ts), 'warmest test')]) if (w) warnings.push(w);
     const coldRatio = unclippedRatio(fit, Tcold);
-    if (!(coldRatio > 0)) throw new ComputationError(`the fitted law gives no positive coefficient at ${(Tcold - 273.15).toFixed(1)} °C (share ${fit.share.toFixed(3)})`);
+    if (!(coldRatio > 0)) throw new ComputationError(`the fitted law gives no positive coefficient at ${(Tcold - ZERO_CELSIUS).toFixed(1)} °C (share ${fit.share.toFixed(3)})`);
     return {
       outputs: { share: fit.share, cRef: fit.cRef, dcdT: fit.dcdT, coldRatio, r2: fit.r2, rmsError: fit.rmsError, temperatures: fit.temperatures.length },
       warnings,
@@ -102,8 +103,8 @@ export const fadeFitCalc = defineCalculator({
           const mine = rows.filter((r) => Math.abs(r[0]! - g.T) <= 1);
           const cFit = fit.cRef * unclippedRatio(fit, g.T);
           return [
-            { label: `tests at ${(g.T - 273.15).toFixed(0)} °C`, x: mine.map((r) => r[1]!), y: mine.map((r) => r[2]!), style: 'points' as const, tone: i % 6 },
-            { label: `law at ${(g.T - 273.15).toFixed(0)} °C`, x: [0, vmax], y: [0, cFit * vmax], style: 'dash' as const, tone: i % 6, legend: false as const },
+            { label: `tests at ${(g.T - ZERO_CELSIUS).toFixed(0)} °C`, x: mine.map((r) => r[1]!), y: mine.map((r) => r[2]!), style: 'points' as const, tone: i % 6 },
+            { label: `law at ${(g.T - ZERO_CELSIUS).toFixed(0)} °C`, x: [0, vmax], y: [0, cFit * vmax], style: 'dash' as const, tone: i % 6, legend: false as const },
           ];
         }),
         summary: `${rows.length} test points at ${byT.length} temperatures; the fitted law leaves an rms force error of ${q(fit.rmsError, 'force', 3)} (r² = ${fit.r2.toFixed(5)}).`,

@@ -8,6 +8,7 @@ import {
   andradeCurve, mineralOilCurve, nu100ForViscosityIndex, parseViscosityTable, type ViscosityCurve,
 } from '../../core/thermal/index.ts';
 import { choice, num, text, type InputDef, type Values } from '../types.ts';
+import { ZERO_CELSIUS } from '../../core/constants.ts';
 
 export const VG_PRESETS = [10, 15, 22, 32, 46, 68, 100] as const;
 
@@ -63,7 +64,7 @@ export function fluidFrom(values: Values): FluidChoice {
 /** Warns when a temperature the page uses lies outside a measured table. */
 export function spanWarning(fluid: FluidChoice, T: number, what: string): string | undefined {
   if (!fluid.span || (T >= fluid.span.Tmin - 1e-9 && T <= fluid.span.Tmax + 1e-9)) return undefined;
-  return `The ${what} (${(T - 273.15).toFixed(1)} °C) is outside the viscosity table (${(fluid.span.Tmin - 273.15).toFixed(1)} to ${(fluid.span.Tmax - 273.15).toFixed(1)} °C): the end piece is extended.`;
+  return `The ${what} (${(T - ZERO_CELSIUS).toFixed(1)} °C) is outside the viscosity table (${(fluid.span.Tmin - ZERO_CELSIUS).toFixed(1)} to ${(fluid.span.Tmax - ZERO_CELSIUS).toFixed(1)} °C): the end piece is extended.`;
 }
 
 /** The fade fadeLaw: share law (orifice part constant) or physical law (laminar ∝ μ, orifice ∝ ρ). */

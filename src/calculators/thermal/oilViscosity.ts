@@ -1,6 +1,7 @@
 import { isoViscosityGrade, waltherFit, waltherViscosity } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
 import { q } from '../quantityText.ts';
+import { ZERO_CELSIUS } from '../../core/constants.ts';
 
 const VIS_A = { nu40: 32e-6, nu100: 5.4e-6 } as const;
 
@@ -31,7 +32,7 @@ export const oilViscosityCalc = defineCalculator({
     const nu = waltherViscosity(f, T);
     const warnings: string[] = [];
     if (nu < 2e-6) warnings.push('Below 2 mm²/s the simple D341 form (ν + 0.7) loses accuracy; the standard adds correction terms there.');
-    if (T < 273.15 || T > 423.15) warnings.push('Outside 0–150 °C the line is an extrapolation of two points: check against measured data.');
+    if (T < ZERO_CELSIUS || T > ZERO_CELSIUS + 150) warnings.push('Outside 0–150 °C the line is an extrapolation of two points: check against measured data.');
     return { outputs: { nu, A: f.A, B: f.B, ratio40: nu / num(values, 'nu40'), grade: isoViscosityGrade(num(values, 'nu40')) }, warnings };
   },
   charts(values, result): ChartSpec[] {

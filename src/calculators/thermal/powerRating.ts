@@ -2,6 +2,7 @@ import { bodyCooling } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec } from '../types.ts';
 import { BODY_DETAIL_OUTPUTS, bodyFrom, bodyInputs } from './bodyInputs.ts';
 import { q } from '../quantityText.ts';
+import { ZERO_CELSIUS } from '../../core/constants.ts';
 
 const TW210 = { D: 0.05, L: 0.35, orientation: 'horizontal', Tamb: 298.15, eps: 0.9 } as const;
 
@@ -53,7 +54,7 @@ export const powerRatingCalc = defineCalculator({
       title: 'Power rating against air speed across the body',
       x: { label: 'Air speed across the body', kind: 'velocity' },
       y: { label: 'Continuous rating', kind: 'power', min: 0 },
-      series: [{ label: `P_max at ${(Tmax - 273.15).toFixed(0)} °C`, x: V, y: P, tone: 0 }],
+      series: [{ label: `P_max at ${(Tmax - ZERO_CELSIUS).toFixed(0)} °C`, x: V, y: P, tone: 0 }],
       markers: body.V > 0 ? [{ x: body.V, label: 'this case' }] : [],
       summary: `At ${q(Tmax, 'temperature', 3)} the body sheds ${q(P[0]!, 'power', 3)} in still air and ${q(P.at(-1)!, 'power', 3)} with ${q(Vtop, 'velocity', 2)} across it.`,
     }];

@@ -1,4 +1,4 @@
-import { bodyCooling, steadyTemperature as solve } from '../../core/thermal/index.ts';
+import { BODY_T_RANGE, bodyCooling, steadyTemperature as solve } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec } from '../types.ts';
 import { BODY_DETAIL_OUTPUTS, bodyFrom, bodyInputs } from './bodyInputs.ts';
 import { q } from '../quantityText.ts';
@@ -35,7 +35,7 @@ export const steadyTemperatureCalc = defineCalculator({
     const P = num(values, 'P');
     const Ts = result.outputs.Ts as number;
     const lo = body.Tamb;
-    const hi = Math.min(700, Math.max(Ts + 0.4 * (Ts - lo), lo + 80));
+    const hi = Math.min(BODY_T_RANGE.max, Math.max(Ts + 0.4 * (Ts - lo), lo + 80));
     const T = Array.from({ length: 61 }, (_, i) => lo + ((hi - lo) * i) / 60);
     const Q = T.map((t) => bodyCooling(body, t).Q);
     return [{

@@ -2,10 +2,9 @@
  * Energy an end stop absorbs when a moving mass arrives at speed v, driven on by a propelling
  * force and (vertical, downward travel) by gravity over the stop's stroke.
  */
+import { STANDARD_GRAVITY } from '../constants.ts';
 import { NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
 import type { DutySummary } from './dutySummary.ts';
-
-export const STANDARD_GRAVITY = 9.80665;
 
 export interface ImpactInput {
   /** Moving mass, kg. */

@@ -1,5 +1,6 @@
 /** Damper duty: harmonic, random road, end-stop impacts, structural dampers, recorded motion. */
-export { ISO_8608_CLASSES, ISO_8608_N0, roadRoughness, type RoadClass, type ClassValue } from './isoRoadClass.ts';
+export { ISO_8608_N0, STANDARD_GRAVITY } from '../constants.ts';
+export { ISO_8608_CLASSES, roadRoughness, type RoadClass, type ClassValue } from './isoRoadClass.ts';
 export { checkRoad, roadDisplacementPsd, roadVelocityWhiteLevel, type RoadInput } from './roadPsd.ts';
 export { checkQuarterCar, quarterCarGains, quarterCarModes, quarterCarCharacteristicFrequencies, type QuarterCar, type QuarterCarGains } from './quarterCar.ts';
 export { spectralIntegral, type SpectralIntegral } from './spectralIntegral.ts';
@@ -8,7 +9,7 @@ export { quarterCarWhiteVariances, whiteRoadDamperPower, type QuarterCarVariance
 export { statisticalLinearisation, type Linearised } from './statisticalLinearisation.ts';
 export { roadDuty, type RoadDamper, type RoadDuty } from './roadDuty.ts';
 export { type DutySummary } from './dutySummary.ts';
-export { impactEnergy, STANDARD_GRAVITY, type ImpactInput, type ImpactEnergy } from './impactEnergy.ts';
+export { impactEnergy, type ImpactInput, type ImpactEnergy } from './impactEnergy.ts';
 export { linearStop, type LinearStop } from './linearStop.ts';
 export { storeyDampers, adiabaticRise, type StoreyDampers, type StoreyDamperResult } from './structuralDampers.ts';
 export { parseRecordedMotion, type ParsedRecord, type RejectedRow } from './recordedMotionCsv.ts';

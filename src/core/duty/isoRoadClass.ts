@@ -8,9 +8,6 @@ export type RoadClass = (typeof ISO_8608_CLASSES)[number];
 /** Which value of a class: its geometric mean, or its lower or upper limit. */
 export type ClassValue = 'mean' | 'lower' | 'upper';
 
-/** Reference spatial frequency of ISO 8608, cycles per metre. */
-export const ISO_8608_N0 = 0.1;
-
 /**
  * Degree of roughness G_d(n0) of an ISO 8608 class.
  *

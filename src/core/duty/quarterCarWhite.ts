@@ -1,6 +1,7 @@
 /**
  * Closed-form variances of the quarter car driven by white road velocity (ISO 8608 with w = 2).
  */
+import { ISO_8608_N0_SQUARED } from '../constants.ts';
 import type { QuarterCar } from './quarterCar.ts';
 
 export interface QuarterCarVariances {
@@ -53,5 +54,5 @@ export function quarterCarWhiteVariances(q: QuarterCar, G0: number): QuarterCarV
  * @source zuo2013 (independence of damper power from suspension parameters); closed form
  */
 export function whiteRoadDamperPower(kt: number, Gd0: number, V: number): number {
-  return Math.PI ** 2 * kt * Gd0 * 0.01 * V;
+  return Math.PI ** 2 * kt * Gd0 * ISO_8608_N0_SQUARED * V;
 }

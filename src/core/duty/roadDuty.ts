@@ -2,6 +2,7 @@
  * Damper duty of a quarter car on an ISO 8608 road: RMS responses and mean damper power by
  * frequency-domain integration, with the white-velocity closed forms beside them when w = 2.
  */
+import { STANDARD_GRAVITY } from '../constants.ts';
 import { ALPHA_RANGE, gaussianMomentFactor } from '../dampers/index.ts';
 import { POSITIVE, requireInRange } from '../errors.ts';
 import { checkQuarterCar, type QuarterCar } from './quarterCar.ts';
@@ -39,8 +40,6 @@ export interface RoadDuty {
 }
 
 const KEYS = ['damperVelocity', 'travel', 'bodyAcceleration', 'tyreLoad'] as const;
-
-const G_N = 9.80665;
 
 /**
  * Road duty of one corner.
@@ -89,7 +88,7 @@ export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: Ro
     accRms: Math.sqrt(r.bodyAcceleration.value),
     travelRms: Math.sqrt(r.travel.value),
     tyreLoadRms,
-    tyreLoadRatio: tyreLoadRms / ((car.ms + car.mu) * G_N),
+    tyreLoadRatio: tyreLoadRms / ((car.ms + car.mu) * STANDARD_GRAVITY),
     band: r.damperVelocity.band,
     relError: Math.max(r.damperVelocity.relError, r.travel.relError, r.bodyAcceleration.relError, r.tyreLoad.relError),
   };

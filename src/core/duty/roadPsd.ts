@@ -2,7 +2,7 @@
  * Road profile PSD as the vehicle sees it in time, from the ISO 8608 spatial form.
  */
 import { POSITIVE, requireInRange } from '../errors.ts';
-import { ISO_8608_N0 } from './isoRoadClass.ts';
+import { ISO_8608_N0 } from '../constants.ts';
 
 /** A road described by its degree of roughness and waviness, driven at speed V. */
 export interface RoadInput {

@@ -10,6 +10,8 @@
  * entered from memory and are checked for internal consistency when the module loads in the
  * tests (ν = μ/ρ to 0.2 %, Pr = μ·c_p/k to 0.5 %), which a mistyped digit would break.
  */
+import { AIR_TABLE_RANGE } from '../constants.ts';
+
 export interface AirRow {
   readonly T: number;
   readonly rho: number;
@@ -41,6 +43,10 @@ export const AIR_TABLE: readonly AirRow[] = RAW.map(([T, rho, cp, mu, nu, k, alp
   T, rho, cp: cp * 1e3, mu: mu * 1e-7, nu: nu * 1e-6, k: k * 1e-3, alpha: alpha * 1e-6, Pr,
 }));
 
-/** Temperature range covered by the table, K. */
-export const AIR_T_MIN = 200;
-export const AIR_T_MAX = 700;
+/** Temperature range covered by the table, K (the rows must span it exactly: checked below). */
+export const AIR_T_MIN = AIR_TABLE_RANGE.min;
+export const AIR_T_MAX = AIR_TABLE_RANGE.max;
+
+if (AIR_TABLE[0]!.T !== AIR_T_MIN || AIR_TABLE[AIR_TABLE.length - 1]!.T !== AIR_T_MAX) {
+  throw new Error(`air table rows span ${AIR_TABLE[0]!.T}–${AIR_TABLE[AIR_TABLE.length - 1]!.T} K, not the stated ${AIR_T_MIN}–${AIR_T_MAX} K`);
+}

@@ -1,3 +1,4 @@
+import { AIR_TABLE_RANGE } from '../constants.ts';
 import { POSITIVE, requireInRange } from '../errors.ts';
 import { airProperties } from './airProperties.ts';
 import { CHURCHILL_BERNSTEIN_REPR_MIN, churchillBernstein } from './churchillBernstein.ts';
@@ -40,7 +41,7 @@ export interface BodyCooling {
 }
 
 /** Temperatures the air table supports for body and air (film temperature stays inside it). */
-export const BODY_T_RANGE = { min: 200, max: 700 } as const;
+export const BODY_T_RANGE = AIR_TABLE_RANGE;
 
 /**
  * Heat leaving a cylindrical body at surface temperature Ts by convection and radiation.

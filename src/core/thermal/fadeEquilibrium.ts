@@ -1,6 +1,6 @@
 import { NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
 import { bracketRoots } from '../numeric/bracketRoots.ts';
-import { bodyCooling, type Body } from './bodyCooling.ts';
+import { BODY_T_RANGE, bodyCooling, type Body } from './bodyCooling.ts';
 import { requireBalanced } from './checkedRoot.ts';
 import { fadeCoefficient, type FadeModel } from './fadeCoefficient.ts';
 import { timeToLimit } from './warmUpWithLoss.ts';
@@ -43,7 +43,7 @@ export interface FadeEquilibrium {
  * @source incropera2007 §1.3 energy balance (from memory); brent1973 ch. 4; fade model: common practice, no source
  */
 export function fadeEquilibrium(body: Body, model: FadeModel, duty: FadeDuty, Tlimit: number, Cth?: number): FadeEquilibrium {
-  requireInRange('Tlimit', Tlimit, { min: body.Tamb, max: 700, minExclusive: true }, 'K');
+  requireInRange('Tlimit', Tlimit, { min: body.Tamb, max: BODY_T_RANGE.max, minExclusive: true }, 'K');
   if (duty.kind === 'harmonic') {
     requireInRange('X', duty.X, NON_NEGATIVE, 'm');
     requireInRange('omega', duty.omega, NON_NEGATIVE, 'rad/s');

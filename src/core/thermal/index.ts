@@ -1,7 +1,7 @@
 /** Thermal rating of damper bodies: air properties, convection, radiation, steady and transient temperature, oil, fade. */
 export { AIR_TABLE, AIR_T_MIN, AIR_T_MAX, type AirRow } from './airTable.ts';
 export { airProperties } from './airProperties.ts';
-export { STEFAN_BOLTZMANN, STANDARD_GRAVITY } from './stefanBoltzmann.ts';
+export { STEFAN_BOLTZMANN, STANDARD_GRAVITY } from '../constants.ts';
 export { radiationCoefficient } from './radiationCoefficient.ts';
 export { rayleighNumber } from './rayleighNumber.ts';
 export { churchillChuCylinder, CHURCHILL_CHU_CYLINDER_RA_MAX } from './churchillChuCylinder.ts';

@@ -1,5 +1,5 @@
 import { requireInRange } from '../errors.ts';
-import { STEFAN_BOLTZMANN } from './stefanBoltzmann.ts';
+import { STEFAN_BOLTZMANN } from '../constants.ts';
 
 /**
  * Linearised radiation coefficient of a small grey surface in large isothermal surroundings:

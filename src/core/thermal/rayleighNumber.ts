@@ -1,6 +1,6 @@
 import { NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
 import type { AirRow } from './airTable.ts';
-import { STANDARD_GRAVITY } from './stefanBoltzmann.ts';
+import { STANDARD_GRAVITY } from '../constants.ts';
 
 /**
  * Grashof and Rayleigh numbers of an ideal gas (β = 1/T_f) over a length scale.

@@ -1,6 +1,7 @@
 import { ComputationError, NON_NEGATIVE, requireInRange } from '../errors.ts';
 import { BODY_T_RANGE, bodyCooling, type Body, type BodyCooling } from './bodyCooling.ts';
 import { checkedRoot } from './checkedRoot.ts';
+import { ZERO_CELSIUS } from '../constants.ts';
 
 /**
  * Body temperature at which a mean power P leaves the body in steady state: the root of
@@ -27,7 +28,7 @@ export function steadyTemperature(body: Body, P: number): BodyCooling & { readon
   const f = (T: number) => bodyCooling(body, T).Q - P;
   const fHi = f(hi);
   if (fHi < 0) {
-    throw new ComputationError(`the body cannot shed ${P.toPrecision(4)} W below ${hi} K (${(hi - 273.15).toFixed(0)} °C): at that temperature it sheds only ${(fHi + P).toPrecision(4)} W`);
+    throw new ComputationError(`the body cannot shed ${P.toPrecision(4)} W below ${hi} K (${(hi - ZERO_CELSIUS).toFixed(0)} °C): at that temperature it sheds only ${(fHi + P).toPrecision(4)} W`);
   }
   if (f(lo) >= 0) return { ...bodyCooling(body, lo), Ts: lo };
   const Ts = checkedRoot(f, lo, hi, 'steady body temperature', 'W', { scale: balanceScale(body, P, lo, hi) }).x;

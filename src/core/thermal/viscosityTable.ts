@@ -1,6 +1,7 @@
 import { ComputationError, InputRangeError, POSITIVE, requireInRange } from '../errors.ts';
 import { readUnitRows } from './unitRows.ts';
 import type { ViscosityCurve } from './viscosityCurve.ts';
+import { ZERO_CELSIUS } from '../constants.ts';
 
 /** Most rows a viscosity table may hold. */
 export const MAX_VISCOSITY_ROWS = 200;
@@ -26,8 +27,8 @@ export function viscosityTableCurve(rows: readonly (readonly number[])[], input 
   const pts = rows.map((r, i) => ({ T: requireInRange(`${input} row ${i + 1} T`, r[0]!, POSITIVE, 'K'), nu: requireInRange(`${input} row ${i + 1} ν`, r[1]!, POSITIVE, 'm²/s') }))
     .sort((p, q) => p.T - q.T);
   for (let i = 1; i < pts.length; i++) {
-    if (!(pts[i]!.T > pts[i - 1]!.T)) throw new InputRangeError(input, pts[i]!.T, undefined, 'K', `temperature ${(pts[i]!.T - 273.15).toFixed(2)} °C appears twice`);
-    if (!(pts[i]!.nu < pts[i - 1]!.nu)) throw new InputRangeError(input, pts[i]!.nu, undefined, 'm²/s', `the viscosity at ${(pts[i]!.T - 273.15).toFixed(2)} °C is not below the one at ${(pts[i - 1]!.T - 273.15).toFixed(2)} °C: a liquid thins as it warms`);
+    if (!(pts[i]!.T > pts[i - 1]!.T)) throw new InputRangeError(input, pts[i]!.T, undefined, 'K', `temperature ${(pts[i]!.T - ZERO_CELSIUS).toFixed(2)} °C appears twice`);
+    if (!(pts[i]!.nu < pts[i - 1]!.nu)) throw new InputRangeError(input, pts[i]!.nu, undefined, 'm²/s', `the viscosity at ${(pts[i]!.T - ZERO_CELSIUS).toFixed(2)} °C is not below the one at ${(pts[i - 1]!.T - ZERO_CELSIUS).toFixed(2)} °C: a liquid thins as it warms`);
   }
   const x = pts.map((p) => 1 / p.T);
   const y = pts.map((p) => Math.log(p.nu));

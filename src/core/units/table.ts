@@ -7,6 +7,7 @@
  * than copied rounded, so they stay exact. The table is validated when it loads (validate.ts).
  */
 import type { QuantityKind } from './kinds.ts';
+import { STANDARD_GRAVITY as GN, ZERO_CELSIUS } from '../constants.ts';
 
 export type UnitSystem = 'SI' | 'US';
 
@@ -25,7 +26,6 @@ export interface UnitDef {
 const IN = 0.0254; // m, exact (NIST SP 811 B.8)
 const FT = 0.3048; // m, exact
 const LB = 0.45359237; // kg, exact
-const GN = 9.80665; // m/s², standard gravity, exact
 const LBF = LB * GN; // N, exact by definition
 const BTU = 1055.05585262; // J, International Table Btu, exact
 const DEGF = 5 / 9; // K per °F, exact
@@ -74,7 +74,7 @@ export const UNITS: readonly UnitDef[] = [
   us('hp', 'hp', 'power', 550 * LBF * FT), us('Btu/h', 'Btu/h', 'power', BTU / HOUR), us('ft.lbf/s', 'ft·lbf/s', 'power', LBF * FT),
 
   { id: 'K', symbol: 'K', kind: 'temperature', factor: 1, exact: true, system: 'SI', source: 'SI' },
-  { id: 'degC', symbol: '°C', kind: 'temperature', factor: 1, offset: 273.15, exact: true, system: 'SI', source: 'SI' },
+  { id: 'degC', symbol: '°C', kind: 'temperature', factor: 1, offset: ZERO_CELSIUS, exact: true, system: 'SI', source: 'SI' },
   { id: 'degF', symbol: '°F', kind: 'temperature', factor: DEGF, offset: 459.67 * DEGF, exact: true, system: 'US', source: 'NIST SP 811 B.9' },
 
   { id: 'dK', symbol: 'K', kind: 'temperatureDifference', factor: 1, exact: true, system: 'SI', source: 'SI' },

@@ -24,7 +24,7 @@ describe('brentRoot', () => {
       const f = (x: number) => a * (x - r) ** 3 + (x - r);
       const x = brentRoot(f, -100, 100, { xTol: 1e-10 });
       return x >= -100 && x <= 100 && Math.abs(x - r) < 1e-8;
-    }));
+    }), { seed: 1, numRuns: 100 });
   });
 });
 

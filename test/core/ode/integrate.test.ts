@@ -74,7 +74,7 @@ describe('integrateAdaptive', () => {
         const tEnd = 5 * 2 * Math.PI / wn; // five periods
         const r = integrateAdaptive(linearSystem(p), 0, [p.x0, 0], tEnd, { rtol: 1e-10, atol: [1e-14, 1e-14 * wn] });
         return Math.abs(r.y[0]! - linearExact(p)(tEnd).x) < 1e-8 * p.x0;
-      }), { numRuns: 40 });
+      }), { seed: 1, numRuns: 40 });
   });
 });
 

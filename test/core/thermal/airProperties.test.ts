@@ -42,6 +42,6 @@ describe('airProperties (Incropera 6th ed. Table A.4, from memory)', () => {
   });
   it('gives viscosity and conductivity that rise with temperature', () => {
     fc.assert(fc.property(fc.double({ min: 200, max: 699, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }), (T, dT) =>
-      airProperties(T + dT).nu > airProperties(T).nu && airProperties(T + dT).k > airProperties(T).k));
+      airProperties(T + dT).nu > airProperties(T).nu && airProperties(T + dT).k > airProperties(T).k), { seed: 1, numRuns: 100 });
   });
 });

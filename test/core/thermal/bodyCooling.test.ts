@@ -64,16 +64,16 @@ describe('steady temperature and rating', () => {
   const power = fc.double({ min: 1, max: 200, noNaN: true });
   const safe = (b: Body, P: number) => P < 0.9 * bodyCooling(b, 690).Q;
   it('steady temperature rises with power', () => {
-    fc.assert(fc.property(body, power, (b, P) => !safe(b, P * 1.2) || steadyTemperature(b, P * 1.2).Ts > steadyTemperature(b, P).Ts), { numRuns: 60 });
+    fc.assert(fc.property(body, power, (b, P) => !safe(b, P * 1.2) || steadyTemperature(b, P * 1.2).Ts > steadyTemperature(b, P).Ts), { seed: 1, numRuns: 60 });
   });
   it('steady temperature falls with air speed', () => {
-    fc.assert(fc.property(body, power, (b, P) => !safe(b, P) || steadyTemperature({ ...b, V: b.V + 2 }, P).Ts < steadyTemperature(b, P).Ts), { numRuns: 60 });
+    fc.assert(fc.property(body, power, (b, P) => !safe(b, P) || steadyTemperature({ ...b, V: b.V + 2 }, P).Ts < steadyTemperature(b, P).Ts), { seed: 1, numRuns: 60 });
   });
   it('steady temperature falls with area (longer or thicker body)', () => {
     fc.assert(fc.property(body, power, (b, P) => !safe(b, P) ||
-      (steadyTemperature({ ...b, L: b.L * 1.3 }, P).Ts < steadyTemperature(b, P).Ts && steadyTemperature({ ...b, D: b.D * 1.3 }, P).Ts < steadyTemperature(b, P).Ts)), { numRuns: 60 });
+      (steadyTemperature({ ...b, L: b.L * 1.3 }, P).Ts < steadyTemperature(b, P).Ts && steadyTemperature({ ...b, D: b.D * 1.3 }, P).Ts < steadyTemperature(b, P).Ts)), { seed: 1, numRuns: 60 });
   });
   it('the rating rises with the allowed temperature', () => {
-    fc.assert(fc.property(body, fc.double({ min: 330, max: 600, noNaN: true }), (b, T) => powerFor(b, T + 5) > powerFor(b, T)), { numRuns: 80 });
+    fc.assert(fc.property(body, fc.double({ min: 330, max: 600, noNaN: true }), (b, T) => powerFor(b, T + 5) > powerFor(b, T)), { seed: 1, numRuns: 80 });
   });
 });

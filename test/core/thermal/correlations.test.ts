@@ -46,11 +46,11 @@ describe('convection and radiation correlations against published values', () =>
     fc.assert(fc.property(fc.double({ min: 0, max: 500, noNaN: true }), fc.double({ min: 0, max: 500, noNaN: true }), (a, b) => {
       const h = mixedConvection(a, b);
       return h >= Math.max(a, b) - 1e-12 && h <= a + b + 1e-12;
-    }));
+    }), { seed: 1, numRuns: 100 });
   });
   it('gives Nusselt numbers that rise with Ra and with Re', () => {
     fc.assert(fc.property(fc.double({ min: 0, max: 1e11, noNaN: true }), (Ra) =>
-      churchillChuCylinder(Ra * 1.01 + 1, 0.7) > churchillChuCylinder(Ra, 0.7) && verticalPlateNusselt(Ra * 1.01 + 1, 0.7) > verticalPlateNusselt(Ra, 0.7)));
-    fc.assert(fc.property(fc.double({ min: 0, max: 1e7, noNaN: true }), (Re) => churchillBernstein(Re * 1.01 + 1, 0.7) > churchillBernstein(Re, 0.7)));
+      churchillChuCylinder(Ra * 1.01 + 1, 0.7) > churchillChuCylinder(Ra, 0.7) && verticalPlateNusselt(Ra * 1.01 + 1, 0.7) > verticalPlateNusselt(Ra, 0.7)), { seed: 1, numRuns: 100 });
+    fc.assert(fc.property(fc.double({ min: 0, max: 1e7, noNaN: true }), (Re) => churchillBernstein(Re * 1.01 + 1, 0.7) > churchillBernstein(Re, 0.7)), { seed: 1, numRuns: 100 });
   });
 });

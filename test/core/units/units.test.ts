@@ -41,7 +41,7 @@ describe('unit table', () => {
   });
   it('round-trips every unit (common practice, no source)', () => {
     fc.assert(fc.property(fc.constantFrom(...UNITS), fc.double({ min: -1e6, max: 1e6, noNaN: true }), (u, x) =>
-      Math.abs(fromSI(toSI(x, u), u) - x) <= 1e-9 * (1 + Math.abs(x))));
+      Math.abs(fromSI(toSI(x, u), u) - x) <= 1e-9 * (1 + Math.abs(x))), { seed: 1, numRuns: 100 });
   });
   it('parses unit-suffixed values', () => {
     expect(parseQuantity('25 lb', 'mass')).toBeCloseTo(11.33980925, 10);

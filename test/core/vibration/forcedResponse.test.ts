@@ -40,24 +40,24 @@ describe('magnification, phase and transmissibility against reference values', (
 
 describe('forced response properties', () => {
   it('transmissibility is exactly 1 at r = √2 for any damping', () => {
-    fc.assert(fc.property(zetaArb, (z) => Math.abs(transmissibility(Math.SQRT2, z) - 1) < 1e-12));
+    fc.assert(fc.property(zetaArb, (z) => Math.abs(transmissibility(Math.SQRT2, z) - 1) < 1e-12), { seed: 1, numRuns: 100 });
   });
   it('transmissibility is below 1 above r = √2 and above 1 below it, for any damping', () => {
     fc.assert(fc.property(zetaArb, fc.double({ min: 1.45, max: 100, noNaN: true }), fc.double({ min: 0.01, max: 1.38, noNaN: true }), (z, hi, lo) =>
-      transmissibility(hi, z) < 1 && transmissibility(lo, z) > 1));
+      transmissibility(hi, z) < 1 && transmissibility(lo, z) > 1), { seed: 1, numRuns: 100 });
   });
   it('the displacement magnification is largest at r = √(1−2ζ²) for every ζ < 1/√2', () => {
     fc.assert(fc.property(fc.double({ min: 0.01, max: 0.7, noNaN: true }), fc.double({ min: -0.05, max: 0.05, noNaN: true }), (z, dr) => {
       const p = displacementPeak(z);
       return Math.abs(magnificationFactor(p.r, z) - p.M) < 1e-9 * p.M && magnificationFactor(Math.max(0, p.r + dr), z) <= p.M * (1 + 1e-12);
-    }));
+    }), { seed: 1, numRuns: 100 });
   });
   it('the magnification falls monotonically with frequency when ζ ≥ 1/√2', () => {
     fc.assert(fc.property(fc.double({ min: 0.7072, max: 3, noNaN: true }), fc.double({ min: 0, max: 10, noNaN: true }), (z, r) =>
-      magnificationFactor(r + 0.01, z) < magnificationFactor(r, z)));
+      magnificationFactor(r + 0.01, z) < magnificationFactor(r, z)), { seed: 1, numRuns: 100 });
   });
   it('the phase lag is π/2 at resonance and rises from 0 towards π', () => {
-    fc.assert(fc.property(zetaArb, (z) => Math.abs(phaseLag(1, z) - Math.PI / 2) < 1e-12 && phaseLag(0.1, z) < phaseLag(10, z)));
+    fc.assert(fc.property(zetaArb, (z) => Math.abs(phaseLag(1, z) - Math.PI / 2) < 1e-12 && phaseLag(0.1, z) < phaseLag(10, z)), { seed: 1, numRuns: 100 });
   });
   it('base excitation: |X/Y| equals T_R, the relative motion tends to Y far above resonance, the phase lies in [0, π]', () => {
     fc.assert(fc.property(zetaArb, fc.double({ min: 0.01, max: 50, noNaN: true }), (z, r) => {
@@ -65,14 +65,14 @@ describe('forced response properties', () => {
       const k = 4 * Math.PI ** 2;
       const o = forcedResponse({ m: 1, k, c: 2 * z * 2 * Math.PI, f: r, excitation: 'base', amplitude: 1 });
       return ok && Math.abs(o.X - transmissibility(r, z)) < 1e-12 * o.X + 1e-15;
-    }));
+    }), { seed: 1, numRuns: 100 });
   });
   it('mean damper power equals the energy per cycle πcωZ² times the frequency (Chopra 5th ed. Eq. 3.8.1)', () => {
     fc.assert(fc.property(fc.double({ min: 1, max: 1e4, noNaN: true }), fc.double({ min: 0.1, max: 100, noNaN: true }), (c, f) => {
       const o = forcedResponse({ m: 10, k: 4000, c, f, excitation: 'force', amplitude: 100 });
       const perCycle = Math.PI * c * o.omega * o.Z * o.Z;
       return Math.abs(o.P - perCycle * f) <= 1e-12 * o.P;
-    }));
+    }), { seed: 1, numRuns: 100 });
   });
   it('refuses an undamped system driven at resonance, naming r', () => {
     expect(() => forcedResponse({ m: 1, k: 4 * Math.PI ** 2, c: 0, f: 1, excitation: 'force', amplitude: 1 })).toThrow(InputRangeError);

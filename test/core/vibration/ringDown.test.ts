@@ -66,7 +66,7 @@ describe('ringDown', () => {
       const cycles = Math.min(25, Math.max(5, Math.ceil(3 / (2 * Math.PI * zeta))));
       const s = record({ zeta, wn: 2 * Math.PI * 3, offset, noise: 0.005, cycles, perCycle: 50, jitter: 0.5, seed });
       return Math.abs(ringDown(s.t, s.y).zeta / zeta - 1) < 0.02;
-    }), { numRuns: 40 });
+    }), { seed: 1, numRuns: 40 });
   });
 
   it('handles a long record (200 000 samples) without running out of stack', () => {

@@ -11,7 +11,7 @@ const CASES = [
   // m = 200 kg, damped period 2 s, amplitude to 1/4 in half a cycle → δ = ln 16, ζ = 0.4037, ωn = 3.4339 rad/s, c = 554.5, k = 2358.3.
   { label: 'Rao motorcycle δ→ζ', computed: () => zetaFromLogDecrement(Math.log(16)), expected: 0.4037, tol: 2e-4, why: 'published to 4 s.f.', provenance: 'published' },
   { label: 'Rao motorcycle ωn', computed: () => naturalFrequency(200, 2358.3), expected: 3.4339, tol: 5e-5, why: 'published to 5 s.f.', provenance: 'published' },
-  { label: 'Rao motorcycle c', computed: () => 2 * 0.4037 * Math.sqrt(2358.3 * 200), expected: 554.5, tol: 5e-4, why: 'published to 4 s.f.', provenance: 'published' },
+  { label: 'Rao motorcycle c', computed: () => zetaFromLogDecrement(Math.log(16)) * criticalDamping(200, 2358.3), expected: 554.5, tol: 5e-4, why: 'published to 4 s.f.', provenance: 'published' },
   // Inman, Engineering Vibration 4th ed., ch. 1 example (m = 49.2 g, k = 857.8 N/m, c = 0.11 kg/s); from memory.
   { label: 'Inman ωn', computed: () => naturalFrequency(0.0492, 857.8), expected: 132.0, tol: 5e-4, why: '4 s.f. in the book', provenance: 'from memory' },
   { label: 'Inman c_cr', computed: () => criticalDamping(0.0492, 857.8), expected: 12.99, tol: 5e-4, why: '4 s.f.', provenance: 'from memory' },
@@ -27,7 +27,7 @@ describe('SDOF parameters against published values', () => {
 
 describe('SDOF parameter invariants', () => {
   it('log decrement and damping ratio are exact inverses', () => {
-    fc.assert(fc.property(fc.double({ min: 0, max: 0.999, noNaN: true }), (z) => Math.abs(zetaFromLogDecrement(logDecrementFromZeta(z)) - z) < 1e-12));
+    fc.assert(fc.property(fc.double({ min: 0, max: 0.999, noNaN: true }), (z) => Math.abs(zetaFromLogDecrement(logDecrementFromZeta(z)) - z) < 1e-12), { seed: 1, numRuns: 100 });
   });
   it('the small-damping form δ/2π is 10 % off near ζ = 0.4 (pitfall worth knowing)', () => {
     // common practice, no source: exact vs small-damping relation of the log decrement
@@ -36,7 +36,7 @@ describe('SDOF parameter invariants', () => {
   });
   it('Q = 1/(2ζ) and the damped frequency is below the natural one', () => {
     fc.assert(fc.property(fc.double({ min: 1e-4, max: 0.999, noNaN: true }), fc.double({ min: 0.1, max: 1e4, noNaN: true }), (z, wn) =>
-      qualityFactor(z) * 2 * z === 1 || Math.abs(qualityFactor(z) * 2 * z - 1) < 1e-14 ? dampedFrequency(wn, z) < wn : false));
+      qualityFactor(z) * 2 * z === 1 || Math.abs(qualityFactor(z) * 2 * z - 1) < 1e-14 ? dampedFrequency(wn, z) < wn : false), { seed: 1, numRuns: 100 });
   });
   it('classifies the three regimes', () => {
     expect(dampingRegime(0.5)).toBe('underdamped');

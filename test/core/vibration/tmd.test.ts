@@ -63,19 +63,19 @@ describe('exact two-degree-of-freedom response', () => {
       fc.pre(Math.abs(1 - (1 + mu) * b * b) > 0.05);
       const x = amp({ mu, f: 1, zeta: 1e9, zeta1: 0 }, b, 'force');
       return Math.abs(x * Math.abs(1 - (1 + mu) * b * b) - 1) < 1e-5;
-    }));
+    }), { seed: 1, numRuns: 100 });
   });
   it('Den Hartog tuning puts the two fixed points at equal height √(1+2/μ) for a harmonic force', () => {
     fc.assert(fc.property(fc.double({ min: 0.01, max: 0.3, noNaN: true }), (mu) => {
       const pts = fixedPoints(mu, 1 / (1 + mu), 'force');
       return pts.length === 2 && pts.every((p) => Math.abs(p.height / Math.sqrt(1 + 2 / mu) - 1) < 1e-6);
-    }), { numRuns: 15 });
+    }), { seed: 1, numRuns: 15 });
   });
   it('Warburton base tuning f = √(1−μ/2)/(1+μ) puts the fixed points of the relative response at equal height for base acceleration', () => {
     fc.assert(fc.property(fc.double({ min: 0.01, max: 0.3, noNaN: true }), (mu) => {
       const pts = fixedPoints(mu, tmdTuning(mu, 'base').f, 'base');
       return pts.length === 2 && Math.abs(pts[0]!.height / pts[1]!.height - 1) < 1e-6;
-    }), { numRuns: 15 });
+    }), { seed: 1, numRuns: 15 });
   });
   it('Warburton white-noise tunings minimise the response variance (perturbing f or ζ by 3 % raises it)', () => {
     for (const [exc, load] of [['white-force', 'force'], ['white-base', 'base']] as const) {
@@ -95,6 +95,6 @@ describe('exact two-degree-of-freedom response', () => {
       const tuned = tmdPeak({ mu, f: t.f, zeta: t.zeta, zeta1: 0 }, 'force').amplification;
       const off = tmdPeak({ mu, f: t.f * 1.1, zeta: t.zeta, zeta1: 0 }, 'force').amplification;
       return tuned >= Math.sqrt(1 + 2 / mu) * (1 - 1e-9) && off > tuned;
-    }), { numRuns: 15 });
+    }), { seed: 1, numRuns: 15 });
   });
 });
