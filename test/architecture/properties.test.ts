@@ -9,9 +9,6 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 
 const NOT_YET: Readonly<Record<string, string>> = {
-  'test/components/polyline.test.ts': 'outside the test folders this change ran; add { seed, numRuns } and remove this entry',
-  'test/records/record.test.ts': 'outside the test folders this change ran; add seed and remove this entry',
-  'test/sheets/pageCss.test.ts': 'outside the test folders this change ran; add { seed, numRuns } and remove this entry',
 };
 
 function files(dir: string): string[] {

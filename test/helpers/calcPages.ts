@@ -16,7 +16,10 @@ export function calculatorPages(root: string, base: string): CalcPage[] {
 }
 
 /** Page paths without any calculator. */
+/** Pages that run computations without a calculator panel (the open study's package runs the study runner). */
+const APP_PAGES = ['studies/open'];
+
 export function prosePages(root: string, base: string): string[] {
   const withCalc = new Set(calculatorPages(root, base).map((p) => p.path));
-  return builtPages(root, base).filter((p) => !withCalc.has(p));
+  return builtPages(root, base).filter((p) => !withCalc.has(p) && !APP_PAGES.some((a) => p.replace(/\/$/, '').endsWith(a)));
 }
