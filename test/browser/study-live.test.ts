@@ -12,6 +12,7 @@ import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { getCalculator } from '../../src/calculators/registry.ts';
 import { readStudies } from '../../src/studies/files.ts';
+import { studyKnows } from '../../src/studies/edit.ts';
 import { runStudy } from '../../src/studies/run.ts';
 import type { Study } from '../../src/studies/schema.ts';
 import { watchedPage, type Watched } from '../helpers/browser.ts';
@@ -74,7 +75,8 @@ describe('a study open in the handbook pages', () => {
       // no field asks for a number the study already knows: every bound input has an origin other than the page default
       const bindings = calc.study?.inputs ?? {};
       for (const key of Object.keys(step.inputs)) {
-        if (!(key in bindings) || !active(key)) continue;
+        // an input bound to a quantity the study knows (its own, a limit, or published by a step) is never the page default
+        if (!(key in bindings) || !active(key) || !studyKnows(changed, bindings[key]!)) continue;
         expect(step.origins[key]!.kind, `${id}.${key}`).not.toBe('default');
         expect(await page.locator(`db-calculator[data-calc="${step.calculator}"] .field[data-key="${key}"]`).getAttribute('data-origin'), `${id}.${key}`).not.toBe('default');
       }

@@ -109,7 +109,10 @@ export function parseNumericCsv(text: string, opts: ParseOptions = {}): NumericT
   }
   const fmt = detect(candidates.length > 1 ? candidates.slice(1) : candidates, minColumns);
   if (!fmt) {
-    throw new InputRangeError(input, text.slice(0, 40), undefined, '', `no table of at least ${minColumns} numeric columns found (delimiters tried: tab, semicolon, comma, space)`);
+    // name a line, as every other refusal here does: the first that is not a data row, else the first
+    const idx = all.findIndex((l) => meaningful(l.trim()) && !DATA_START.test(l.trim()));
+    const line = (idx >= 0 ? idx : Math.max(0, all.findIndex((l) => meaningful(l.trim())))) + 1;
+    throw new InputRangeError(input, text.slice(0, 40), undefined, '', `line ${line}: no table of at least ${minColumns} numeric columns found (delimiters tried: tab, semicolon, comma, space)`);
   }
   const rows: number[][] = [];
   const lines: number[] = [];
