@@ -14,6 +14,7 @@ import { displayUnit, formatInput, formatNumber } from './format.ts';
 import { clip, parseTyped, readField, splitTyped, textSum } from './fieldState.ts';
 
 import { calculatorLoaders } from '../../calculators/loaders.ts';
+import { fetchNamedStudy, storedStudy } from './study-fetch.ts';
 
 export class CalculatorElement extends HTMLElement {
   calc: CalculatorDefinition | undefined;
@@ -28,18 +29,27 @@ export class CalculatorElement extends HTMLElement {
     const id = this.dataset.calc ?? '';
     // the study code (runner, every calculator, zod) loads beside this calculator, not after it;
     // with a study open it fills this calculator's step, and `data-study` says when that is done
-    const study = document.querySelector('[data-study-bar]') ? import('./study-link.ts').then((m) => m.studySession()) : undefined;
+    const bar = document.querySelector('[data-study-bar]') !== null;
+    const opened = bar && (fetchNamedStudy() !== undefined || storedStudy());
+    const study = bar ? import('./study-link.ts').then((m) => m.studySession()) : undefined;
     this.calc = Object.hasOwn(calculatorLoaders, id) ? await calculatorLoaders[id]!() : undefined;
     if (!this.calc) return;
     this.applyUrl();
     this.addEventListener('submit', (e) => e.preventDefault());
     this.addEventListener('input', (e) => this.onInput(e));
     this.addEventListener('change', (e) => this.onChange(e));
-    this.recompute();
     // input sets and records: their code (and zod) loads only when the panel is opened
     const rec = this.querySelector<HTMLDetailsElement>('details.calc-records');
     rec?.addEventListener('toggle', () => void import('./record-panel.ts').then((m) => m.attachRecords(this, rec)), { once: true });
-    if (study) void study.then((s) => { s.attach(this); this.dataset.study = ''; });
+    if (study && opened) {
+      // a study is open: compute once, with the step's inputs, not first with the page's own
+      const s = await study;
+      if (!s.attach(this)) this.recompute();
+      this.dataset.study = '';
+    } else {
+      this.recompute();
+      if (study) void study.then((s) => { s.attach(this); this.dataset.study = ''; });
+    }
     this.dataset.ready = '';
   }
 

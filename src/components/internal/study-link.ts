@@ -14,6 +14,7 @@ import { verdictLine } from '../../studies/package.ts';
 import type { CalculatorElement } from './calculator-element.ts';
 import { closeOpenStudy, readOpenStudy, saveOpenStudy } from './study-store.ts';
 import { renderStudyBar } from './study-bar.ts';
+import { fetchNamedStudy } from './study-fetch.ts';
 
 interface Attached { readonly el: CalculatorElement; readonly stepId: string | undefined }
 
@@ -44,16 +45,11 @@ class StudySession {
   }
 
   private async fetchBuiltIn(id: string): Promise<void> {
-    if (!/^[a-z0-9-]{1,80}$/.test(id)) { this.error = { message: 'The address names no study of this handbook.' }; return; }
-    const base = this.bar?.dataset.base ?? '/';
-    try {
-      const res = await fetch(`${base}studies/${id}.json`);
-      const parsed = res.ok ? parseStudy(await res.text()) : { ok: false as const, message: `no study '${id}' in this handbook` };
-      if (parsed.ok) saveOpenStudy(parsed.study);
-      else this.error = { message: `The study named in the address could not be opened: ${parsed.message}` };
-    } catch {
-      this.error = { message: `The study '${id}' could not be loaded.` };
-    }
+    const got = await fetchNamedStudy();
+    if (!got?.text) { this.error = { message: /^[a-z0-9-]{1,80}$/.test(id) ? `The study '${id}' named in the address is not part of this handbook.` : 'The address names no study of this handbook.' }; return; }
+    const parsed = parseStudy(got.text);
+    if (parsed.ok) saveOpenStudy(parsed.study);
+    else this.error = { message: `The study named in the address could not be opened: ${parsed.message}` };
   }
 
   private rerun(): void {
@@ -71,8 +67,8 @@ class StudySession {
     }
   }
 
-  /** Joins a calculator element: fills its step's inputs from the study and follows its changes. */
-  attach(el: CalculatorElement): void {
+  /** Joins a calculator element: fills its step's inputs from the study (true: filled and recomputed) and follows its changes. */
+  attach(el: CalculatorElement): boolean {
     const step = this.study?.steps.find((s) => s.page === this.pageId && s.calculator === el.calc?.id);
     const a = { el, stepId: step?.id };
     this.attached.push(a);
@@ -80,6 +76,7 @@ class StudySession {
     performance.mark('db-study-attached');
     el.addEventListener('db-computed', (e) => this.onComputed(a, (e as CustomEvent<{ values: Values }>).detail.values));
     this.renderBar();
+    return step !== undefined && this.stepRun(a) !== undefined;
   }
 
   private stepRun(a: Attached) {
@@ -91,6 +88,7 @@ class StudySession {
     if (s) a.el.applyInputs(s.inputs, {});
     this.markOrigins(a);
   }
+
 
   private onComputed(a: Attached, values: Values): void {
     if (!this.study || !this.run || !a.stepId || !this.stepRun(a)) return;
