@@ -27,6 +27,8 @@ export interface StepRun {
   readonly inputs: Values;
   readonly outputs: Outputs;
   readonly warnings: readonly string[];
+  /** The step's hand-off strings (a page showing this step reuses the whole result). */
+  readonly handoff?: Readonly<Record<string, string>>;
   readonly origins: Readonly<Record<string, Origin>>;
   /** Inputs filled from step outputs: input key → "stepId.outputKey". */
   readonly from: Readonly<Record<string, string>>;
@@ -106,7 +108,7 @@ function runStep(p: PlannedStep, plan: StudyPlan, runs: ReadonlyMap<string, Step
   }
   return {
     id, calculator: p.calc.id, page: p.step.page, title: p.step.title ?? p.calc.title,
-    inputs: r.values, outputs: r.outputs, warnings: r.warnings, origins: used, from,
+    inputs: r.values, outputs: r.outputs, warnings: r.warnings, ...(r.handoff ? { handoff: r.handoff } : {}), origins: used, from,
   };
 }
 

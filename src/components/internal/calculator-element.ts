@@ -21,6 +21,8 @@ export class CalculatorElement extends HTMLElement {
   system: UnitSystem = 'SI';
   private charts: { update(specs: ReturnType<NonNullable<CalculatorDefinition['charts']>>, system: UnitSystem): void } | undefined;
   private pending = 0;
+  /** A result already computed elsewhere for exactly these values (the open study's run of this step), used once. */
+  private offered: (Result & { values: Values }) | undefined;
   /** The last valid inputs (SI) and outputs shown; undefined while a field is bad. */
   values: Values | undefined;
   outputs: Outputs | undefined;
@@ -234,8 +236,13 @@ export class CalculatorElement extends HTMLElement {
     return out;
   }
 
-  /** Fills every field from SI values (or the typed number and unit in `shown`) and recomputes now. */
-  applyInputs(values: Values, shown: Readonly<Record<string, { value: number; unit: string }>>): void {
+  /**
+   * Fills every field from SI values (or the typed number and unit in `shown`) and recomputes now.
+   * `result`, when given, is the result of exactly these values computed elsewhere (the study
+   * runner): shown if the fields read back the same values, else the page computes its own.
+   */
+  applyInputs(values: Values, shown: Readonly<Record<string, { value: number; unit: string }>>, result?: Result): void {
+    this.offered = result ? { ...result, values } : undefined;
     for (const def of this.calc!.inputs) {
       const v = values[def.key];
       const ctl = this.control(def.key);
@@ -323,8 +330,11 @@ export class CalculatorElement extends HTMLElement {
     this.outputs = undefined;
     if (!values) { this.setState(state, 'error', 'Not current: the results and charts below belong to earlier inputs. Fix the highlighted field to update them.'); return; }
     let result;
+    const offered = this.offered;
+    this.offered = undefined;
     try {
-      result = evaluate(calc, values);
+      // the study runner computed this step a moment ago with the same values: no second computation
+      result = offered && sameValues(calc, offered.values, values) ? offered : evaluate(calc, values);
     } catch (e) {
       const msg = e instanceof DampbookError ? e.message : 'These inputs could not be computed.';
       // a problem found while computing (e.g. a bad row in a pasted record) is shown at its field too
@@ -431,3 +441,15 @@ export class CalculatorElement extends HTMLElement {
 }
 
 if (!customElements.get('db-calculator')) customElements.define('db-calculator', CalculatorElement);
+
+/**
+ * The page reads the same input values as `given`: every value it reads equal (text exactly,
+ * numbers within 1e-12 relative: a field's unit round trip), and every input it does not read is
+ * one that does not apply (a choice of another mode the runner keeps).
+ */
+function sameValues(calc: CalculatorDefinition, given: Values, read: Values): boolean {
+  const same = (x: unknown, y: unknown) => typeof x === 'number' && typeof y === 'number' ? Math.abs(x - y) <= 1e-12 * Math.max(Math.abs(x), Math.abs(y)) : x === y;
+  return calc.inputs.every((d) => read[d.key] === undefined
+    ? given[d.key] === undefined || !isActive(d, read)
+    : same(read[d.key], given[d.key]));
+}

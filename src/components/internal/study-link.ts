@@ -85,7 +85,7 @@ class StudySession {
 
   private fill(a: Attached): void {
     const s = this.stepRun(a);
-    if (s) a.el.applyInputs(s.inputs, {});
+    if (s) a.el.applyInputs(s.inputs, {}, { outputs: s.outputs, warnings: s.warnings, ...(s.handoff ? { handoff: s.handoff } : {}) });
     this.markOrigins(a);
   }
 
