@@ -11,23 +11,10 @@
 import { evaluate } from '../src/calculators/evaluate.ts';
 import { fvFit } from '../src/calculators/vibration/fvFit.ts';
 import { damperForce, type DamperLaw } from '../src/core/dampers/index.ts';
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
+import { medianMs } from './lib/timing.ts';
 
 /** Median wall-clock milliseconds per run after 3 warm-ups. */
-function time(fn: () => void, runs = 15): number {
-  for (let i = 0; i < 3; i++) fn();
-  const wall: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    fn();
-    wall.push(performance.now() - t0);
-  }
-  return median(wall);
-}
+const time = (fn: () => void, runs = 15): number => medianMs(fn, runs, 3);
 
 /** A bilinear damper sampled both ways with ±1 % seeded scatter, as text. */
 function sheet(n: number): string {

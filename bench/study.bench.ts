@@ -8,6 +8,7 @@
 import { existsSync } from 'node:fs';
 import { serveStatic } from '../src/server/staticServer.ts';
 import { launch } from '../test/helpers/browser.ts';
+import { median } from './lib/timing.ts';
 
 const SITE = process.env.DAMPBOOK_SITE ?? (existsSync('dist/index.html') ? 'dist' : '.test-out/root');
 const RUNS = 9;
@@ -40,7 +41,6 @@ try {
   await browser.close();
   await served.close();
 }
-const med = (x: number[]) => [...x].sort((a, b) => a - b)[Math.floor(x.length / 2)]!;
-console.log(`study open (5 steps) after load: median ${med(open).toFixed(1)} ms, worst ${Math.max(...open).toFixed(1)} ms; target ≤ 150 ms: ${med(open) <= 150 ? 'met' : 'NOT MET'}`);
-console.log(`next step's page, study already open: median ${med(reopen).toFixed(1)} ms, worst ${Math.max(...reopen).toFixed(1)} ms; target ≤ 150 ms: ${med(reopen) <= 150 ? 'met' : 'NOT MET'}`);
-console.log(`whole-study recompute after a change: median ${med(recompute).toFixed(1)} ms, worst ${Math.max(...recompute).toFixed(1)} ms`);
+console.log(`study open (5 steps) after load: median ${median(open).toFixed(1)} ms, worst ${Math.max(...open).toFixed(1)} ms; target ≤ 150 ms: ${median(open) <= 150 ? 'met' : 'NOT MET'}`);
+console.log(`next step's page, study already open: median ${median(reopen).toFixed(1)} ms, worst ${Math.max(...reopen).toFixed(1)} ms; target ≤ 150 ms: ${median(reopen) <= 150 ? 'met' : 'NOT MET'}`);
+console.log(`whole-study recompute after a change: median ${median(recompute).toFixed(1)} ms, worst ${Math.max(...recompute).toFixed(1)} ms`);

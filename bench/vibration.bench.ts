@@ -13,23 +13,10 @@ import { ringDownCalc } from '../src/calculators/vibration/ring-down.ts';
 import { syntheticRingDown } from '../src/calculators/vibration/ringDownRecords.ts';
 import { tmdTuningCalc } from '../src/calculators/vibration/tmd-tuning.ts';
 import { tmdPeak, tmdTuning } from '../src/core/vibration/index.ts';
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
+import { medianMs } from './lib/timing.ts';
 
 /** Median wall-clock milliseconds per run after 2 warm-ups. */
-function time(fn: () => void, runs = 9): number {
-  for (let i = 0; i < 2; i++) fn();
-  const wall: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    fn();
-    wall.push(performance.now() - t0);
-  }
-  return median(wall);
-}
+const time = (fn: () => void, runs = 9): number => medianMs(fn, runs, 2);
 
 console.log('ring-down calculator (CSV text in, ζ out), ζ = 0.01, 50 samples per cycle, 0.5 % noise');
 console.log('samples   text kB   ms     ζ found');

@@ -1,12 +1,23 @@
 /**
  * A study open in the handbook pages (real Chromium): the Fellrunner class D study opened from the
  * address, the vehicle speed changed on the road step, and the steady-temperature, warm-up and fade
- * steps recomputed from it — their numbers compared with the study runner (`runStudy`, the code
- * behind `dampbook study run`, itself checked against closed forms in test/studies/run.test.ts)
- * given the same change. Also: every bound field says where its value comes from, no step asks
- * for a number another step already knows, a local override is marked and can be undone, and a
- * study can be started from any calculator page. Reference: the study runner (project code, run in
- * Node); the physics behind it is checked in the unit tests of each calculator.
+ * steps recomputed from it — their numbers compared with the study runner given the same change.
+ * Also: every bound field says where its value comes from, no step asks for a number another step
+ * already knows, a local override is marked and can be undone, and a study can be started from any
+ * calculator page.
+ *
+ * Sources of the reference values (each check below says which it uses):
+ * - [runner] `runStudy` in Node (the code behind `dampbook study run`): a closed-loop check of the
+ *   browser against the same computation, provenance "closed form (same code), no published source".
+ *   The physics the runner uses is checked against published values elsewhere: road power against
+ *   the ISO 8608 quarter-car closed form π²·k_t·G_d(n₀)·n₀²·V (Zuo & Zhang, Vibration energy
+ *   harvesting of vehicle suspensions, 2013, abstract) in test/core/duty/road.test.ts; the body's
+ *   heat loss against Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., eqs. 9.34,
+ *   7.54 and 1.9 in test/core/thermal/bodyCooling.test.ts; warm-up against the first-order closed
+ *   form T∞ + P/UA·(1 − e^(−t/τ)) in test/core/thermal/warmUp.test.ts.
+ * - [file] the demo study file content/studies/tw-210-rear-damper-class-d.json (invented demo data:
+ *   15 m/s, calculation number TW-210-C-031).
+ * - [rule] the study's own binding rules (DEVELOPERS.md, Studies), common practice, no source.
  */
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -43,19 +54,19 @@ describe('a study open in the handbook pages', () => {
     const file = readStudies().find((f) => f.id === STUDY)!;
     const w = await watchedPage(site.browser, site.server.origin);
     let page = await visit(w, `${PAGE_URL['road-power']}?study=${STUDY}`, 'road-power');
-    // the bar lists the five steps, this one current, and the verdicts of the study as filed
+    // [file] the bar lists the five steps, this one current; [runner] 5 of the 7 verdicts of the file fail
     expect(await page.locator('[data-study-bar] .study-steplist li').count()).toBe(5);
     expect(await page.locator('[data-study-bar] li[aria-current="step"]').getAttribute('data-step')).toBe('road');
     expect(await page.locator('[data-study-bar] .study-summary').textContent()).toBe('5 of 7 verdicts fail.');
     expect(await page.locator('.field[data-key="V"]').getAttribute('data-origin')).toBe('study');
     expect(await page.locator('.field[data-key="V"] .study-note').textContent()).toContain('vehicle speed');
-    expect((await live(page, 'road-power')).values!.V).toBe(15);
+    expect((await live(page, 'road-power')).values!.V).toBe(15); // [file] vehicleSpeed "15 m/s"
 
     await page.fill('db-calculator[data-calc="road-power"] input[name="V"]', '22');
     await page.waitForFunction(() => JSON.parse(localStorage.getItem('dampbook:study') ?? '{}').quantities?.vehicleSpeed === 22);
     const changed: Study = JSON.parse(JSON.stringify(file.study));
     changed.quantities!.vehicleSpeed = 22;
-    const expected = runStudy(changed);
+    const expected = runStudy(changed); // [runner] the reference for every number below
     expect(await stored(page)).toEqual(changed);
     const road = expected.steps.find((s) => s.id === 'road')!;
     expect(close((await live(page, 'road-power')).outputs!.P, road.outputs.P)).toBe(true);
@@ -64,24 +75,24 @@ describe('a study open in the handbook pages', () => {
       const step = expected.steps.find((s) => s.id === id)!;
       page = await visit(w, PAGE_URL[step.calculator]!, step.calculator);
       const got = await live(page, step.calculator);
-      // the printed sheet of a step carries the study's calculation number (sheet details follow the open study)
+      // [file] the printed sheet of a step carries the study's calculation number (sheet details follow the open study)
       expect(await page.locator('[data-sheet="calc"]').first().textContent()).toBe('TW-210-C-031');
       const calc = getCalculator(step.calculator)!;
       const active = (k: string) => { const d = calc.inputs.find((x) => x.key === k)!; return !d.when || d.when.is.includes(String(step.inputs[d.when.key])); };
       for (const [k, v] of Object.entries(step.inputs)) if (active(k)) expect(close(got.values![k], v), `${id} input ${k}: ${got.values![k]} vs ${v}`).toBe(true);
       for (const [k, v] of Object.entries(step.outputs)) expect(close(got.outputs![k], v), `${id} output ${k}: ${got.outputs![k]} vs ${v}`).toBe(true);
-      // the mean power on the later steps is the road step's, at the new speed
+      // [runner] the mean power on the later steps is the road step's, at the new speed
       if ('P' in step.inputs) expect(close(got.values!.P, road.outputs.P)).toBe(true);
       // no field asks for a number the study already knows: every bound input has an origin other than the page default
       const bindings = calc.study?.inputs ?? {};
       for (const key of Object.keys(step.inputs)) {
-        // an input bound to a quantity the study knows (its own, a limit, or published by a step) is never the page default
+        // [rule] an input bound to a quantity the study knows (its own, a limit, or published by a step) is never the page default
         if (!(key in bindings) || !active(key) || !studyKnows(changed, bindings[key]!)) continue;
         expect(step.origins[key]!.kind, `${id}.${key}`).not.toBe('default');
         expect(await page.locator(`db-calculator[data-calc="${step.calculator}"] .field[data-key="${key}"]`).getAttribute('data-origin'), `${id}.${key}`).not.toBe('default');
       }
     }
-    // the package of the open study, printed from this browser, carries the recomputed verdicts
+    // [runner] the package of the open study, printed from this browser, carries the recomputed verdicts
     await w.page.goto(`${site.server.url}studies/open/`);
     await w.page.waitForSelector('[data-open-package][data-ready="package"]');
     const cover = (await w.page.locator('.study-cover').textContent())!.replace(/\s+/g, ' ');
@@ -90,7 +101,7 @@ describe('a study open in the handbook pages', () => {
     for (const v of expected.verdicts) expect(cover).toContain(`(${v.step}): ${v.pass ? 'PASS' : 'FAIL'}`);
     expect(await w.page.locator('.study-sheet').count()).toBe(5);
     expect(await w.page.locator('.study-sheet[data-step="steady"] tr[data-in="V"] td').nth(1).textContent()).toBe('22 m/s');
-    // the speed change moved the answers (a test that the change travelled, not only that nothing broke)
+    // [runner] the speed change moved the answers (a test that the change travelled, not only that nothing broke)
     const before = runStudy(file.study);
     expect(expected.steps.find((s) => s.id === 'steady')!.outputs.Ts).not.toBeCloseTo(before.steps.find((s) => s.id === 'steady')!.outputs.Ts as number, 3);
     expect(w.pageErrors).toEqual([]);

@@ -2,7 +2,7 @@ import { DampbookError } from '../../core/errors.ts';
 import { bodyCooling, dutyPower, fadeCoefficient, fadeEquilibrium, fadeLogSlope, fadeRatio, oilDensity, type FadeDuty, type FadeModel } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
 import { bodyFrom, bodyInputs } from './bodyInputs.ts';
-import { betaFrom, fluidFrom, fluidInputs, lawInputs, spanWarning } from './fluidInputs.ts';
+import { betaFrom, FLUID_SOURCES, fluidFrom, fluidInputs, lawInputs, spanWarning } from './fluidInputs.ts';
 import { q } from '../quantityText.ts';
 import { DAMPING_FADE_CASES } from './dampingFadeCases.ts';
 import { ZERO_CELSIUS } from '../../core/constants.ts';
@@ -127,14 +127,8 @@ export const dampingFadeCalc = defineCalculator({
   verification: DAMPING_FADE_CASES,
   sources: [
     { key: 'incropera2007', locator: 'eqs. 9.34, 7.54, 9.64, 1.9 (from memory)' },
-    { key: 'astmD341', locator: 'viscosity–temperature equation (from memory)' },
-    { key: 'dixon2007thermal', locator: 'fade rates 0.2–2 %/K (from memory)' },
     { key: 'brent1973', locator: 'ch. 4 (root refinement)' },
-    { key: 'astmD2270', locator: 'Table 1, §5.1.3, §6.1.3' },
-    { key: 'iso3448', locator: 'Table 1 (from memory)' },
-    { key: 'andrade1930', locator: 'ln ν linear in 1/T (from memory)' },
-    { key: 'apiMpms11_1', locator: 'thermal expansion of oils (from memory)' },
-    { key: 'hryciow2022', locator: 'cold-temperature force ratios of twin-tube dampers (about 2.5 at −30 °C)' },
+    ...FLUID_SOURCES,
   ],
   study: {
     inputs: { cRef: 'dampingCoefficient', Tref: 'referenceTemperature', share: 'fadeShare', fadeLaw: 'fadeLaw', beta: 'oilExpansion', fluid: 'damperFluid', nu40: 'oilViscosity40', nu100: 'oilViscosity100', X: 'strokeAmplitude', f: 'strokeFrequency', P: 'meanPower', Tlimit: 'allowedTemperature', Cth: 'heatCapacity', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },

@@ -3,7 +3,7 @@ import { fadeFit, fadeRatio, readUnitRows } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { q } from '../quantityText.ts';
 import { FADE_FIT_CASES } from './fadeFitCases.ts';
-import { betaFrom, DEFAULT_TABLE, fluidFrom, fluidInputs, lawInputs, spanWarning, type Fluid } from './fluidInputs.ts';
+import { betaFrom, DEFAULT_TABLE, FLUID_SOURCES, fluidFrom, fluidInputs, lawInputs, spanWarning, type Fluid } from './fluidInputs.ts';
 import { ZERO_CELSIUS } from '../../core/constants.ts';
 
 /** TW-077 test bay: the supplier's dyno sheet for the TW-210 Fellrunner rear damper (invented demo data). */
@@ -114,13 +114,7 @@ export const fadeFitCalc = defineCalculator({
   verification: FADE_FIT_CASES,
   sources: [
     { key: 'lawson1974', locator: 'ch. 19, modified Gram–Schmidt least squares (from memory)' },
-    { key: 'astmD341', locator: 'viscosity–temperature equation (from memory)' },
-    { key: 'astmD2270', locator: 'Table 1, §5.1.3, §6.1.3' },
-    { key: 'iso3448', locator: 'Table 1 (from memory)' },
-    { key: 'andrade1930', locator: 'ln ν linear in 1/T (from memory)' },
-    { key: 'apiMpms11_1', locator: 'thermal expansion of oils (from memory)' },
-    { key: 'hryciow2022', locator: 'cold-temperature force ratios of twin-tube dampers (about 2.5 at −30 °C)' },
-    { key: 'dixon2007thermal', locator: 'fade rates 0.2–2 %/K (from memory)' },
+    ...FLUID_SOURCES,
   ],
   study: {
     inputs: { Tref: 'referenceTemperature', fadeLaw: 'fadeLaw', beta: 'oilExpansion', fluid: 'damperFluid', nu40: 'oilViscosity40', nu100: 'oilViscosity100' },

@@ -82,3 +82,14 @@ export function lawInputs(): InputDef[] {
 export function betaFrom(values: Values): number {
   return choice(values, 'fadeLaw') === 'physical' ? num(values, 'beta') : 0;
 }
+
+/** The sources of the fluid and temperature-law inputs, cited by every calculator that spreads them. */
+export const FLUID_SOURCES = [
+  { key: 'astmD341', locator: 'viscosity–temperature equation (from memory)' },
+  { key: 'astmD2270', locator: 'Table 1, §5.1.3, §6.1.3' },
+  { key: 'iso3448', locator: 'Table 1 (from memory)' },
+  { key: 'andrade1930', locator: 'ln ν linear in 1/T (from memory)' },
+  { key: 'apiMpms11_1', locator: 'thermal expansion of oils (from memory)' },
+  { key: 'hryciow2022', locator: 'cold-temperature force ratios of twin-tube dampers (about 2.5 at −30 °C)' },
+  { key: 'dixon2007thermal', locator: 'fade rates 0.2–2 %/K (from memory)' },
+] as const;
