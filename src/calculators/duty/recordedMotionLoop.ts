@@ -5,6 +5,7 @@
  */
 import { BETA_MIN_END_FORCE, loopDisplacement, loopMetrics, type LoopMetrics, type ParsedRecord, type RecordedMotionResult } from '../../core/duty/index.ts';
 import { damperForce, type DamperLaw } from '../../core/dampers/index.ts';
+import { lawCurve } from '../damperLaw/chart.ts';
 import type { ChartSeries, ChartSpec, InputDef, OutputDef, Outputs } from '../types.ts';
 import { q } from '../quantityText.ts';
 
@@ -64,12 +65,11 @@ export function loopCharts(rec: ParsedRecord, r: RecordedMotionResult, m: LoopMe
   const loop: ChartSeries[] = [{ label: 'measured', ...strided(x, r.F), style: 'thin', tone: 1 }];
   const fv: ChartSeries[] = [{ label: 'measured', ...strided(r.v, r.F), style: 'points', tone: 1 }];
   if (law && law.kind !== 'hysteretic') {
-    // the chosen law along the measured motion; a shared law-curve builder may replace this
+    // the chosen law along the measured motion, and its force–velocity curve drawn as on every law page
     const Fl = Float64Array.from(r.v, (v) => damperForce(law, v));
     loop.push({ label: 'chosen law', ...strided(x, Fl), style: 'dash', tone: 3 });
-    const n = 81, vs: number[] = [], fs: number[] = [];
-    for (let i = 0; i < n; i++) { const v = -r.vPeak + (2 * r.vPeak * i) / (n - 1); vs.push(v); fs.push(damperForce(law, v)); }
-    fv.push({ label: 'chosen law', x: vs, y: fs, style: 'line', tone: 3 });
+    const curve = lawCurve(law, r.vPeak);
+    fv.push({ label: 'chosen law', x: curve.v, y: curve.F, style: 'line', tone: 3 });
   }
   const sum = m
     ? `${m.cycles.length} complete cycle${m.cycles.length > 1 ? 's' : ''}: loop energy ${q(m.Eloop, 'energy')} per cycle, k_eff ${q(m.keff, 'stiffness')}, F₀ ${q(m.F0, 'force')}.`
