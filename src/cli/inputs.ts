@@ -7,6 +7,7 @@
 import { createHash } from 'node:crypto';
 import { basename } from 'node:path';
 import { isLegacyLawKey, migrateLawKeys } from '../calculators/damperLaw/migrate.ts';
+import { migrateYesNoNumbers } from '../calculators/yesNoNumbers.ts';
 import { evaluate } from '../calculators/evaluate.ts';
 import type { CalculatorDefinition, Result, Values } from '../calculators/types.ts';
 import { InputRangeError } from '../core/errors.ts';
@@ -88,7 +89,9 @@ export function readInputs(def: CalculatorDefinition, inputs: readonly (readonly
   }
   // old damper-law keys (cRebound, c with the power law, k as the hysteretic stiffness) → canonical keys
   const m = migrateLawKeys(def, raw);
-  return { raw: m.raw, texts, notes: m.notes };
+  // old 0/1 numbers on yes/no choices (ends) → the choice's option
+  const y = migrateYesNoNumbers(def, m.raw);
+  return { raw: y.raw, texts, notes: [...m.notes, ...y.notes] };
 }
 
 /** A summary of text given inline or a default (checksum of its UTF-8 bytes). */

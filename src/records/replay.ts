@@ -5,6 +5,7 @@
  */
 import { LEGACY_LAW_KEYS, migrateLawKeys } from '../calculators/damperLaw/migrate.ts';
 import { evaluate } from '../calculators/evaluate.ts';
+import { isNumeralChoice, migrateYesNoNumbers } from '../calculators/yesNoNumbers.ts';
 import type { CalculatorDefinition, InputDef, Outputs, Values } from '../calculators/types.ts';
 import { DampbookError } from '../core/errors.ts';
 import { findUnit, fromSI, siUnit, toSI } from '../core/units/index.ts';
@@ -74,6 +75,8 @@ function rawInputs(calc: CalculatorDefinition, rec: CalcRecord): { raw: Record<s
     const legacy = !def && calc.inputs.some((d) => d.key === 'law') ? LEGACY_LAW_KEYS[key] : undefined;
     if (!def && !legacy) throw new Error(`input '${key}' is not an input of ${calc.id}`);
     const kind = def ? def.kind : legacy!;
+    // a yes/no choice that was a 0/1 number (ends): the number is mapped below, with a note
+    if (kind === 'choice' && typeof q.value === 'number' && isNumeralChoice(calc, key)) { raw[key] = q.value; continue; }
     if (kind === 'choice' || kind === 'text') {
       if (typeof q.value !== 'string') throw new Error(`input '${key}' must be text`);
       raw[key] = q.value;
@@ -86,10 +89,11 @@ function rawInputs(calc: CalculatorDefinition, rec: CalcRecord): { raw: Record<s
     raw[key] = toSI(q.value, u);
     shown[key] = { value: q.value, unit: u.id };
   }
-  const m = migrateLawKeys(calc, raw);
+  const law = migrateLawKeys(calc, raw);
+  const m = migrateYesNoNumbers(calc, law.raw);
   // a mapped value is no longer what the reader typed: show it in SI
   for (const key of Object.keys(shown)) if (m.raw[key] !== raw[key]) delete shown[key];
-  return { raw: m.raw as Record<string, number | string>, shown, notes: m.notes };
+  return { raw: m.raw as Record<string, number | string>, shown, notes: [...law.notes, ...m.notes] };
 }
 
 /** Recomputes a record. `ctx` is what the reader has now (page revision, core version). */

@@ -47,8 +47,8 @@ export interface StepSheet {
 }
 
 const CHECK_KIND: Record<Verdict['check'], InputDef['kind']> = {
-  'steady-temperature': 'temperature', surroundings: 'temperature', 'time-to-limit': 'time', fade: 'dimensionless', 'power-rating': 'power',
-  'tyre-load': 'dimensionless', travel: 'length', 'stroke-energy': 'energy', 'hourly-energy': 'energy',
+  'steady-temperature': 'temperature', surroundings: 'temperature', 'time-to-limit': 'time', fade: 'fraction', 'power-rating': 'power',
+  'tyre-load': 'fraction', travel: 'length', 'stroke-energy': 'energy', 'hourly-energy': 'energy',
 };
 
 /** One line per verdict: PASS/FAIL, what, value against limit, margin, inputs it rests on. */

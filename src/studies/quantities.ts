@@ -54,13 +54,13 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   // temperature law of the damper
   q('referenceTemperature', 'temperature', 'Oil temperature at which the damping coefficient (dampingCoefficient) holds.'),
   q('fadeLaw', 'choice', 'Temperature law of the damping coefficient: share law or physical (density) law.'),
-  q('fadeShare', 'dimensionless', 'Viscous (laminar, bleed) share of the damping coefficient at the reference temperature; fitted by fade-fit.'),
+  q('fadeShare', 'fraction', 'Viscous (laminar, bleed) share of the damping coefficient at the reference temperature; fitted by fade-fit.'),
   // body and air
   q('bodyDiameter', 'length', 'Outside diameter of the damper body exposed to air.'),
   q('bodyLength', 'length', 'Length of the damper body wetted by oil and exposed to air.'),
   q('bodyOrientation', 'choice', 'Axis of the damper body: horizontal or vertical.'),
-  q('bodyEmissivity', 'dimensionless', 'Emissivity of the body surface.'),
-  q('localFlowFactor', 'dimensionless', 'Share of the air speed that actually crosses the body (wheel-arch shielding).'),
+  q('bodyEmissivity', 'fraction', 'Emissivity of the body surface.'),
+  q('localFlowFactor', 'fraction', 'Share of the air speed that actually crosses the body (wheel-arch shielding).'),
   q('airTemperature', 'temperature', 'Air temperature away from the body (also the start temperature).'),
   q('surroundingsAboveAir', 'temperatureDifference', 'How much warmer than the air the surroundings the body radiates to are.'),
   q('heatCapacity', 'heatCapacity', 'Heat capacity Σ m·c of the damper (body, oil and parts).'),
@@ -69,8 +69,8 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   // limits
   q('allowedTemperature', 'temperature', 'Highest body (oil, seal) temperature the maker allows.', 'limit'),
   q('dutyLength', 'time', 'Length of the duty the damper must carry without passing the allowed temperature.', 'limit'),
-  q('allowedFade', 'dimensionless', 'Largest share of the damping coefficient that may be lost to fade (1 − c/c_ref).', 'limit'),
-  q('allowedTyreLoadRatio', 'dimensionless', 'Largest RMS dynamic tyre load as a share of the static load (road holding; at 1/3 a Gaussian load lifts the tyre about 0.13 % of the time).', 'limit'),
+  q('allowedFade', 'fraction', 'Largest share of the damping coefficient that may be lost to fade (1 − c/c_ref).', 'limit'),
+  q('allowedTyreLoadRatio', 'fraction', 'Largest RMS dynamic tyre load as a share of the static load (road holding; at 1/3 a Gaussian load lifts the tyre about 0.13 % of the time).', 'limit'),
   q('availableTravel', 'length', 'Suspension travel available from the static position to the bump stop (at the wheel).', 'limit'),
   q('ratedStrokeEnergy', 'energy', 'Energy per stroke the end-stop damper is rated for (its maker\'s data).', 'limit'),
   q('ratedHourlyEnergy', 'energy', 'Energy per hour the end-stop damper is rated for (its maker\'s data; the heat it can shed).', 'limit'),

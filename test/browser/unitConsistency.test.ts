@@ -45,6 +45,8 @@ const TO_SI: Readonly<Record<string, number>> = {
   Pa: 1, kPa: 1e3, MPa: 1e6, bar: 1e5, psi: 6894.757,
   'm³': 1, 'cm³': 1e-6, '(m/s)²/Hz': 1, '(m/s²)²/Hz': 1, 'm²/Hz': 1,
   '1/K': 1, '%/K': 0.01, '1/°F': 1.8, '%/°F': 0.018,
+  // B.8: pound-foot squared 4.214011E-02, pound-inch squared 2.926397E-04 kg·m²; pound-force foot 1.355818, pound-force inch 1.129848E-01 N·m
+  'kg·m²': 1, 'lb·ft²': 0.04214011, 'lb·in²': 2.926397e-4, 'slug·ft²': 1.355818, 'N·m': 1, 'lbf·ft': 1.355818, 'lbf·in': 0.1129848,
 };
 
 /**

@@ -15,19 +15,19 @@ export const FORCE_LAYOUTS = ['autoF', 'txF', 'tvF'] as const;
 export const LAW_LAYOUTS = ['auto', 'tx', 'tv'] as const;
 
 export const loopInputs: InputDef[] = [
-  { key: 'loopTol', label: 'Tolerance on energy per loop (cycle to cycle)', kind: 'dimensionless', default: 0.15, min: 0.001, max: 1, when: { key: 'layout', is: [...FORCE_LAYOUTS, 'auto'] },
+  { key: 'loopTol', label: 'Tolerance on energy per loop (cycle to cycle)', kind: 'fraction', default: 0.15, min: 0.001, max: 1, when: { key: 'layout', is: [...FORCE_LAYOUTS, 'auto'] },
     help: 'Largest accepted deviation of one cycle’s loop energy from the mean of all cycles (0.15 = 15 %, the usual prototype-test figure); a larger spread is warned about.' },
 ];
 
 export const loopOutputs: OutputDef[] = [
   { key: 'Eloop', label: 'Loop energy ∮F dx (mean per cycle)', kind: 'energy', optional: true, help: 'Area of the measured force–displacement loop, mean over the complete cycles.' },
   { key: 'keff', label: 'Effective stiffness k_eff', kind: 'stiffness', optional: true, help: '(|F⁺| + |F⁻|)/(|Δ⁺| + |Δ⁻|): forces at the displacement extremes over the peak-to-peak stroke, mean over the cycles.' },
-  { key: 'betaEff', label: 'Effective damping β_eff', kind: 'dimensionless', optional: true, help: 'E_loop/(2π·k_eff·Δ²), Δ the mean stroke amplitude. Absent for a loop with almost no force at the stroke ends (a velocity-only damper), where it has no meaning.' },
+  { key: 'betaEff', label: 'Effective damping β_eff', kind: 'fraction', optional: true, help: 'E_loop/(2π·k_eff·Δ²), Δ the mean stroke amplitude. Absent for a loop with almost no force at the stroke ends (a velocity-only damper), where it has no meaning.' },
   { key: 'F0', label: 'Force at zero displacement F₀', kind: 'force', optional: true, help: 'Mean of |F| where the displacement passes its mid-stroke, both directions.' },
   { key: 'F0up', label: 'F₀ moving +x (extending)', kind: 'force', optional: true },
   { key: 'F0down', label: 'F₀ moving −x (compressing)', kind: 'force', optional: true },
-  { key: 'loopFullness', label: 'Loop fullness E_loop/(4·F_max·Δ)', kind: 'dimensionless', optional: true, help: '1 for a rectangle (friction), π/4 for an ellipse (linear viscous).' },
-  { key: 'EloopDevMax', label: 'Largest cycle deviation of loop energy', kind: 'dimensionless', optional: true, help: 'Largest |E_i − Ē|/Ē over the complete cycles (0.05 = 5 %).' },
+  { key: 'loopFullness', label: 'Loop fullness E_loop/(4·F_max·Δ)', kind: 'fraction', optional: true, help: '1 for a rectangle (friction), π/4 for an ellipse (linear viscous).' },
+  { key: 'EloopDevMax', label: 'Largest cycle deviation of loop energy', kind: 'fraction', optional: true, help: 'Largest |E_i − Ē|/Ē over the complete cycles (0.05 = 5 %).' },
 ];
 
 /** Loop metrics of a record with measured force and at least one complete cycle, else undefined. */

@@ -31,7 +31,7 @@ export const dampingFadeCalc = defineCalculator({
   inputs: [
     { key: 'cRef', label: 'Damping coefficient at T_ref', kind: 'damping', default: 980, min: 0, max: 1e7, minExclusive: true, required: true, help: 'Linear coefficient measured or specified at the reference temperature.' },
     { key: 'Tref', label: 'Reference temperature T_ref', kind: 'temperature', default: 298.15, min: 233.15, max: 423.15, help: 'Temperature at which c_ref holds (dyno tests are often at 20–25 °C).' },
-    { key: 'share', label: 'Viscous share s at T_ref', kind: 'dimensionless', default: 0.3, min: 0, max: 1, help: 'Part of c_ref that follows oil viscosity (bleed, laminar, leakage flow); the rest (valves, orifices) does not. Fit it to dyno tests at several temperatures on the fade-fit page; 0.3 is a guess that overstates cold forces for many twin-tube dampers.' },
+    { key: 'share', label: 'Viscous share s at T_ref', kind: 'fraction', default: 0.3, min: 0, max: 1, help: 'Part of c_ref that follows oil viscosity (bleed, laminar, leakage flow); the rest (valves, orifices) does not. Fit it to dyno tests at several temperatures on the fade-fit page; 0.3 is a guess that overstates cold forces for many twin-tube dampers.' },
     ...lawInputs(),
     { key: 'rho15', label: 'Fluid density at 15 °C ρ15', kind: 'density', default: 870, min: 600, max: 1200, help: 'From the data sheet (mineral damper oils 850–890 kg/m³, silicone fluids about 960). Only sets the reported dynamic viscosity: the force ratios depend on β alone.', when: { key: 'fadeLaw', is: ['physical'] } },
     ...fluidInputs(),
@@ -49,7 +49,7 @@ export const dampingFadeCalc = defineCalculator({
     { key: 'Teq', label: 'Equilibrium body temperature', kind: 'temperature', optional: true },
     { key: 'cEq', label: 'Damping coefficient at equilibrium', kind: 'damping', optional: true },
     { key: 'Peq', label: 'Damper power at equilibrium', kind: 'power', optional: true },
-    { key: 'fade', label: 'Coefficient lost to fade', kind: 'dimensionless', optional: true, help: '1 − c_eq/c_ref (or at the limit when no equilibrium).' },
+    { key: 'fade', label: 'Coefficient lost to fade', kind: 'fraction', optional: true, help: '1 − c_eq/c_ref (or at the limit when no equilibrium).' },
     { key: 'crossings', label: 'Equilibria below the limit', kind: 'dimensionless', digits: 1 },
     { key: 'tLimit', label: 'Time to the limit from ambient', kind: 'time', optional: true, help: 'Only when no equilibrium exists below the limit.' },
     { key: 'cLimit', label: 'Damping coefficient at the limit', kind: 'damping' },

@@ -39,7 +39,7 @@ export const fadeFitCalc = defineCalculator({
     ...fluidInputs(),
   ],
   outputs: [
-    { key: 'share', label: 'Viscous share s at T_ref', kind: 'dimensionless', help: 'Part of c_ref that follows viscosity (laminar and bleed flow).',
+    { key: 'share', label: 'Viscous share s at T_ref', kind: 'fraction', help: 'Part of c_ref that follows viscosity (laminar and bleed flow).',
       feeds: [{ page: 'damping-fade', input: 'share', label: 'use this law on the fade page', with: { cRef: 'cRef', Tref: 'Tref', Tcold: 'Tcold', fadeLaw: 'fadeLaw', beta: 'fitBeta', fluid: 'fitFluid', nu40: 'fitNu40', nu100: 'fitNu100', nuTable: 'fitTable' } }] },
     { key: 'cRef', label: 'Damping coefficient at T_ref', kind: 'damping' },
     { key: 'dcdT', label: 'Fade rate at T_ref, (1/c)·dc/dT', kind: 'perTemperature', help: 'Fractional change of c per kelvin at T_ref; negative: c falls as the oil warms.' },

@@ -64,7 +64,7 @@ export const warmUpCalc = defineCalculator({
     { key: 'Tamb', label: 'Air temperature T∞', kind: 'temperature', default: 298.15, min: 223.15, max: 333.15, help: 'Start temperature and air temperature.' },
     { key: 'Tlimit', label: 'Temperature limit T_lim', kind: 'temperature', default: 373.15, min: 233.15, max: 673.15, help: 'Oil or seal limit allowed by the maker.' },
     { key: 't', label: 'Time of interest t', kind: 'time', default: 3600, min: 0, max: 1e7, help: 'The temperature output is given at this time.' },
-    { key: 'duty', label: 'On fraction of the duty', kind: 'dimensionless', default: 1, min: 0, max: 1, minExclusive: true, when: { key: 'power', is: ['steady'] }, help: '1 = constant power; 0.5 = power on half of each period.' },
+    { key: 'duty', label: 'On fraction of the duty', kind: 'fraction', default: 1, min: 0, max: 1, minExclusive: true, when: { key: 'power', is: ['steady'] }, help: '1 = constant power; 0.5 = power on half of each period.' },
     { key: 'period', label: 'Duty period', kind: 'time', default: 600, min: 1, max: 1e6, when: { key: 'power', is: ['steady'] }, help: 'Length of one on + off cycle.' },
     { key: 'Ttouch', label: 'Cool-down target', kind: 'temperature', default: 323.15, min: 233.15, max: 473.15, help: 'Temperature for the cool-down time, e.g. 50 °C before handling.' },
     { key: 'area', label: 'Cooled area A (Biot check)', kind: 'area', default: 0.055, min: 0, max: 100, minExclusive: true, help: 'Surface area behind UA; h = UA/A.' },

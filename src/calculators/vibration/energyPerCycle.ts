@@ -31,12 +31,12 @@ export const energyPerCycle = defineCalculator({
       feeds: [{ page: 'steady-temperature', input: 'P', label: 'Steady damper temperature at this power' }],
     },
     { key: 'ceq', label: 'Equivalent viscous coefficient c_eq', kind: 'damping', help: 'Linear damper dissipating the same E_D at this X and f.' },
-    { key: 'zetaEq', label: 'Equivalent damping ratio ζ_eq', kind: 'dimensionless', optional: true, help: 'E_D/(4π·½kX²); needs k.' },
+    { key: 'zetaEq', label: 'Equivalent damping ratio ζ_eq', kind: 'fraction', optional: true, help: 'E_D/(4π·½kX²); needs k.' },
     { key: 'Fmax', label: 'Peak force F_max', kind: 'force' },
     { key: 'vmax', label: 'Peak stroke velocity', kind: 'velocity', help: 'Of the damper itself (with a series stiffness its own stroke is smaller).' },
     { key: 'Kstorage', label: 'Storage stiffness K′', kind: 'stiffness', optional: true, help: 'With a series stiffness k_s: the part of the force in phase with the stroke (Maxwell model).' },
     { key: 'Kloss', label: 'Loss stiffness K″', kind: 'stiffness', optional: true, help: 'With k_s: the part in phase with the stroke velocity; E_D = π·K″·X².' },
-    { key: 'strokeShare', label: 'Share of the stroke taken by the damper', kind: 'dimensionless', optional: true, help: 'With k_s: |x_d|/|x| (the spring takes the rest).' },
+    { key: 'strokeShare', label: 'Share of the stroke taken by the damper', kind: 'fraction', optional: true, help: 'With k_s: |x_d|/|x| (the spring takes the rest).' },
   ],
   compute(values) {
     const { X, omega, k, ks, law } = setup(values);

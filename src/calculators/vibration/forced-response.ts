@@ -35,7 +35,7 @@ export const forcedResponseCalc = defineCalculator({
   ],
   outputs: [
     { key: 'r', label: 'Frequency ratio r = ω/ω_n', kind: 'dimensionless' },
-    { key: 'zeta', label: 'Damping ratio ζ', kind: 'dimensionless' },
+    { key: 'zeta', label: 'Damping ratio ζ', kind: 'fraction' },
     { key: 'fn', label: 'Natural frequency f_n', kind: 'frequency' },
     { key: 'M', label: 'Magnification factor M', kind: 'dimensionless', help: '1/√((1−r²)² + (2ζr)²).' },
     { key: 'X', label: 'Mass amplitude X (absolute)', kind: 'length' },

@@ -38,7 +38,7 @@ export const fvFit = defineCalculator({
     ], help: 'Linear and power laws are one law for both directions; the bilinear law has slopes per direction and one knee.' },
     { key: 'F0', label: 'Force offset at zero velocity (gas force)', kind: 'force', default: 0, min: -1e6, max: 1e6, help: 'Subtracted from every force before fitting: the force the sheet shows at rest, in the sheet\'s sign convention (a gas-charged damper pushing out reads as a compression force). 0 when the rig has removed it.' },
     { key: 'vRated', label: 'Rated velocity', kind: 'velocity', default: 0.52, min: 0, max: 20, minExclusive: true, help: 'Velocity at which the forces and the ratio are reported; 0.52 m/s is a common dyno reporting speed (common practice, no source).' },
-    { key: 'band', label: 'Tolerance band ± (fraction of the fitted force)', kind: 'dimensionless', default: 0.1, min: 0, max: 1, help: 'Points farther than this from the fitted law are listed; 0: no band check.' },
+    { key: 'band', label: 'Tolerance band ± (fraction of the fitted force)', kind: 'fraction', default: 0.1, min: 0, max: 1, help: 'Points farther than this from the fitted law are listed; 0: no band check.' },
     { key: 'bandFloor', label: 'Smallest band half-width', kind: 'force', default: 20, min: 0, max: 1e6, help: 'Keeps the band from closing at low speed, where the fitted force tends to zero.' },
   ],
   outputs: [

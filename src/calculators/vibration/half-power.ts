@@ -13,8 +13,8 @@ export const halfPowerCalc = defineCalculator({
     { key: 'response', label: 'Measured response', kind: 'choice', default: 'displacement', options: [{ value: 'displacement', label: 'Displacement over force (receptance)' }, { value: 'velocity', label: 'Velocity over force (mobility)' }, { value: 'acceleration', label: 'Acceleration over force (accelerance)' }], help: 'Which frequency response the points were read from; the exact relation differs.' },
   ],
   outputs: [
-    { key: 'zeta', label: 'Damping ratio ζ (exact, points at M_max/√2)', kind: 'dimensionless' },
-    { key: 'zetaSmall', label: 'Small-damping estimate (f₂ − f₁)/(2f_p)', kind: 'dimensionless' },
+    { key: 'zeta', label: 'Damping ratio ζ (exact, points at M_max/√2)', kind: 'fraction' },
+    { key: 'zetaSmall', label: 'Small-damping estimate (f₂ − f₁)/(2f_p)', kind: 'fraction' },
     { key: 'Q', label: 'Quality factor Q = 1/(2ζ)', kind: 'dimensionless' },
     { key: 'fn', label: 'Undamped natural frequency f_n', kind: 'frequency' },
   ],

@@ -15,8 +15,8 @@ export const logDecrementCalc = defineCalculator({
   ],
   outputs: [
     { key: 'delta', label: 'Logarithmic decrement δ', kind: 'dimensionless', help: '(1/n)·ln(x₁/xₙ) per cycle.' },
-    { key: 'zeta', label: 'Damping ratio ζ (exact)', kind: 'dimensionless', help: 'δ/√(4π² + δ²).' },
-    { key: 'zetaSmall', label: 'Damping ratio δ/2π (small-damping form)', kind: 'dimensionless', help: 'Overestimates ζ by the factor 1/√(1−ζ²): 0.5 % at ζ = 0.1, 9 % at ζ = 0.4.' },
+    { key: 'zeta', label: 'Damping ratio ζ (exact)', kind: 'fraction', help: 'δ/√(4π² + δ²).' },
+    { key: 'zetaSmall', label: 'Damping ratio δ/2π (small-damping form)', kind: 'fraction', help: 'Overestimates ζ by the factor 1/√(1−ζ²): 0.5 % at ζ = 0.1, 9 % at ζ = 0.4.' },
     { key: 'wn', label: 'Natural frequency ω_n', kind: 'angularFrequency', optional: true, help: 'Needs T_d.' },
     { key: 'fn', label: 'Natural frequency f_n', kind: 'frequency', optional: true, help: 'Needs T_d.' },
     { key: 'k', label: 'Stiffness k = mω_n²', kind: 'stiffness', optional: true, help: 'Needs T_d and m.' },

@@ -41,7 +41,7 @@ export const ringDownCalc = defineCalculator({
     { key: 'k', label: 'Spring rate (optional)', kind: 'stiffness', default: 4000, min: 0, max: 1e10, minExclusive: true, optional: true, help: 'Without a mass: gives the mass and damping coefficient. With both: a check on the measured frequency.' },
   ],
   outputs: [
-    { key: 'zeta', label: 'Damping ratio ζ', kind: 'dimensionless' },
+    { key: 'zeta', label: 'Damping ratio ζ', kind: 'fraction' },
     { key: 'delta', label: 'Logarithmic decrement δ', kind: 'dimensionless' },
     { key: 'fd', label: 'Damped frequency f_d', kind: 'frequency' },
     { key: 'fn', label: 'Natural frequency f_n', kind: 'frequency' },

@@ -27,7 +27,7 @@ export const sdof = defineCalculator({
   outputs: [
     { key: 'wn', label: 'Natural frequency ωₙ', kind: 'angularFrequency' },
     { key: 'fn', label: 'Natural frequency fₙ', kind: 'frequency' },
-    { key: 'zeta', label: 'Damping ratio ζ', kind: 'dimensionless' },
+    { key: 'zeta', label: 'Damping ratio ζ', kind: 'fraction' },
     { key: 'ccr', label: 'Critical damping coefficient', kind: 'damping' },
     { key: 'wd', label: 'Damped natural frequency', kind: 'angularFrequency', help: '0 unless underdamped.' },
     { key: 'logdec', label: 'Logarithmic decrement δ', kind: 'dimensionless', optional: true, help: 'Underdamped only.' },

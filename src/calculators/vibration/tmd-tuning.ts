@@ -25,7 +25,7 @@ export const tmdTuningCalc = defineCalculator({
   title: 'Tuned mass damper: tuning and exact response',
   summary: 'Optimum absorber frequency and damping (Den Hartog for a harmonic force, Warburton for harmonic base acceleration and white noise), absorber mass, spring and damper, then the exact peak response, absorber stroke, damper force and damper power.',
   inputs: [
-    { key: 'mu', label: 'Mass ratio μ = m_a/m₁', kind: 'dimensionless', default: 0.02, min: 0.001, max: 1, required: true, help: 'Absorber mass over the primary (modal) mass; 0.01–0.05 is usual for floors and footbridges.' },
+    { key: 'mu', label: 'Mass ratio μ = m_a/m₁', kind: 'fraction', default: 0.02, min: 0.001, max: 1, required: true, help: 'Absorber mass over the primary (modal) mass; 0.01–0.05 is usual for floors and footbridges.' },
     { key: 'm1', label: 'Primary (modal) mass m₁', kind: 'mass', default: 14_000, min: 0, max: 1e9, minExclusive: true, required: true, help: 'Mass of the primary system, or the modal mass of the mode to control.' },
     { key: 'k1', label: 'Primary (modal) stiffness k₁', kind: 'stiffness', default: 2.44e6, min: 0, max: 1e12, minExclusive: true, required: true, help: 'Stiffness of the primary, or modal stiffness m₁ω₁².' },
     {
@@ -38,14 +38,14 @@ export const tmdTuningCalc = defineCalculator({
       ],
       help: 'What drives the primary and which measure of its response the tuning minimises.',
     },
-    { key: 'zeta1', label: 'Primary damping ratio ζ₁', kind: 'dimensionless', default: 0, min: 0, max: 0.2, help: 'Used only in the exact response; the tuning formulas assume an undamped primary.' },
+    { key: 'zeta1', label: 'Primary damping ratio ζ₁', kind: 'fraction', default: 0, min: 0, max: 0.2, help: 'Used only in the exact response; the tuning formulas assume an undamped primary.' },
     { key: 'F0', label: 'Force amplitude F₀', kind: 'force', default: 250, min: 0, max: 1e9, minExclusive: true, when: { key: 'excitation', is: ['force', 'white-force'] }, help: 'Amplitude of a harmonic force for the stroke, damper force and power at the worst frequency.' },
     { key: 'ag', label: 'Base acceleration amplitude', kind: 'acceleration', default: 0.1, min: 0, max: 1e3, minExclusive: true, when: { key: 'excitation', is: ['base', 'white-base'] }, help: 'Amplitude of a harmonic base acceleration for the stroke, damper force and power at the worst frequency.' },
   ],
   outputs: [
     { key: 'fopt', label: 'Frequency ratio ω_a/ω₁', kind: 'dimensionless', digits: 5 },
-    { key: 'zeta', label: 'Absorber damping ratio ζ_a = c/(2m_aω_a)', kind: 'dimensionless', digits: 5, help: 'Referred to the absorber’s own natural frequency.' },
-    { key: 'zetaDH', label: 'Same damping as c/(2m_aω₁) (Den Hartog’s c/c_c)', kind: 'dimensionless', digits: 5, help: 'Referred to the primary’s frequency: ζ_a·ω_a/ω₁.' },
+    { key: 'zeta', label: 'Absorber damping ratio ζ_a = c/(2m_aω_a)', kind: 'fraction', digits: 5, help: 'Referred to the absorber’s own natural frequency.' },
+    { key: 'zetaDH', label: 'Same damping as c/(2m_aω₁) (Den Hartog’s c/c_c)', kind: 'fraction', digits: 5, help: 'Referred to the primary’s frequency: ζ_a·ω_a/ω₁.' },
     { key: 'md', label: 'Absorber mass m_a', kind: 'mass' },
     { key: 'kd', label: 'Absorber spring k_a', kind: 'stiffness' },
     { key: 'cd', label: 'Absorber damper c_a', kind: 'damping' },

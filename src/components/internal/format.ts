@@ -27,7 +27,7 @@ export function formatInput(x: number): string {
 
 /** The unit a kind is shown in for a unit system ('' for dimensionless). */
 export function displayUnit(kind: QuantityKind, system: UnitSystem): UnitDef {
-  return kind === 'dimensionless' ? siUnit(kind) : preferredUnit(kind, system);
+  return kind === 'dimensionless' || kind === 'fraction' ? siUnit(kind) : preferredUnit(kind, system);
 }
 
 /** Converts an SI value for display. */

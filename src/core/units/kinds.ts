@@ -4,6 +4,7 @@
  */
 export const QUANTITY_KINDS = [
   'dimensionless',
+  'fraction',
   'length',
   'mass',
   'time',
@@ -35,6 +36,8 @@ export const QUANTITY_KINDS = [
   'displacementPsd',
   'eventRate',
   'perTemperature',
+  'momentOfInertia',
+  'torque',
 ] as const;
 
 export type QuantityKind = (typeof QUANTITY_KINDS)[number];
@@ -42,6 +45,8 @@ export type QuantityKind = (typeof QUANTITY_KINDS)[number];
 /** The SI unit symbol each kind is stored in inside the core. */
 export const SI_SYMBOL: Record<QuantityKind, string> = {
   dimensionless: '',
+  /** A share of a whole (damping ratio, efficiency, emissivity): the only kind offered in %. */
+  fraction: '',
   length: 'm',
   mass: 'kg',
   time: 's',
@@ -75,4 +80,7 @@ export const SI_SYMBOL: Record<QuantityKind, string> = {
   eventRate: '1/h',
   /** A fractional change per kelvin (thermal expansion coefficient, fade rate): 1/°F is 1.8 per K. */
   perTemperature: '1/K',
+  /** Mass moment of inertia about an axis (rotary end-stop loads). */
+  momentOfInertia: 'kg·m²',
+  torque: 'N·m',
 };

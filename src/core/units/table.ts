@@ -43,8 +43,9 @@ const any = (id: string, symbol: string, kind: QuantityKind, factor = 1): UnitDe
 });
 
 export const UNITS: readonly UnitDef[] = [
+  // % only for a share of a whole; a plain number (waviness, exponent, count, ratio above 1) has no %
   any('1', '', 'dimensionless'),
-  any('%', '%', 'dimensionless', 0.01),
+  any('1', '', 'fraction'), any('%', '%', 'fraction', 0.01),
 
   si('m', 'm', 'length'), si('mm', 'mm', 'length', 1e-3), si('cm', 'cm', 'length', 1e-2), si('um', 'µm', 'length', 1e-6),
   us('in', 'in', 'length', IN), us('ft', 'ft', 'length', FT), us('mil', 'mil', 'length', IN / 1000),
@@ -117,6 +118,9 @@ export const UNITS: readonly UnitDef[] = [
   // a fractional change per degree: per °F is 1.8 per kelvin (NIST SP 811 B.9 applied to 1/ΔT)
   si('1/K', '1/K', 'perTemperature'), si('%/K', '%/K', 'perTemperature', 0.01), us('1/F', '1/°F', 'perTemperature', 1 / DEGF), us('%/F', '%/°F', 'perTemperature', 0.01 / DEGF),
 
+  si('kg.m2', 'kg·m²', 'momentOfInertia'), us('lb.ft2', 'lb·ft²', 'momentOfInertia', LB * FT * FT), us('lb.in2', 'lb·in²', 'momentOfInertia', LB * IN * IN), us('slug.ft2', 'slug·ft²', 'momentOfInertia', (LBF / FT) * FT * FT),
+  si('N.m', 'N·m', 'torque'), us('lbf.ft', 'lbf·ft', 'torque', LBF * FT), us('lbf.in', 'lbf·in', 'torque', LBF * IN),
+
   any('1/h', 'per hour', 'eventRate'), any('1/min', 'per minute', 'eventRate', 60), any('1/s', 'per second', 'eventRate', 3600),
 ];
 
@@ -135,4 +139,7 @@ export const PREFERRED: Partial<Record<QuantityKind, { SI: string; US: string }>
   area: { SI: 'm2', US: 'in2' },
   force: { SI: 'N', US: 'lbf' },
   perTemperature: { SI: '%/K', US: '%/F' },
+  fraction: { SI: '1', US: '1' },
+  momentOfInertia: { SI: 'kg.m2', US: 'lb.ft2' },
+  torque: { SI: 'N.m', US: 'lbf.ft' },
 };

@@ -98,11 +98,12 @@ describe('damping-fade coupled equilibrium', () => {
       if (!d || !('min' in d)) throw new Error(key);
       return fc.double({ min: d.min, max: d.max, noNaN: true }).filter((x) => !(d.minExclusive && x === d.min));
     };
-    const keys = ['cRef', 'Tref', 'share', 'nu40', 'nu100', 'X', 'f', 'P', 'Tlimit', 'Cth', 'D', 'L', 'Tamb', 'dTsur', 'V', 'flowFactor', 'eps', 'ends'];
+    const keys = ['cRef', 'Tref', 'share', 'nu40', 'nu100', 'X', 'f', 'P', 'Tlimit', 'Cth', 'D', 'L', 'Tamb', 'dTsur', 'V', 'flowFactor', 'eps'];
     const arb = fc.record({
       ...Object.fromEntries(keys.map((k) => [k, number(k)])),
       duty: fc.constantFrom('harmonic', 'random'),
       orientation: fc.constantFrom('horizontal', 'vertical'),
+      ends: fc.constantFrom('0', '1'),
     });
     fc.assert(fc.property(arb, (drawn) => {
       const inputs = drawn as Record<string, number | string>;
