@@ -1,6 +1,6 @@
 import {
-  ISO_8608_CLASSES, quarterCarGains, roadDamperPower, roadDisplacementPsd, roadDuty, roadRoughness,
-  type ClassValue, type RoadDamper, type RoadInput,
+  comfortReaction, damperAtWheel, damperForceRms, ISO_8608_CLASSES, quarterCarGains, quarterCarOptimalDamping, roadDamperPower,
+  roadDisplacementPsd, roadDuty, roadRoughness, WEIGHTING_WK, weightingSquared, type ClassValue, type RoadDamper, type RoadInput,
 } from '../../core/duty/index.ts';
 import { choice, defineCalculator, num, optNum, type ChartSpec, type Values } from '../types.ts';
 import { lawInputs, lawStudy } from '../damperLaw/inputs.ts';
@@ -16,11 +16,14 @@ function setup(values: Values) {
   const fromClass = roadRoughness(cls, which);
   const road: RoadInput = { Gd0: measured ?? fromClass.Gd0, w: num(values, 'w'), V: num(values, 'V') };
   const car = { ms: num(values, 'ms'), mu: num(values, 'mu'), ks: num(values, 'ks'), kt: num(values, 'kt') };
-  const damper: RoadDamper = choice(values, 'law') === 'power'
+  // the law is the damper's own; the quarter car sees it at the wheel through the motion ratio
+  const atDamper: RoadDamper = choice(values, 'law') === 'power'
     ? { kind: 'power', C: num(values, 'Fref') / num(values, 'vref') ** num(values, 'alpha'), alpha: num(values, 'alpha') }
     : { kind: 'linear', c: num(values, 'c') };
+  const MR = num(values, 'MR');
+  const damper = damperAtWheel(atDamper, MR);
   const basis = measured !== undefined ? `measured G_d(n0) = ${measured.toPrecision(4)} m³` : `ISO 8608 class ${cls}, ${which === 'mean' ? 'geometric mean' : `${which} limit`}`;
-  return { road, car, damper, basis, openLimit: measured === undefined && fromClass.openLimit };
+  return { road, car, damper, atDamper, MR, basis, openLimit: measured === undefined && fromClass.openLimit };
 }
 
 const logGrid = (a: number, b: number, n: number) => Array.from({ length: n }, (_, i) => a * (b / a) ** (i / (n - 1)));
@@ -29,7 +32,7 @@ const logGrid = (a: number, b: number, n: number) => Array.from({ length: n }, (
 export const roadPower = defineCalculator({
   id: 'road-power',
   title: 'Damper power on a random road (ISO 8608 quarter car)',
-  summary: 'Mean power a suspension damper turns into heat on an ISO 8608 road, with ride (body acceleration), suspension travel and dynamic tyre load, by frequency-domain integration checked against closed forms.',
+  summary: 'Mean power a suspension damper turns into heat on an ISO 8608 road, with ride (body acceleration, ISO 2631-1 weighted comfort value), suspension travel, dynamic tyre load, the comfort and road-holding optima of the damping and a motion ratio between wheel and damper, by frequency-domain integration checked against closed forms.',
   inputs: [
     { key: 'roadClass', label: 'ISO 8608 road class', kind: 'choice', options: ISO_8608_CLASSES.map((c) => ({ value: c, label: `Class ${c}` })), default: 'C', help: 'A (very good) to H (very poor). Ignored when a measured G_d(n0) is given.' },
     { key: 'classValue', label: 'Value within the class', kind: 'choice', options: [{ value: 'mean', label: 'geometric mean' }, { value: 'lower', label: 'lower class limit' }, { value: 'upper', label: 'upper class limit' }], default: 'mean', help: 'Each class spans half to twice its geometric mean.' },
@@ -41,17 +44,24 @@ export const roadPower = defineCalculator({
     { key: 'ks', label: 'Suspension spring rate (at wheel)', kind: 'stiffness', default: 16000, min: 100, max: 5e6, required: true, help: 'Wheel rate of the spring.' },
     { key: 'kt', label: 'Tyre vertical rate', kind: 'stiffness', default: 160000, min: 1000, max: 1e7, required: true, help: 'Radial stiffness of the tyre.' },
     ...LAW,
+    { key: 'MR', label: 'Motion ratio MR (damper travel / wheel travel)', kind: 'dimensionless', default: 1, min: 0.2, max: 3, help: 'The damper law above is the damper\'s own; at the wheel it acts as c·MR² (C·MR^(1+α)). 1: damper on the wheel axis. Damper velocity, force and stroke are reported at the damper, ride and road holding at the wheel.' },
   ],
   outputs: [
-    { key: 'vRms', label: 'RMS damper velocity', kind: 'velocity' },
+    { key: 'vRms', label: 'RMS damper velocity', kind: 'velocity', help: 'At the damper: MR × the RMS suspension velocity at the wheel.' },
+    { key: 'FRms', label: 'RMS damper force', kind: 'force', help: 'At the damper, for a Gaussian damper velocity.' },
     { key: 'P', label: 'Mean damper power', kind: 'power', help: 'Heat the damper must shed, per corner.',
       feeds: [{ page: 'steady-temperature', input: 'P', label: 'Check damper body temperature' }, { page: 'warm-up', input: 'P', label: 'Warm-up time on this road' }] },
     { key: 'accRms', label: 'RMS body acceleration (ride)', kind: 'acceleration' },
-    { key: 'travelRms', label: 'RMS suspension travel', kind: 'length' },
+    { key: 'awWk', label: 'Weighted RMS body acceleration a_w (ISO 2631-1, W_k)', kind: 'acceleration', help: 'Vertical body acceleration weighted by W_k, from 0 to ∞ Hz (the standard\'s band 0.5–80 Hz holds nearly all of it). At the body above the wheel, not at a seat.' },
+    { key: 'comfort', label: 'Likely reaction (ISO 2631-1 Annex C)', kind: 'text', help: 'Public-transport comfort bands, from memory: below 0.315 m/s² not uncomfortable; 0.315–0.63 a little; 0.5–1 fairly; 0.8–1.6 uncomfortable; 1.25–2.5 very; above 2 extremely uncomfortable.' },
+    { key: 'cComfort', label: 'Comfort-optimal damping (at the damper)', kind: 'damping', help: 'Least unweighted body acceleration on a w = 2 road: k_s·√((m_s + m_u)/k_t) at the wheel, ÷ MR² at the damper.' },
+    { key: 'cRoadHolding', label: 'Road-holding-optimal damping (at the damper)', kind: 'damping', help: 'Least dynamic tyre load on a w = 2 road, ÷ MR² at the damper. Between the two lies the usual compromise.' },
+    { key: 'travelRms', label: 'RMS suspension travel (at the wheel)', kind: 'length' },
+    { key: 'strokeRms', label: 'RMS damper stroke', kind: 'length', help: 'MR × the suspension travel.' },
     { key: 'tyreLoadRms', label: 'RMS dynamic tyre load', kind: 'force' },
     { key: 'tyreLoadRatio', label: 'Dynamic / static tyre load', kind: 'fraction', help: 'Road holding: at 1/3 a Gaussian dynamic load exceeds the static load, and the tyre leaves the road, about 0.13 % of the time.' },
     { key: 'Gd0Used', label: 'G_d(n0) used', kind: 'roadRoughness' },
-    { key: 'ceq', label: 'Linear (or equivalent) damping', kind: 'damping' },
+    { key: 'ceq', label: 'Linear (or equivalent) damping, at the damper', kind: 'damping' },
     { key: 'PClosed', label: 'Mean power, closed form (w = 2)', kind: 'power', optional: true, help: 'π²·k_t·G_d(n0)·n0²·V: no damper or mass term.' },
     { key: 'vRmsClosed', label: 'RMS damper velocity, closed form (w = 2)', kind: 'velocity', optional: true },
     { key: 'closedFormDiff', label: 'Quadrature check: largest difference from the closed forms', kind: 'fraction', digits: 2, help: 'Same car and damping on a w = 2 road, where closed forms exist (for w = 2 these are the results shown).' },
@@ -64,6 +74,9 @@ export const roadPower = defineCalculator({
     const r = roadDuty(s.car, s.road, s.damper);
     const c = r.closed;
     const diff = r.closedFormDiff;
+    const MR = s.MR;
+    const vRms = MR * r.vRms;
+    const opt = quarterCarOptimalDamping(s.car);
     const warnings: string[] = [];
     if (optNum(values, 'Gd0') !== undefined) warnings.push('A measured G_d(n0) is given, so the road class is not used; leave that field empty to use the class.');
     if (s.openLimit) warnings.push('ISO 8608 leaves this class limit open; the value shown is the factor-2 step from the class mean.');
@@ -72,8 +85,10 @@ export const roadPower = defineCalculator({
     if (s.road.w !== 2) warnings.push('w ≠ 2: road velocity is not white, so only the quadrature applies (no closed-form check).');
     return {
       outputs: {
-        vRms: r.vRms, P: r.P, accRms: r.accRms, travelRms: r.travelRms, tyreLoadRms: r.tyreLoadRms, tyreLoadRatio: r.tyreLoadRatio,
-        Gd0Used: s.road.Gd0, ceq: r.c, PClosed: c?.P, vRmsClosed: c?.vRms, closedFormDiff: diff, quadError: r.relError,
+        vRms, FRms: damperForceRms(s.atDamper, vRms), P: r.P, accRms: r.accRms, awWk: r.awWk, comfort: comfortReaction(r.awWk),
+        cComfort: opt.comfort / (MR * MR), cRoadHolding: opt.roadHolding / (MR * MR),
+        travelRms: r.travelRms, strokeRms: MR * r.travelRms, tyreLoadRms: r.tyreLoadRms, tyreLoadRatio: r.tyreLoadRatio,
+        Gd0Used: s.road.Gd0, ceq: r.c / (MR * MR), PClosed: c?.P, vRmsClosed: c ? MR * c.vRms : undefined, closedFormDiff: diff, quadError: r.relError,
         band: `${r.band[0].toPrecision(3)}–${r.band[1].toPrecision(3)} Hz`,
         roadBasis: s.basis,
       },
@@ -82,7 +97,7 @@ export const roadPower = defineCalculator({
   },
   charts(values, result): ChartSpec[] {
     const s = setup(values);
-    const q = { ...s.car, c: result.outputs.ceq as number };
+    const q = { ...s.car, c: (result.outputs.ceq as number) * s.MR * s.MR };
     const f = logGrid(0.1, 100, 241);
     const g = f.map((fi) => ({ fi, h: quarterCarGains(q, fi), gz: roadDisplacementPsd(s.road, fi) }));
     const speeds = s.damper.kind === 'linear' || s.road.w === 2 ? [2.5, 5, 10, 20, 30, 40] : [5, 10, 20, 40];
@@ -101,14 +116,17 @@ export const roadPower = defineCalculator({
       {
         id: 'velocity-psd', title: 'Damper velocity PSD',
         x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'PSD', kind: 'velocityPsd', scale: 'log' },
-        series: [{ label: 'damper velocity', x: f, y: g.map((e) => e.h.damperVelocity * e.gz), tone: 0 }],
+        series: [{ label: 'damper velocity', x: f, y: g.map((e) => s.MR * s.MR * e.h.damperVelocity * e.gz), tone: 0 }],
         summary: `Damper velocity PSD from 0.1 to 100 Hz; RMS ${qty(result.outputs.vRms as number, 'velocity', 3)}. Peaks sit at the body and wheel-hop modes.`,
       },
       {
         id: 'acceleration-psd', title: 'Body acceleration PSD',
         x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'PSD', kind: 'accelerationPsd', scale: 'log' },
-        series: [{ label: 'body acceleration', x: f, y: g.map((e) => e.h.bodyAcceleration * e.gz), tone: 1 }],
-        summary: `Sprung-mass acceleration PSD; RMS ${qty(result.outputs.accRms as number, 'acceleration', 3)}.`,
+        series: [
+          { label: 'body acceleration', x: f, y: g.map((e) => e.h.bodyAcceleration * e.gz), tone: 1 },
+          { label: 'weighted by W_k (ISO 2631-1)', x: f, y: g.map((e) => weightingSquared(WEIGHTING_WK, e.fi) * e.h.bodyAcceleration * e.gz), tone: 2, style: 'dash' },
+        ],
+        summary: `Sprung-mass acceleration PSD; RMS ${qty(result.outputs.accRms as number, 'acceleration', 3)}, W_k-weighted ${qty(result.outputs.awWk as number, 'acceleration', 3)} (${String(result.outputs.comfort)}).`,
       },
       {
         id: 'power-speed', title: 'Mean damper power against speed, ISO 8608 classes (geometric means)',
@@ -151,8 +169,34 @@ export const roadPower = defineCalculator({
       source: { key: 'zuo2013', locator: 'mean power independent of damper and masses (published abstract)' },
       provenance: 'closed form',
     },
+    {
+      name: 'TW-210 corner, class C at 20 m/s: W_k-weighted RMS body acceleration a_w = 1.1825 m/s² ("uncomfortable")',
+      inputs: { roadClass: 'C', V: 20, ms: 240, mu: 36, ks: 16000, kt: 160000, c: 980 },
+      expected: { awWk: 1.182549, comfort: 'uncomfortable' },
+      tolerance: 1e-5, why: 'reference by a 400 000-step trapezoid of |W_k|²·|H_a|²·G_z over 10⁻³–10⁴ Hz (test/core/duty/comfort.test.ts), given to 7 s.f.',
+      source: { key: 'iso2631_1', locator: 'Annex A weighting W_k, Table A.2 parameters; Annex C comfort bands (from memory)' },
+      provenance: 'from memory',
+    },
+    {
+      name: 'Motion ratio 0.7: a 2000 N·s/m damper rides like 980 N·s/m at the wheel; damper velocity ×0.7, same power',
+      inputs: { roadClass: 'C', V: 20, ms: 240, mu: 36, ks: 16000, kt: 160000, c: 2000, MR: 0.7 },
+      expected: { accRms: 1.41708, vRms: 0.7 * 0.287231, FRms: 2000 * 0.7 * 0.287231, P: 80.8518, ceq: 2000 },
+      tolerance: 3e-4, why: 'closed forms of the wheel-rate case (first case) to 5–6 s.f.; c_w = MR²·c by virtual work',
+      source: { key: 'dixon2007', locator: 'installation motion ratio, wheel rate = MR² × damper rate (chapter from memory)' },
+      provenance: 'closed form',
+    },
+    {
+      name: 'TW-210 comfort and road-holding optima: k_s·√((m_s + m_u)/k_t) = 664.53 N·s/m and 1948.14 N·s/m',
+      inputs: { roadClass: 'C', V: 20, ms: 240, mu: 36, ks: 16000, kt: 160000, c: 980 },
+      expected: { cComfort: 664.5299, cRoadHolding: 1948.140 },
+      tolerance: 1e-6, why: 'closed form to 7 s.f.',
+      source: { key: 'gobbi2001', locator: 'optimal damping for discomfort and road holding, white road velocity (equation numbers from memory)' },
+      provenance: 'closed form',
+    },
   ],
   sources: [
+    { key: 'iso2631_1', locator: 'Annex A (W_k, W_d), Table 3, Annex C (from memory)' },
+    { key: 'dixon2007', locator: 'motion ratio (from memory)' },
     { key: 'iso8608', locator: '§5 and Table 1 (from memory)' },
     { key: 'zuo2013', locator: 'abstract and quarter-car analysis' },
     { key: 'gobbi2001', locator: 'closed-form variances (from memory)' },

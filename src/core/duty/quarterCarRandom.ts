@@ -4,7 +4,8 @@
  */
 import { quarterCarCharacteristicFrequencies, quarterCarGains, type QuarterCar } from './quarterCar.ts';
 import { roadDisplacementPsd, type RoadInput } from './roadPsd.ts';
-import { spectralIntegral, type SpectralIntegral } from './spectralIntegral.ts';
+import { spectralIntegral, spectralIntegrals, type SpectralIntegral } from './spectralIntegral.ts';
+import { WEIGHTING_WK, weightingSquared } from './comfortWeighting.ts';
 
 export interface QuarterCarRandom {
   /** Variances, each with its band and error statement. */
@@ -12,6 +13,8 @@ export interface QuarterCarRandom {
   readonly travel: SpectralIntegral;
   readonly bodyAcceleration: SpectralIntegral;
   readonly tyreLoad: SpectralIntegral;
+  /** Body acceleration weighted by ISO 2631-1 W_k, (m/s²)². */
+  readonly weightedAcceleration: SpectralIntegral;
 }
 
 /** Quadrature band: three decades below the lowest characteristic frequency to three above the highest. */
@@ -23,9 +26,11 @@ export function quarterCarBand(q: QuarterCar): [number, number] {
 /**
  * Variance of each response:
  *
- * $$\sigma_y^2 = \int_0^\infty |H_y(f)|^2\, G_z(f)\, df$$
+ * $$\sigma_y^2 = \int_0^\infty |H_y(f)|^2\, G_z(f)\, df,\qquad a_{w}^2 = \int_0^\infty |W_k(f)|^2 |H_{\ddot z_s}(f)|^2 G_z(f)\, df$$
  *
- * with the exact quarter-car gains (quarterCarGains) and the ISO 8608 road PSD (roadDisplacementPsd).
+ * with the exact quarter-car gains (quarterCarGains), the ISO 8608 road PSD (roadDisplacementPsd) and
+ * the ISO 2631-1 weighting W_k (weightingSquared). The five integrals share their frequency points
+ * (spectralIntegrals): one evaluation of the gains per point, each integral to its own tolerance.
  *
  * @param q quarter car (validated); road validated with checkRoad
  * @param relTol quadrature tolerance (relative), default 1e-8
@@ -35,13 +40,14 @@ export function quarterCarBand(q: QuarterCar): [number, number] {
 export function quarterCarRandom(q: QuarterCar, road: RoadInput, relTol = 1e-8): QuarterCarRandom {
   const [f1, f2] = quarterCarBand(q);
   const peaks = quarterCarCharacteristicFrequencies(q);
-  const gz = (f: number) => roadDisplacementPsd(road, f);
-  return {
-    damperVelocity: spectralIntegral((f) => quarterCarGains(q, f).damperVelocity * gz(f), f1, f2, relTol, 120, peaks),
-    travel: spectralIntegral((f) => quarterCarGains(q, f).travel * gz(f), f1, f2, relTol, 120, peaks),
-    bodyAcceleration: spectralIntegral((f) => quarterCarGains(q, f).bodyAcceleration * gz(f), f1, f2, relTol, 120, peaks),
-    tyreLoad: spectralIntegral((f) => quarterCarGains(q, f).tyreLoad * gz(f), f1, f2, relTol, 120, peaks),
-  };
+  const all = spectralIntegrals((f) => {
+    const h = quarterCarGains(q, f);
+    const gz = roadDisplacementPsd(road, f);
+    const acc = h.bodyAcceleration * gz;
+    return [h.damperVelocity * gz, h.travel * gz, acc, h.tyreLoad * gz, weightingSquared(WEIGHTING_WK, f) * acc];
+  }, f1, f2, relTol, 120, peaks);
+  const [damperVelocity, travel, bodyAcceleration, tyreLoad, weightedAcceleration] = all as [SpectralIntegral, SpectralIntegral, SpectralIntegral, SpectralIntegral, SpectralIntegral];
+  return { damperVelocity, travel, bodyAcceleration, tyreLoad, weightedAcceleration };
 }
 
 /** Damper-velocity variance alone, (m/s)², with a looser tolerance for iterations. */

@@ -20,6 +20,8 @@ export interface RoadDuty {
   /** Mean damper power, W. */
   readonly P: number;
   readonly accRms: number;
+  /** ISO 2631-1 W_k-weighted RMS body acceleration, m/s². */
+  readonly awWk: number;
   readonly travelRms: number;
   readonly tyreLoadRms: number;
   /** RMS dynamic tyre load / static load (m_s + m_u)·g. */
@@ -27,7 +29,7 @@ export interface RoadDuty {
   /** Linear coefficient used (the equivalent one for a power law), N·s/m. */
   readonly c: number;
   readonly band: readonly [number, number];
-  /** Largest relative error bound of the four integrals. */
+  /** Largest relative error bound of the five integrals. */
   readonly relError: number;
   /** Closed forms (w = 2 only), same c. */
   readonly closed?: { readonly vRms: number; readonly P: number; readonly accRms: number; readonly travelRms: number; readonly tyreLoadRms: number };
@@ -86,10 +88,11 @@ export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: Ro
   return {
     vRms, P, c, iterations, closed, closedFormDiff,
     accRms: Math.sqrt(r.bodyAcceleration.value),
+    awWk: Math.sqrt(r.weightedAcceleration.value),
     travelRms: Math.sqrt(r.travel.value),
     tyreLoadRms,
     tyreLoadRatio: tyreLoadRms / ((car.ms + car.mu) * STANDARD_GRAVITY),
     band: r.damperVelocity.band,
-    relError: Math.max(r.damperVelocity.relError, r.travel.relError, r.bodyAcceleration.relError, r.tyreLoad.relError),
+    relError: Math.max(r.damperVelocity.relError, r.travel.relError, r.bodyAcceleration.relError, r.tyreLoad.relError, r.weightedAcceleration.relError),
   };
 }

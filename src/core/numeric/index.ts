@@ -1,5 +1,6 @@
 /** Numerical building blocks shared by every domain. */
 export { adaptiveSimpson } from './adaptiveSimpson.ts';
+export { adaptiveSimpsonVector } from './adaptiveSimpsonVector.ts';
 export { gamma } from './gamma.ts';
 export { brentRoot, type BrentOptions } from './brent.ts';
 export { bracketRoots, type Crossing } from './bracketRoots.ts';

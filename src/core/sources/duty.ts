@@ -7,6 +7,7 @@ export const duty = {
   lakes2009: { kind: 'book', citation: 'R. Lakes, Viscoelastic Materials, Cambridge University Press, 2009.' },
   fema274: { kind: 'report', citation: 'FEMA 274, NEHRP Commentary on the Guidelines for the Seismic Rehabilitation of Buildings, Federal Emergency Management Agency, 1997.' },
   iso8608: { kind: 'standard', citation: 'ISO 8608:2016, Mechanical vibration — Road surface profiles — Reporting of measured data, 2nd ed., International Organization for Standardization, 2016.' },
+  iso2631_1: { kind: 'standard', citation: 'ISO 2631-1:1997, Mechanical vibration and shock — Evaluation of human exposure to whole-body vibration — Part 1: General requirements, 2nd ed., International Organization for Standardization, 1997.' },
   wong2008: { kind: 'book', citation: 'J. Y. Wong, Theory of Ground Vehicles, 4th ed., Wiley, 2008.' },
   zuo2013: { kind: 'paper', citation: 'L. Zuo and P.-S. Zhang, Energy harvesting, ride comfort, and road handling of regenerative vehicle suspensions, J. Vib. Acoust. 135(1), 011002, 2013.' },
   gobbi2001: { kind: 'paper', citation: 'M. Gobbi and G. Mastinu, Analytical description and optimization of the dynamic behaviour of passively suspended road vehicles, J. Sound Vib. 245(3), 457–481, 2001.' },
