@@ -26,6 +26,7 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('unsprungMass', 'mass', 'Wheel, tyre, hub and the unsprung part of the links at the corner.'),
   q('springRate', 'stiffness', 'Suspension spring rate at the wheel.'),
   q('tyreRate', 'stiffness', 'Radial (vertical) stiffness of the tyre.'),
+  q('motionRatio', 'dimensionless', 'Damper travel per wheel travel at the corner (installation ratio; 1 = damper on the wheel axis).'),
   q('strokeAmplitude', 'length', 'Amplitude (half of peak-to-peak) of a harmonic damper stroke.'),
   q('strokeFrequency', 'frequency', 'Frequency of a harmonic damper stroke.'),
   q('movingMass', 'mass', 'Mass that moves onto an end stop, payload included.'),

@@ -87,9 +87,14 @@ function one(check: CheckName, p: PlannedStep, run: StepRun, plan: StudyPlan, pu
     case 'travel':
       return upTo(base, GAUSSIAN_PEAK * n(run.outputs.travelRms), limitOf('availableTravel'), 'suspension travel 3 × RMS (exceeded about 0.13 % of the time) against the travel available to the bump stop', [...present(run, ['roadClass', 'Gd0', 'V', 'ms', 'mu', 'ks', 'kt', 'law', 'c']), 'availableTravel']);
     case 'stroke-energy':
-      return upTo(base, n(run.outputs.E), limitOf('ratedStrokeEnergy'), 'energy per stroke against the damper\'s rated energy per stroke', [...present(run, ['m', 'v', 'Fp', 's', 'vertical']), 'ratedStrokeEnergy']);
-    case 'hourly-energy':
-      return upTo(base, n(run.outputs.Ehour), limitOf('ratedHourlyEnergy'), 'energy per hour against the damper\'s rated energy per hour', [...present(run, ['m', 'v', 'Fp', 's', 'vertical', 'cph']), 'ratedHourlyEnergy']);
+      return upTo(base, n(run.outputs.E), limitOf('ratedStrokeEnergy'), 'energy per stroke against the damper\'s rated energy per stroke', [...present(run, ['loadCase', 'm', 'v', 'Fp', 's', 'vertical', 'I', 'omega', 'R', 'M', 'h', 'theta', 'friction', 'n']), 'ratedStrokeEnergy']);
+    case 'hourly-energy': {
+      // impact derates the rating for the ambient (EhAllow) when it is given one; the verdict uses what the page shows
+      const allow = run.outputs.EhAllow;
+      const rests = [...present(run, ['loadCase', 'm', 'v', 'Fp', 's', 'vertical', 'I', 'omega', 'R', 'M', 'h', 'theta', 'friction', 'n', 'cph']), 'ratedHourlyEnergy'];
+      if (typeof allow === 'number') return upTo(base, n(run.outputs.Ehour), allow, 'energy per hour against the damper\'s rated energy per hour, derated for the ambient', [...rests, ...present(run, ['Tamb', 'Trated', 'Tmax'])]);
+      return upTo(base, n(run.outputs.Ehour), limitOf('ratedHourlyEnergy'), 'energy per hour against the damper\'s rated energy per hour', rests);
+    }
   }
 }
 

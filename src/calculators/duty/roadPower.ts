@@ -204,7 +204,7 @@ export const roadPower = defineCalculator({
     { key: 'newland1993', locator: 'ch. 7 (from memory)' },
   ],
   study: {
-    inputs: { V: 'vehicleSpeed', ms: 'sprungMass', mu: 'unsprungMass', ks: 'springRate', kt: 'tyreRate', ...lawStudy(LAW) },
+    inputs: { V: 'vehicleSpeed', ms: 'sprungMass', mu: 'unsprungMass', ks: 'springRate', kt: 'tyreRate', ...lawStudy(LAW), MR: 'motionRatio' },
     publishes: { P: 'meanPower' },
   },
 });
