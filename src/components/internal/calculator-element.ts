@@ -259,8 +259,10 @@ export class CalculatorElement extends HTMLElement {
       if (v === undefined && !isActive(def, values)) continue;
       if (typeof v !== 'number') { ctl.value = ''; continue; }
       const typed = shown[def.key];
-      // String() of a double parses back to the same double: the field reproduces the value exactly
-      ctl.value = typed && (!sel || sel.value === typed.unit) ? String(typed.value) : String(sel ? fromSI(v, findUnit(def.kind, sel.value)) : v);
+      // ten significant digits: a computed value (a mean power from another step, a value in hp)
+      // stays readable and reads back within 1e-9 of itself, the tolerance of sameValues and of
+      // the study's write-back, so it is never taken for a change
+      ctl.value = typed && (!sel || sel.value === typed.unit) ? String(typed.value) : formatInput(sel ? fromSI(v, findUnit(def.kind, sel.value)) : v);
     }
     this.recompute();
   }
@@ -448,7 +450,8 @@ if (!customElements.get('db-calculator')) customElements.define('db-calculator',
  * one that does not apply (a choice of another mode the runner keeps).
  */
 function sameValues(calc: CalculatorDefinition, given: Values, read: Values): boolean {
-  const same = (x: unknown, y: unknown) => typeof x === 'number' && typeof y === 'number' ? Math.abs(x - y) <= 1e-12 * Math.max(Math.abs(x), Math.abs(y)) : x === y;
+  // 1e-9: a field holds ten significant digits (formatInput), so a value filled in reads back within 5e-10
+  const same = (x: unknown, y: unknown) => typeof x === 'number' && typeof y === 'number' ? Math.abs(x - y) <= 1e-9 * Math.max(Math.abs(x), Math.abs(y)) : x === y;
   return calc.inputs.every((d) => read[d.key] === undefined
     ? given[d.key] === undefined || !isActive(d, read)
     : same(read[d.key], given[d.key]));
