@@ -97,6 +97,6 @@ export const storeyDampers = defineCalculator({
   ],
   study: {
     inputs: { Cth: 'heatCapacity', ...lawStudy(LAW) },
-    publishes: { hotP: 'meanPower', hotStroke: 'strokeAmplitude', f1: 'strokeFrequency' },
+    publishes: { hotP: 'meanPower', hotW: 'cycleEnergy', hotStroke: 'strokeAmplitude', f1: 'strokeFrequency' },
   },
 });

@@ -7,6 +7,8 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
 import { getCalculator } from '../../../src/calculators/registry.ts';
 import { parsePowerProfile } from '../../../src/core/thermal/index.ts';
+import { runStudy } from '../../../src/studies/run.ts';
+import { validateStudy } from '../../../src/studies/schema.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 const storey = getCalculator('storey-dampers')!;
@@ -70,5 +72,23 @@ describe('storey-dampers', () => {
     expect(() => run({ storeys: 'm [t], k [kN/m], h [m], n\n140, 120000, 4.5, 4' })).toThrow(/columns/);
     expect(() => run({ storeys: 'm [t], k [kN/m], h [m], n, theta [deg]\n140, 120000, 4.5, 0, 35' })).toThrow(/no storey has a damper/);
     expect(() => run({ frame: 'mode', modeRows: 'm [t], phi, h [m], n, theta [deg]\n140, 0.5, 4.5, 4, 35\n100, 0, 3.8, 2, 40' })).toThrow(/roof/);
+  });
+
+  it('in a study the hottest damper’s stroke and frequency drive harmonic-duty to the same energy per cycle and mean power (an independent code path for E = ∮F dx)', () => {
+    const parsed = validateStudy({
+      format: 'dampbook-study', version: 1, title: 'TW-402 Hall C office wing, ground-storey damper',
+      project: { number: 'TW-402', name: 'Hall C office wing', damper: 'fluid viscous, C = 200 kN·(s/m)^0.4', calculationNo: 'TW-402-C-011', preparedBy: 'Wen Hallberg', checkedBy: 'Tobias Quell', date: '2026-12-02' },
+      quantities: { damperLaw: 'power', powerLawForce: '200 kN', powerLawVelocity: '1 m/s', powerLawExponent: 0.4 },
+      limits: {},
+      steps: [
+        { id: 'storeys', page: 'storey-dampers', calculator: 'storey-dampers', inputs: { storeys: storey.inputs.find((i) => i.key === 'storeys')!.default as string, Sd: '30 mm' } },
+        { id: 'harmonic', page: 'harmonic-duty', calculator: 'harmonic-duty', inputs: {} },
+      ],
+    });
+    if (!parsed.ok) throw new Error(parsed.message);
+    const [a, b] = runStudy(parsed.study).steps;
+    expectClose({ label: 'E per cycle', computed: b!.outputs.E as number, expected: a!.outputs.hotW as number, tol: 1e-9, why: 'closed form λ(α) against the harmonic-duty path' });
+    expectClose({ label: 'mean power', computed: b!.outputs.P as number, expected: a!.outputs.hotP as number, tol: 1e-9 });
+    expect(b!.origins.X).toMatchObject({ kind: 'step' });
   });
 });
