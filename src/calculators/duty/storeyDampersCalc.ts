@@ -72,6 +72,7 @@ export const storeyDampers = defineCalculator({
     const warnings: string[] = [];
     if (a.eta !== undefined && a.eta <= 0.55 + 1e-12) warnings.push('η is at its floor of 0.55 (total damping above about 28 %): EN 1998-1 credits no more reduction; use a nonlinear analysis.');
     if (a.duty.xiD > 0.3) warnings.push('Supplemental damping above 30 %: the codes limit how much of it the linear procedures may credit; use a nonlinear analysis.');
+    if (a.phi.some((p) => p <= 0)) warnings.push('The mode shape is zero or changes sign below the roof: a fundamental mode does not; check that the pasted shape is the first mode.');
     if (a.modal.massFraction < 0.7) warnings.push(`The fundamental mode carries only ${(100 * a.modal.massFraction).toFixed(0)} % of the mass: higher modes matter and the single-mode energy method understates the damper duty.`);
     if (driftRatio > 0.02) warnings.push(`Storey drift ratio ${(100 * driftRatio).toFixed(1)} %: beyond about 2 % a steel frame may yield and its elastic mode no longer holds.`);
     if (hotDT > 50) warnings.push(`Adiabatic rise ${hotDT.toFixed(0)} K per event in the hottest damper: check the fluid, seals and the damper's rated temperature with its maker.`);

@@ -19,7 +19,10 @@ export function storeyCharts(a: StoreyAnalysis): ChartSpec[] {
     {
       id: 'mode-shape', title: 'Fundamental mode shape over the height',
       x: { label: 'Mode shape φ (roof = 1)', kind: 'dimensionless' }, y: { label: 'Height above ground', kind: 'length', min: 0 },
-      series: [{ label: "mode 1", x: [0, ...a.phi], y: heights, tone: 0 }],
+      series: [
+        { label: 'mode 1', x: [0, ...a.phi], y: heights, tone: 0 },
+        { label: 'floors', x: a.phi, y: heights.slice(1), style: 'points', tone: 0, legend: false },
+      ],
       summary: `Mode shape at the floors: ${modeList}; period ${q(a.T, 'time', 4)}, Γ₁ = ${a.modal.gamma.toPrecision(4)}.`,
     },
     {

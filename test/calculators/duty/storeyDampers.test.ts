@@ -92,3 +92,11 @@ describe('storey-dampers', () => {
     expect(b!.origins.X).toMatchObject({ kind: 'step' });
   });
 });
+
+describe('storey-dampers warnings', () => {
+  it('warns when a pasted mode shape changes sign (not a fundamental mode)', () => {
+    const r = evaluate(storey, { frame: 'mode', modeRows: 'm [t], phi, h [m], n, theta [deg]\n140, -0.2, 4.5, 4, 35\n140, 0.6, 3.8, 4, 40\n100, 1, 3.8, 2, 40' }, { fillDefaults: true });
+    expect(r.warnings.join(' ')).toMatch(/changes sign/);
+    expect(evaluate(storey, {}, { fillDefaults: true }).warnings).toEqual([]);
+  });
+});
