@@ -87,7 +87,7 @@ export const storeyDampers = defineCalculator({
       handoff: { profile: formatPowerProfile({ t: [0, duration], P: [hot.W / a.T] }) },
     };
   },
-  charts: (values) => storeyCharts(analyseStoreys(values)),
+  charts: (values) => storeyCharts(analyseStoreys(values), num(values, 'cycles')),
   verification: STOREY_CASES,
   sources: [
     { key: 'chopra2017', locator: '§10.2–10.4 and Example 10.4 (shear building modes; from memory)' },

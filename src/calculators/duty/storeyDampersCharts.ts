@@ -7,14 +7,15 @@ import { q } from '../quantityText.ts';
 import type { ChartSpec } from '../types.ts';
 import type { StoreyAnalysis } from './storeyAnalysis.ts';
 
-export function storeyCharts(a: StoreyAnalysis): ChartSpec[] {
+/** @param cycles cycles per event, for the heat per event of each storey's damper */
+export function storeyCharts(a: StoreyAnalysis, cycles: number): ChartSpec[] {
   const heights = [0];
   for (const r of a.rows) heights.push(heights[heights.length - 1]! + r.h);
   const storeyNo = a.rows.map((_, j) => j + 1);
   const withDampers = a.rows.map((r, j) => ({ r, s: a.duty.storeys[j]!, j })).filter((x) => x.r.n > 0);
   const modeList = a.phi.map((p, j) => `floor ${j + 1} ${p.toFixed(3)}`).join(', ');
   const forceList = withDampers.map(({ r, s, j }) => `storey ${j + 1}: ${r.n} × ${q(s.Fpeak, 'force', 3)} at a stroke of ${q(s.stroke, 'length', 3)} (drift ${q(s.drift, 'length', 3)})`).join('; ');
-  const energyList = withDampers.map(({ s, j }) => `storey ${j + 1}: ${q(s.W, 'energy', 3)} per cycle, ${q(s.W / a.T, 'power', 3)} mean`).join('; ');
+  const energyList = withDampers.map(({ s, j }) => `storey ${j + 1}: ${q(s.W, 'energy', 3)} per cycle, ${q(s.W / a.T, 'power', 3)} mean, ${q(s.W * cycles, 'energy', 3)} per event`).join('; ');
   return [
     {
       id: 'mode-shape', title: 'Fundamental mode shape over the height',
