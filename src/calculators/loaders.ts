@@ -18,6 +18,7 @@ export const calculatorLoaders: Readonly<Record<string, () => Promise<Calculator
   'harmonic-duty': () => import('./duty/harmonicDutyCalc.ts').then((m) => m.harmonicDutyCalc),
   'road-power': () => import('./duty/roadPower.ts').then((m) => m.roadPower),
   impact: () => import('./duty/impact.ts').then((m) => m.impact),
+  'storey-dampers': () => import('./duty/storeyDampersCalc.ts').then((m) => m.storeyDampers),
   'structural-dampers': () => import('./duty/structuralDampersCalc.ts').then((m) => m.structuralDampers),
   'recorded-motion': () => import('./duty/recordedMotionCalc.ts').then((m) => m.recordedMotionCalc),
   'body-cooling': () => import('./thermal/bodyCooling.ts').then((m) => m.bodyCoolingCalc),

@@ -7,6 +7,7 @@ export const KEY_FORMULAS: Readonly<Record<string, readonly string[]>> = {
   'road-power': ['\\bar P = c_{eq}\\,\\sigma_{\\dot z}^2', '\\bar P = \\pi^2 k_t\\,G_d(n_0)\\,n_0^2\\,V \\quad (w = 2)'],
   'harmonic-duty': ['E = \\oint F\\,\\mathrm{d}x', '\\bar P = E\\,f'],
   impact: ['E = \\tfrac12 m v^2 + F_p\\,s\\;(+\\,m g s)', '\\bar P = E\\,n/3600\\,\\text{s}'],
+  'storey-dampers': ['\\xi_d = \\frac{\\sum_j n_j W_j}{4\\pi W_k},\\quad W_k = \\tfrac12\\omega_1^2 A^2 \\sum_i m_i\\phi_i^2', 'u = \\eta(\\xi_0 + \\xi_d)\\,u_5,\\quad \\eta = \\sqrt{10/(5 + \\xi)} \\ge 0.55', '\\bar P = W_j/T_1'],
   'forced-response': ['\\bar P = \\tfrac12 c\\,\\omega^2 Z^2'],
   'steady-temperature': ['P = h_{conv} A (T_s - T_\\infty) + \\varepsilon\\sigma A (T_s^4 - T_{sur}^4)', 'UA = (h_{conv} + h_r) A'],
   'body-cooling': ['Q = h_{conv} A (T_s - T_\\infty) + \\varepsilon\\sigma A (T_s^4 - T_{sur}^4)', 'UA = (h_{conv} + h_r) A'],

@@ -28,6 +28,7 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('tyreRate', 'stiffness', 'Radial (vertical) stiffness of the tyre.'),
   q('strokeAmplitude', 'length', 'Amplitude (half of peak-to-peak) of a harmonic damper stroke.'),
   q('strokeFrequency', 'frequency', 'Frequency of a harmonic damper stroke.'),
+  q('cycleEnergy', 'energy', 'Energy one damper dissipates in one cycle at its design amplitude and frequency.'),
   q('movingMass', 'mass', 'Mass that moves onto an end stop, payload included.'),
   q('impactSpeed', 'velocity', 'Speed at which the moving mass meets the end stop.'),
   q('stopStroke', 'length', 'Working stroke of the end-stop damper.'),
