@@ -142,6 +142,7 @@ export const PREFERRED: Partial<Record<QuantityKind, { SI: string; US: string }>
   area: { SI: 'm2', US: 'in2' },
   force: { SI: 'N', US: 'lbf' },
   perTemperature: { SI: '%/K', US: '%/F' },
+  pressure: { SI: 'MPa', US: 'psi' },
   volume: { SI: 'cm3', US: 'in3' },
   molarEnergy: { SI: 'kJ/mol', US: 'kcal/mol' },
 };

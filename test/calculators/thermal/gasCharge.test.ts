@@ -10,6 +10,9 @@ import { defaults, evaluate } from '../../../src/calculators/evaluate.ts';
 import { feedQuery } from '../../../src/calculators/feeds.ts';
 import { getCalculator } from '../../../src/calculators/registry.ts';
 import { ComputationError } from '../../../src/core/errors.ts';
+import { readFileSync } from 'node:fs';
+import { parseStudy } from '../../../src/studies/schema.ts';
+import { runStudy } from '../../../src/studies/run.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 const calc = getCalculator('gas-charge')!;
@@ -58,5 +61,17 @@ describe('gas-charge', () => {
 
   it('binds the steady temperature of a study to T and the oil expansion to β', () => {
     expect(calc.study?.inputs).toMatchObject({ T: 'steadyTemperature', beta: 'oilExpansion' });
+  });
+
+  it('in the TW-210 monotube study, takes the steady step\'s body temperature for the gas and the seals', () => {
+    const parsed = parseStudy(readFileSync('content/studies/tw-210-monotube-gas-charge.json', 'utf8'));
+    if (!parsed.ok) throw new Error(parsed.message);
+    const run = runStudy(parsed.study);
+    const step = (id: string) => run.steps.find((s) => s.id === id)!;
+    expect(step('gas').from).toMatchObject({ T: 'steady.Ts' });
+    expect(step('seals').from).toMatchObject({ T: 'steady.Ts' });
+    expect(step('gas').inputs.T).toBe(step('steady').outputs.Ts);
+    // same arithmetic as the page's closed form, evaluated at the study's temperature
+    expectClose({ label: 'p', computed: step('gas').outputs.p as number, expected: evaluate(calc, { ...TW210, T: step('steady').outputs.Ts }).outputs.p as number, tol: 1e-12, why: 'the study adds no arithmetic' });
   });
 });
