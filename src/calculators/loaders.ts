@@ -28,4 +28,6 @@ export const calculatorLoaders: Readonly<Record<string, () => Promise<Calculator
   'oil-viscosity': () => import('./thermal/oilViscosity.ts').then((m) => m.oilViscosityCalc),
   'damping-fade': () => import('./thermal/dampingFade.ts').then((m) => m.dampingFadeCalc),
   'fade-fit': () => import('./thermal/fadeFit.ts').then((m) => m.fadeFitCalc),
+  'gas-charge': () => import('./thermal/gasCharge.ts').then((m) => m.gasChargeCalc),
+  'thermal-life': () => import('./thermal/thermalLife.ts').then((m) => m.thermalLifeCalc),
 };

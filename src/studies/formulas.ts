@@ -14,5 +14,7 @@ export const KEY_FORMULAS: Readonly<Record<string, readonly string[]>> = {
   'warm-up': ['\\tau = C/UA,\\quad T(t) = T_\\infty + \\frac{\\bar P}{UA}\\left(1 - e^{-t/\\tau}\\right)', 't_{lim} = \\tau \\ln\\frac{\\Delta T_{ss}}{\\Delta T_{ss} - \\Delta T_{lim}}'],
   'damping-fade': ['c(T) = c_{ref}\\left[s\\,\\frac{\\nu(T)}{\\nu(T_{ref})} + (1 - s)\\right]', 'P\\big(c(T_{eq})\\big) = Q(T_{eq})'],
   'power-rating': ['P_{max} = h_{conv} A (T_{max} - T_\\infty) + \\varepsilon\\sigma A (T_{max}^4 - T_{sur}^4)'],
+  'gas-charge': ['p = p_0\\,\\frac{T}{T_0}\\,\\frac{V_{g0}}{V_{g0} - V_{oil}\\beta (T - T_0)}\\quad (x = 0)', 'F_{ext} = (p - p_{atm}) A_{rod},\\quad F_{c,max} = p A_p - p_{atm} A_{rod}'],
+  'thermal-life': ['L(T) = L_{ref}\\exp\\!\\left[\\frac{E_a}{R}\\left(\\frac1T - \\frac1{T_{ref}}\\right)\\right]', 'D = \\int \\frac{\\mathrm{d}t}{L(T(t))},\\quad L_{hist} = t_{hist}/D'],
   'oil-viscosity': ['\\log_{10}\\log_{10}(\\nu + 0.7) = A - B\\log_{10} T'],
 };

@@ -67,6 +67,22 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('heatCapacity', 'heatCapacity', 'Heat capacity Σ m·c of the damper (body, oil and parts).'),
   q('conductance', 'thermalConductance', 'Heat-loss conductance UA = (h_conv + h_r)·A of the body at its steady operating temperature.'),
   q('steadyTemperature', 'temperature', 'Body temperature at which the mean power leaves the body (steady state).'),
+  // gas charge
+  q('gasChargePressure', 'pressure', 'Absolute gas pressure of a gas-charged damper set at charging, rod fully out.'),
+  q('gasChargeTemperature', 'temperature', 'Temperature of gas and oil when the gas charge was set.'),
+  q('gasVolume', 'volume', 'Gas volume of a gas-charged damper at charging, rod fully out.'),
+  q('oilVolume', 'volume', 'Volume of oil in the damper (what expands into the gas space when hot).'),
+  q('rodDiameter', 'length', 'Diameter of the damper piston rod.'),
+  q('pistonDiameter', 'length', 'Working bore (piston diameter) of the damper pressure tube.'),
+  q('gasPressure', 'pressure', 'Absolute gas pressure of the damper at its working temperature and rod position.'),
+  q('gasExtensionForce', 'force', 'Force with which the gas charge pushes the rod out, (p − p_atm)·A_rod.'),
+  // seal and oil ageing
+  q('sealReferenceLife', 'time', 'Life of the seal (or oil) in its ageing test at the reference ageing temperature.'),
+  q('sealReferenceTemperature', 'temperature', 'Temperature of the ageing test that gave the reference seal life.'),
+  q('sealActivationEnergy', 'molarEnergy', 'Activation energy of the Arrhenius ageing law of the seal (or oil).'),
+  q('timeInService', 'time', 'Time the damper has already served under the duty of the study.'),
+  q('sealLife', 'time', 'Life of the seal (or oil) under the temperature history of the duty, repeated.'),
+  q('equivalentAgeingTemperature', 'temperature', 'Constant temperature that ages the seal as much as the duty\'s temperature history in the same time.'),
   // limits
   q('allowedTemperature', 'temperature', 'Highest body (oil, seal) temperature the maker allows.', 'limit'),
   q('dutyLength', 'time', 'Length of the duty the damper must carry without passing the allowed temperature.', 'limit'),

@@ -45,6 +45,7 @@ const TO_SI: Readonly<Record<string, number>> = {
   Pa: 1, kPa: 1e3, MPa: 1e6, bar: 1e5, psi: 6894.757,
   'm³': 1, 'cm³': 1e-6, '(m/s)²/Hz': 1, '(m/s²)²/Hz': 1, 'm²/Hz': 1,
   '1/K': 1, '%/K': 0.01, '1/°F': 1.8, '%/°F': 0.018,
+  L: 1e-3, 'in³': 1.638706e-5, 'J/mol': 1, 'kJ/mol': 1e3, 'kcal/mol': 4184,
 };
 
 /**

@@ -46,7 +46,7 @@ export const dampingFadeCalc = defineCalculator({
   ],
   outputs: [
     { key: 'status', label: 'Result', kind: 'text' },
-    { key: 'Teq', label: 'Equilibrium body temperature', kind: 'temperature', optional: true },
+    { key: 'Teq', label: 'Equilibrium body temperature', kind: 'temperature', optional: true, feeds: [{ page: 'gas-charge', input: 'T', label: 'Gas pressure at this equilibrium' }] },
     { key: 'cEq', label: 'Damping coefficient at equilibrium', kind: 'damping', optional: true },
     { key: 'Peq', label: 'Damper power at equilibrium', kind: 'power', optional: true },
     { key: 'fade', label: 'Coefficient lost to fade', kind: 'dimensionless', optional: true, help: '1 − c_eq/c_ref (or at the limit when no equilibrium).' },

@@ -6,6 +6,7 @@ import {
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { bodyFrom, bodyInputs } from './bodyInputs.ts';
 import { q } from '../quantityText.ts';
+import { HISTORY_HANDOFF_MAX, warmUpHistory } from './warmUpHistory.ts';
 
 /** The default profile: the Tarnwick test-bay cycle (10 min at 120 W, 10 min off). */
 const DEFAULT_PROFILE = '# time [s], power [W] from then on; the last line is the end time alone\n0, 120\n600, 0\n1200';
@@ -79,7 +80,11 @@ export const warmUpCalc = defineCalculator({
     { key: 'tLimit', label: 'Time to the limit', kind: 'time', optional: true, help: 'Absent when the limit is never reached.' },
     { key: 'reached', label: 'Limit reached', kind: 'text', help: '"yes" or "no".' },
     { key: 'T', label: 'Temperature at t', kind: 'temperature' },
-    { key: 'Tpeak', label: 'Highest temperature (cyclic peak)', kind: 'temperature', help: 'Equals T_ss at constant power; a repeated profile: the peak of its periodic steady state; one run: the highest temperature reached.' },
+    { key: 'Tpeak', label: 'Highest temperature (cyclic peak)', kind: 'temperature', help: 'Equals T_ss at constant power; a repeated profile: the peak of its periodic steady state; one run: the highest temperature reached.',
+      feeds: [
+        { page: 'thermal-life', input: 'T', label: 'Seal and oil life over this run', with: { history: 'history' }, set: { mode: 'history' } },
+        { page: 'gas-charge', input: 'T', label: 'Gas pressure at this peak temperature' },
+      ] },
     { key: 'CthTotal', label: 'Total heat capacity', kind: 'heatCapacity' },
     { key: 'tCool', label: 'Cool-down time to the target', kind: 'time', optional: true, help: 'From the limit (or the peak if lower) with the power off.' },
     { key: 'Bi', label: 'Biot number', kind: 'dimensionless', digits: 2 },
@@ -87,6 +92,7 @@ export const warmUpCalc = defineCalculator({
     { key: 'tLimitBody', label: 'Time to the limit, body model', kind: 'time', optional: true },
     { key: 'Pmean', label: 'Mean power P̄', kind: 'power', help: 'd·P, or the energy of the profile over its length.' },
   ],
+  handoffs: [{ key: 'history', help: 'The body temperature from a cold start over the time of interest, then the cool-down, as rows "t, T" (s, K) for the thermal-life page.', maxLength: HISTORY_HANDOFF_MAX }],
   compute(values) {
     const m = setup(values);
     const { C, Tamb, duty } = m;
@@ -128,7 +134,8 @@ export const warmUpCalc = defineCalculator({
         }
       }
     }
-    return { outputs, warnings };
+    const history = warmUpHistory({ at: duty.at, profile: m.profile, end: m.end, tau: duty.tau, Tamb }, num(values, 't'));
+    return { outputs, warnings, handoff: { history } };
   },
   charts(values, result): ChartSpec[] {
     const m = setup(values);

@@ -35,6 +35,8 @@ export const QUANTITY_KINDS = [
   'displacementPsd',
   'eventRate',
   'perTemperature',
+  'volume',
+  'molarEnergy',
 ] as const;
 
 export type QuantityKind = (typeof QUANTITY_KINDS)[number];
@@ -75,4 +77,8 @@ export const SI_SYMBOL: Record<QuantityKind, string> = {
   eventRate: '1/h',
   /** A fractional change per kelvin (thermal expansion coefficient, fade rate): 1/°F is 1.8 per K. */
   perTemperature: '1/K',
+  /** A volume of oil or gas (not road roughness, whose unit is also m³). */
+  volume: 'm³',
+  /** Energy per amount of substance: the activation energy of an ageing reaction. */
+  molarEnergy: 'J/mol',
 };

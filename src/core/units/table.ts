@@ -117,6 +117,13 @@ export const UNITS: readonly UnitDef[] = [
   // a fractional change per degree: per °F is 1.8 per kelvin (NIST SP 811 B.9 applied to 1/ΔT)
   si('1/K', '1/K', 'perTemperature'), si('%/K', '%/K', 'perTemperature', 0.01), us('1/F', '1/°F', 'perTemperature', 1 / DEGF), us('%/F', '%/°F', 'perTemperature', 0.01 / DEGF),
 
+  // litre: 1 L = 1 dm³ (SI Brochure Table 8, accepted for use with the SI); in³ from the exact inch
+  si('m3', 'm³', 'volume'), si('cm3', 'cm³', 'volume', 1e-6), si('L', 'L', 'volume', 1e-3),
+  us('in3', 'in³', 'volume', IN * IN * IN),
+  // kcal_th = 4184 J exactly (NIST SP 811 B.8, calorie_th); the kcal/mol of the ageing literature
+  si('J/mol', 'J/mol', 'molarEnergy'), si('kJ/mol', 'kJ/mol', 'molarEnergy', 1e3),
+  { id: 'kcal/mol', symbol: 'kcal/mol', kind: 'molarEnergy', factor: 4184, exact: true, system: 'US', source: 'NIST SP 811 B.8' },
+
   any('1/h', 'per hour', 'eventRate'), any('1/min', 'per minute', 'eventRate', 60), any('1/s', 'per second', 'eventRate', 3600),
 ];
 
@@ -135,4 +142,7 @@ export const PREFERRED: Partial<Record<QuantityKind, { SI: string; US: string }>
   area: { SI: 'm2', US: 'in2' },
   force: { SI: 'N', US: 'lbf' },
   perTemperature: { SI: '%/K', US: '%/F' },
+  pressure: { SI: 'MPa', US: 'psi' },
+  volume: { SI: 'cm3', US: 'in3' },
+  molarEnergy: { SI: 'kJ/mol', US: 'kcal/mol' },
 };

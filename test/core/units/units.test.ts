@@ -21,6 +21,8 @@ const NIST_B8: readonly (readonly [kind: Parameters<typeof findUnit>[0], id: str
   ['pressure', 'psi', 6.894757e3],
   ['specificHeat', 'Btu/lbF', 4.1868e3],
   ['thermalConductivity', 'Btu/hftF', 1.730735],
+  ['volume', 'in3', 1.638706e-5],
+  ['molarEnergy', 'kcal/mol', 4.184e3],
 ];
 
 describe('unit table', () => {
