@@ -1,13 +1,14 @@
-import { ComputationError, InputRangeError } from '../../core/errors.ts';
+import { ComputationError } from '../../core/errors.ts';
 import {
   BIOT_LUMPED_MAX, biotNumber, bodyCooling, bodyWarmUp, coolDownTime, material, onOffDuty, parsePowerProfile, profileWarmUp,
-  steadyTemperature, timeToLimit, twoNodeWarmUp, type PowerProfile, type ProfileEnd,
+  steadyTemperature, timeToLimit, type PowerProfile, type ProfileEnd,
 } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { bodyFrom, bodyInputs } from './bodyInputs.ts';
 import { q } from '../quantityText.ts';
 import { HEAT_PATH_STUDY, heatPathInputs, withHeatPaths } from './heatPathInputs.ts';
 import { OIL_NODE_STUDY, oilBodyNote, oilNodeInputs, twoNodes } from './oilNodeInputs.ts';
+import { warmUpTwoNode } from './warmUpTwoNode.ts';
 
 /** The default profile: the Tarnwick test-bay cycle (10 min at 120 W, 10 min off). */
 const DEFAULT_PROFILE = '# time [s], power [W] from then on; the last line is the end time alone\n0, 120\n600, 0\n1200';
@@ -53,19 +54,6 @@ function modelBody(values: Values) {
 function bodyRun(values: Values, m: Setup, tEnd: number, stopAt?: number) {
   const body = modelBody(values);
   return bodyWarmUp((T) => bodyCooling(body, T).Q, m.C, body.Tamb, m.profile, m.end, tEnd, stopAt);
-}
-
-/**
- * Two-node run (oil and body) to tEnd: the body sheds UA(T_b − T∞), or Q(T_b) of the body model
- * when that is chosen. The body node holds the total heat capacity less the oil's.
- */
-function twoNodeRun(values: Values, m: Setup, tEnd: number, stopAt?: number) {
-  const Coil = num(values, 'Coil');
-  if (!(Coil < m.C)) throw new InputRangeError('Coil', Coil, { min: 0, max: m.C, minExclusive: true, maxExclusive: true }, 'J/K');
-  const UA = num(values, 'UA');
-  const body = choice(values, 'loss') === 'body' ? modelBody(values) : undefined;
-  const Q = body ? (T: number) => bodyCooling(body, T).Q : (T: number) => UA * (T - m.Tamb);
-  return twoNodeWarmUp(Q, { Coil, Cbody: m.C - Coil, Gob: num(values, 'Gob'), T0: m.Tamb }, m.profile, m.end, tEnd, { stopAt });
 }
 
 /** Length of the two-node run: the time of interest, two periods, and five time constants to settle. */
@@ -168,15 +156,10 @@ export const warmUpCalc = defineCalculator({
       const Gob = num(values, 'Gob');
       const tEnd = twoNodeEnd(values, m, duty.tau);
       try {
-        const r = twoNodeRun(values, m, tEnd);
-        const tq = num(values, 't');
-        // the state at t: a run that ends there (its last state is exact to the tolerance, no interpolation)
-        const atT = tq > 0 ? twoNodeRun(values, m, tq) : { oil: [Tamb], body: [Tamb] };
-        const cross = r.oil.findIndex((x) => x >= Tlimit);
+        const body = choice(values, 'loss') === 'body' ? modelBody(values) : undefined;
+        const r = warmUpTwoNode(values, m, body, tEnd, num(values, 't'), Tlimit, 0);
         Object.assign(outputs, {
-          ToilT: atT.oil.at(-1), TbodyT: atT.body.at(-1), ToilPeak: r.oilPeak, ToilSs: TbodyEq + m.Pmean / Gob,
-          tLimitOil: cross < 0 ? undefined : twoNodeRun(values, m, r.t[cross]!, Tlimit).tCross, // the event, to round-off
-          closure: r.energyIn > 0 ? (r.energyIn - r.energyStored - r.energyLost) / r.energyIn : 0,
+          ToilT: r.oilAtT, TbodyT: r.bodyAtT, ToilPeak: r.oilPeak, ToilSs: TbodyEq + m.Pmean / Gob, tLimitOil: r.tLimitOil, closure: r.closure,
         });
         const note = oilBodyNote(TbodyEq + m.Pmean / Gob, TbodyEq);
         if (note) warnings.push(note);
@@ -207,12 +190,13 @@ export const warmUpCalc = defineCalculator({
       if (r) series.push({ label: 'body model, h(T) (ODE)', x: r.t, y: r.y, style: 'dash', tone: 2 });
     }
     if (twoNodes(values)) {
-      let r: ReturnType<typeof twoNodeRun> | undefined;
-      try { r = twoNodeRun(values, m, Math.max(tEnd, twoNodeEnd(values, m, duty.tau))); } catch (e) { if (!(e instanceof ComputationError)) throw e; }
+      let r: ReturnType<typeof warmUpTwoNode> | undefined;
+      const body = choice(values, 'loss') === 'body' ? modelBody(values) : undefined;
+      try { r = warmUpTwoNode(values, m, body, twoNodeEnd(values, m, duty.tau), 0, Tlimit, tEnd); } catch (e) { if (!(e instanceof ComputationError)) throw e; }
       if (r) {
-        const keep = r.t.map((x, i) => (x <= tEnd ? i : -1)).filter((i) => i >= 0);
-        series.push({ label: 'oil, two nodes (ODE)', x: keep.map((i) => r.t[i]!), y: keep.map((i) => r.oil[i]!), tone: 4 });
-        series.push({ label: 'body, two nodes (ODE)', x: keep.map((i) => r.t[i]!), y: keep.map((i) => r.body[i]!), style: 'thin', tone: 4 });
+        const how = body ? 'ODE' : 'exact';
+        series.push({ label: `oil, two nodes (${how})`, x: r.t, y: r.oil, tone: 4 });
+        series.push({ label: `body, two nodes (${how})`, x: r.t, y: r.body, style: 'thin', tone: 4 });
       }
     }
     const reach = tl === undefined ? `never reaches ${q(Tlimit, 'temperature', 3)}; it settles at ${q(duty.Tpeak, 'temperature')}` : `reaches ${q(Tlimit, 'temperature', 3)} after ${(tl / 60).toFixed(1)} min`;

@@ -39,3 +39,4 @@ export { mountConductance, type MountStub } from './mountConductance.ts';
 export { solarGain } from './solarGain.ts';
 export { oilTemperature, OIL_BODY_NOTE_K } from './oilTemperature.ts';
 export { twoNodeWarmUp, type TwoNodeBody, type TwoNodeRun } from './twoNodeWarmUp.ts';
+export { twoNodeLinear } from './twoNodeLinear.ts';
