@@ -192,7 +192,8 @@ export const warmUpCalc = defineCalculator({
     if (twoNodes(values)) {
       let r: ReturnType<typeof warmUpTwoNode> | undefined;
       const body = choice(values, 'loss') === 'body' ? modelBody(values) : undefined;
-      try { r = warmUpTwoNode(values, m, body, twoNodeEnd(values, m, duty.tau), 0, Tlimit, tEnd); } catch (e) { if (!(e instanceof ComputationError)) throw e; }
+      // Tlimit = ∞: the chart needs no limit crossing
+      try { r = warmUpTwoNode(values, m, body, twoNodeEnd(values, m, duty.tau), 0, Infinity, tEnd); } catch (e) { if (!(e instanceof ComputationError)) throw e; }
       if (r) {
         const how = body ? 'ODE' : 'exact';
         series.push({ label: `oil, two nodes (${how})`, x: r.t, y: r.oil, tone: 4 });

@@ -33,7 +33,8 @@ export function warmUpTwoNode(values: Values, m: TwoNodeSetup, body: Body | unde
   if (!(Coil < m.C)) throw new InputRangeError('Coil', Coil, { min: 0, max: m.C, minExclusive: true, maxExclusive: true }, 'J/K');
   const nodes = { Coil, Cbody: m.C - Coil, Gob: num(values, 'Gob'), T0: m.Tamb };
   const end = Math.max(tEnd, tq, tChart);
-  const audit = (r: { energyIn: number; energyLost: number; energyStored: number }) => (r.energyIn > 0 ? (r.energyIn - r.energyStored - r.energyLost) / r.energyIn : 0);
+  // relative to what was put in, or to 1 J when almost nothing was (a ratio of round-off otherwise)
+  const audit = (r: { energyIn: number; energyLost: number; energyStored: number }) => (r.energyIn - r.energyStored - r.energyLost) / Math.max(r.energyIn, 1);
   if (!body) {
     const r = twoNodeLinear(nodes, num(values, 'UA'), m.profile, m.end, end);
     const at = r.at(tq);

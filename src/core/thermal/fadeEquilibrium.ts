@@ -1,4 +1,4 @@
-import { NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
+import { ComputationError, NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
 import { bracketRoots } from '../numeric/bracketRoots.ts';
 import { BODY_T_RANGE, bodyCooling, type Body } from './bodyCooling.ts';
 import { requireBalanced } from './checkedRoot.ts';
@@ -92,17 +92,24 @@ export function fadeEquilibrium(body: Body, model: FadeModel, duty: FadeDuty, Tl
   if (Cth !== undefined) {
     requireInRange('Cth', Cth, POSITIVE, 'J/K');
     if (!oil) tLimit = timeToLimit((T) => -f(T), Cth, lo, Tlimit);
-    else if (oil.Coil !== undefined) tLimit = twoNodeTimeToLimit(Q, model, duty, oil.Gob, requireInRange('Coil', oil.Coil, { min: 0, max: Cth, minExclusive: true, maxExclusive: true }, 'J/K'), Cth, lo, Tlimit);
+    else if (oil.Coil !== undefined) {
+      const Coil = requireInRange('Coil', oil.Coil, { min: 0, max: Cth, minExclusive: true, maxExclusive: true }, 'J/K');
+      // twenty time constants at the limit: if the oil has not reached it by then it never will
+      const tEnd = (20 * Cth) / Math.max(bodyCooling(body, Tlimit).UA, 1e-9);
+      try {
+        tLimit = twoNodeTimeToLimit(Q, model, duty, oil.Gob, Coil, Cth, lo, Tlimit, tEnd);
+      } catch (e) {
+        if (!(e instanceof ComputationError)) throw e;
+        warnings.push(`Time to the limit not computed: ${e.message}.`);
+      }
+    }
   }
   warnings.push('No equilibrium below the limit: the damper keeps heating until it passes the limit.');
   return { crossings, tLimit, warnings };
 }
 
-/** Longest two-node run searched for the oil to reach its limit, s (a year: beyond any duty). */
-const TWO_NODE_SEARCH_S = 3.2e7;
-
 /** The two-node warm-up from ambient with the power at c(T_oil), to the oil reaching the limit. */
-function twoNodeTimeToLimit(Q: (T: number) => number, model: FadeModel, duty: FadeDuty, Gob: number, Coil: number, Cth: number, T0: number, Tlimit: number): number | undefined {
+function twoNodeTimeToLimit(Q: (T: number) => number, model: FadeModel, duty: FadeDuty, Gob: number, Coil: number, Cth: number, T0: number, Tlimit: number, tEnd: number): number | undefined {
   const heating = (_P: number, Toil: number) => dutyPower(duty, fadeCoefficient(model, Math.min(Toil, Tlimit)));
-  return twoNodeWarmUp(Q, { Coil, Cbody: Cth - Coil, Gob, T0 }, { t: [0, TWO_NODE_SEARCH_S], P: [0] }, 'off', TWO_NODE_SEARCH_S, { stopAt: Tlimit, heating }).tCross;
+  return twoNodeWarmUp(Q, { Coil, Cbody: Cth - Coil, Gob, T0 }, { t: [0, tEnd], P: [0] }, 'off', tEnd, { stopAt: Tlimit, heating }).tCross;
 }

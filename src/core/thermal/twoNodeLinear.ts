@@ -1,4 +1,5 @@
-import { POSITIVE, requireInRange } from '../errors.ts';
+import { ComputationError, POSITIVE, requireInRange } from '../errors.ts';
+import { MAX_BODY_SEGMENTS } from './bodyWarmUp.ts';
 import { checkProfile, type PowerProfile, type ProfileEnd } from './powerProfile.ts';
 import type { TwoNodeBody } from './twoNodeWarmUp.ts';
 
@@ -30,7 +31,8 @@ export function twoNodeLinear(b: TwoNodeBody, UA: number, p: PowerProfile, end: 
   const a11 = -g / Co, a12 = g / Co, a21 = g / Cb, a22 = -(g + U) / Cb;
   const tr = a11 + a22, det = a11 * a22 - a12 * a21;
   const disc = Math.sqrt(Math.max(0, 0.25 * tr * tr - det));
-  const l1 = 0.5 * tr + disc, l2 = 0.5 * tr - disc; // l2 < l1 < 0
+  const l2 = 0.5 * tr - disc; // the fast eigenvalue, l2 < l1 < 0
+  const l1 = det / l2; // the slow one from the product λ₁λ₂ = det A, free of the cancellation in ½tr + disc
   /** e^{As}(x) for the 2-vector x, Sylvester: e^{As} = αA + βI. */
   const prop = (s: number, x0: number, x1: number): [number, number] => {
     const e1 = Math.expm1(l1 * s), e2 = Math.expm1(l2 * s);
@@ -45,9 +47,15 @@ export function twoNodeLinear(b: TwoNodeBody, UA: number, p: PowerProfile, end: 
     const c2 = ((a11 - l1) * d0 + a12 * d1) / (l2 - l1);
     return { c1, c2 };
   };
-  const n = p.P.length;
-  const tp = p.t[n]!;
+  // a repeated single power is one constant segment, however short its period
+  const prof = p.P.length === 1 && end === 'repeat' ? { t: [0, Math.max(p.t[1]!, tEnd)], P: p.P } : p;
+  const n = prof.P.length;
+  const tp = prof.t[n]!;
   const Tamb = b.T0;
+  const periods = end === 'repeat' ? Math.ceil(tEnd / tp) : 1;
+  if (periods * n > MAX_BODY_SEGMENTS) {
+    throw new ComputationError(`the two-node model would need ${(periods * n).toExponential(1)} power segments (at most ${MAX_BODY_SEGMENTS}): lengthen the duty period or shorten the time`);
+  }
   let th0 = 0, th1 = 0, tc = 0, Ein = 0, Elost = 0, oilPeak = 0, bodyPeak = 0;
   const segs: { t0: number; dt: number; eq: number; eqb: number; c1: number; c2: number }[] = [];
   const segment = (dt: number, P: number) => {
@@ -65,9 +73,8 @@ export function twoNodeLinear(b: TwoNodeBody, UA: number, p: PowerProfile, end: 
     th0 = eq0 + e0; th1 = eq1 + e1; tc += dt;
     bodyPeak = Math.max(bodyPeak, th1);
   };
-  const periods = end === 'repeat' ? Math.ceil(tEnd / tp) : 1;
   for (let k = 0; k < periods && tc < tEnd; k++) {
-    for (let i = 0; i < n && tc < tEnd; i++) segment(Math.min(tEnd, k * tp + p.t[i + 1]!) - tc, p.P[i]!);
+    for (let i = 0; i < n && tc < tEnd; i++) segment(Math.min(tEnd, k * tp + prof.t[i + 1]!) - tc, prof.P[i]!);
   }
   if (tc < tEnd) segment(tEnd - tc, 0);
   const oilAt = (c: (typeof segs)[number], s: number) => c.eq + c.c1 * Math.exp(l1 * s) + c.c2 * Math.exp(l2 * s);

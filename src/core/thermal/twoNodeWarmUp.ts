@@ -3,6 +3,9 @@ import { integrateAdaptive } from '../ode/integrate.ts';
 import { MAX_BODY_SEGMENTS } from './bodyWarmUp.ts';
 import { checkProfile, type PowerProfile, type ProfileEnd } from './powerProfile.ts';
 
+/** Most integration steps one two-node run may take (a stiff oil node would take millions: refused instead). */
+export const MAX_TWO_NODE_STEPS = 10000;
+
 /** Oil and body as two lumped nodes joined by a conductance; both start at T0. SI. */
 export interface TwoNodeBody {
   readonly Coil: number; // J/K, heat capacity of the oil (and what moves with it)
@@ -67,6 +70,10 @@ export function twoNodeWarmUp(
   if (segments > MAX_BODY_SEGMENTS) {
     throw new ComputationError(`the two-node model would need ${segments.toExponential(1)} power segments (at most ${MAX_BODY_SEGMENTS}): lengthen the duty period or shorten the time`);
   }
+  // an explicit method needs about |λ_fast|·t/3 steps when the oil node is fast (stiff): refuse before integrating
+  const tauFast = 1 / (G * (1 / Co + 1 / Cb));
+  const stiff = () => new ComputationError(`the two-node run needs more than ${MAX_TWO_NODE_STEPS} steps: the oil follows the body within ${tauFast.toPrecision(2)} s (G_ob large against C_oil), far faster than the run; use one node, or the constant-UA model`);
+  if (tEnd / (3 * tauFast) > MAX_TWO_NODE_STEPS) throw stiff();
   const heat = opts.heating ?? ((P: number) => P);
   const stopAt = opts.stopAt;
   const t: number[] = [0];
@@ -89,10 +96,10 @@ export function twoNodeWarmUp(
     },
   };
   const eScale = 1e-6 * Math.max(1, ...p.P) * tp;
+  let budget = MAX_TWO_NODE_STEPS;
   const opt = {
     rtol: 1e-9,
     atol: [1e-7, 1e-7, eScale, eScale],
-    maxSteps: 200000,
     event: stopAt === undefined ? undefined : (_t: number, s: Float64Array) => stopAt - s[0]!,
     onStep: (st: { t1: number; y1: Float64Array }) => {
       t.push(st.t1); oil.push(st.y1[0]!); body.push(st.y1[1]!);
@@ -107,7 +114,14 @@ export function twoNodeWarmUp(
   let tc = 0;
   const run = (t1: number, P: number): boolean => {
     power = P;
-    const r = integrateAdaptive(sys, tc, state, t1, opt);
+    let r;
+    try {
+      r = integrateAdaptive(sys, tc, state, t1, { ...opt, maxSteps: budget });
+    } catch (e) {
+      if (!(e instanceof ComputationError)) throw e;
+      throw stiff();
+    }
+    budget -= r.stats.accepted + r.stats.rejected;
     state.set(r.y);
     tc = r.t;
     return r.stoppedByEvent;
