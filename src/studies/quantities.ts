@@ -65,7 +65,7 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('airTemperature', 'temperature', 'Air temperature away from the body (also the start temperature).'),
   q('surroundingsAboveAir', 'temperatureDifference', 'How much warmer than the air the surroundings the body radiates to are.'),
   q('heatCapacity', 'heatCapacity', 'Heat capacity Σ m·c of the damper (body, oil and parts).'),
-  q('conductance', 'thermalConductance', 'Heat-loss conductance UA = (h_conv + h_r)·A of the body at its steady operating temperature.'),
+  q('conductance', 'thermalConductance', 'Heat-loss conductance UA = (h_conv + h_r)·A (+ the mount conductance, when given) of the body at its steady operating temperature.'),
   q('steadyTemperature', 'temperature', 'Body temperature at which the mean power leaves the body (steady state).'),
   // gas charge
   q('gasChargePressure', 'pressure', 'Absolute gas pressure of a gas-charged damper set at charging, rod fully out.'),
@@ -83,6 +83,12 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('timeInService', 'time', 'Time the damper has already served under the duty of the study.'),
   q('sealLife', 'time', 'Life of the seal (or oil) under the temperature history of the duty, repeated.'),
   q('equivalentAgeingTemperature', 'temperature', 'Constant temperature that ages the seal as much as the duty\'s temperature history in the same time.'),
+  q('solarAbsorptivity', 'dimensionless', 'Share of the sunlight falling on the body that it absorbs (α_s of its finish).'),
+  q('solarIrradiance', 'heatFlux', 'Sunlight on a plane square to the beam at the damper (about 1000 W/m² at a clear noon).'),
+  q('thermalModel', 'choice', 'One node (oil at the body temperature) or two nodes (oil and body joined by G_ob).'),
+  q('oilBodyConductance', 'thermalConductance', 'Conductance G_ob from the oil to the body (inner film × wetted wall, + piston and rod).'),
+  q('oilHeatCapacity', 'heatCapacity', 'Heat capacity m·c of the oil node (part of the damper heat capacity).'),
+  q('oilTemperature', 'temperature', 'Steady oil temperature at the duty: what fades the damping, loads the gas charge and ages the seals and oil.'),
   // limits
   q('allowedTemperature', 'temperature', 'Highest body (oil, seal) temperature the maker allows.', 'limit'),
   q('dutyLength', 'time', 'Length of the duty the damper must carry without passing the allowed temperature.', 'limit'),

@@ -36,6 +36,7 @@ const TO_SI: Readonly<Record<string, number>> = {
   Hz: 1, rpm: 1 / 60, 'cycles/min': 1 / 60, 'rad/s': 1, rad: 1, '°': Math.PI / 180,
   'm²': 1, 'cm²': 1e-4, 'mm²': 1e-6, 'in²': 6.4516e-4, 'ft²': 0.09290304,
   'W/(m²·K)': 1, 'Btu/(h·ft²·°F)': 5.678263,
+  'W/m²': 1, 'kW/m²': 1e3, 'Btu/(h·ft²)': 3.154591,
   'm²/s': 1, 'mm²/s': 1e-6, 'ft²/s': 0.09290304, 'in²/s': 6.4516e-4,
   'Pa·s': 1, 'mPa·s': 1e-3, 'lbf·s/ft²': 47.88026,
   'J/K': 1, 'kJ/K': 1e3, 'Btu/°F': 1899.101,

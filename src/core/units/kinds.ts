@@ -21,6 +21,7 @@ export const QUANTITY_KINDS = [
   'angle',
   'area',
   'heatTransferCoefficient',
+  'heatFlux',
   'kinematicViscosity',
   'dynamicViscosity',
   'heatCapacity',
@@ -61,6 +62,8 @@ export const SI_SYMBOL: Record<QuantityKind, string> = {
   angle: 'rad',
   area: 'm²',
   heatTransferCoefficient: 'W/(m²·K)',
+  /** Heat flux or irradiance (sunlight on a surface). */
+  heatFlux: 'W/m²',
   kinematicViscosity: 'm²/s',
   dynamicViscosity: 'Pa·s',
   heatCapacity: 'J/K',

@@ -90,6 +90,7 @@ export const UNITS: readonly UnitDef[] = [
 
   si('W/m2K', 'W/(m²·K)', 'heatTransferCoefficient'),
   us('Btu/hft2F', 'Btu/(h·ft²·°F)', 'heatTransferCoefficient', BTU / HOUR / (FT * FT) / DEGF),
+  si('W/m2', 'W/m²', 'heatFlux'), si('kW/m2', 'kW/m²', 'heatFlux', 1e3), us('Btu/hft2', 'Btu/(h·ft²)', 'heatFlux', BTU / HOUR / (FT * FT)),
 
   si('m2/s', 'm²/s', 'kinematicViscosity'), si('cSt', 'mm²/s', 'kinematicViscosity', 1e-6),
   us('ft2/s', 'ft²/s', 'kinematicViscosity', FT * FT), us('in2/s', 'in²/s', 'kinematicViscosity', IN * IN),
