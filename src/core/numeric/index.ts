@@ -5,3 +5,4 @@ export { brentRoot, type BrentOptions } from './brent.ts';
 export { bracketRoots, type Crossing } from './bracketRoots.ts';
 export { PLAIN_NUMBER, isPlainNumber } from './plainNumber.ts';
 export { goldenSection, type GoldenMinimum } from './goldenSection.ts';
+export { maxOf, minOf, maxAbsOf } from './extent.ts';
