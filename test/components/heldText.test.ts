@@ -22,7 +22,7 @@ describe('held long text', () => {
   it('summarises name, rows, characters and checksum, and is for texts over the threshold only', () => {
     const h = holdText('a', 'dyno.csv');
     expect(h.sum).toBe('e40c292c');
-    expect(describeHeld({ ...h, rows: 420000, text: 'x'.repeat(3873912) })).toBe('dyno.csv: 420 000 rows, 3 873 912 characters, checksum e40c292c. Used as loaded; too long to show here for editing.');
+    expect(describeHeld({ ...h, rows: 420000, text: 'x'.repeat(3873912) })).toBe('dyno.csv: 420 000 rows, 3 873 912 characters, checksum e40c292c. Used as loaded; too long to edit here (edit the file and load it again).');
     expect(LARGE_TEXT).toBeLessThan(2_000_000); // ring-down's largest record would otherwise sit in the textarea
   });
 });

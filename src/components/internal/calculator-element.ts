@@ -144,8 +144,8 @@ export class CalculatorElement extends HTMLElement {
     if (t instanceof HTMLInputElement && t.type === 'file') return;
     if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) return;
     if (t instanceof HTMLInputElement && t.name) this.showUnitNote(t.name);
-    // a long paste leaves the live textarea (unless the reader asked to edit it there)
-    if (t instanceof HTMLTextAreaElement && t.dataset.edit === undefined && t.value.length > LARGE_TEXT) this.setText(t.name, t.value, 'pasted text');
+    // a long paste leaves the live textarea
+    if (t instanceof HTMLTextAreaElement && t.value.length > LARGE_TEXT) this.setText(t.name, t.value, 'pasted text');
     this.schedule();
   }
 
@@ -156,15 +156,15 @@ export class CalculatorElement extends HTMLElement {
 
   /**
    * Puts text into a text field. A long text is held by the element and the field shows its
-   * summary (name, rows, characters, checksum) with a button to edit it in the textarea; a short
-   * one goes into the textarea. Either way the same text is read and checked on recompute.
+   * summary (name, rows, characters, checksum) with a button to clear it and paste or type another;
+   * a short one goes into the textarea. Either way the same text is read and checked on recompute.
+   * A held text is never put back into the textarea: Chromium took 20 s to lay out 3 MB there.
    */
   private setText(key: string, text: string, name: string): void {
     const area = this.control(key);
     const f = this.field(key);
     if (!(area instanceof HTMLTextAreaElement) || !f) return;
     f.querySelector('.text-summary')?.remove();
-    delete area.dataset.edit;
     if (text.length <= LARGE_TEXT) { this.held.delete(key); area.hidden = false; area.value = text; return; }
     const h = holdText(text, clip(name, 80));
     this.held.set(key, h);
@@ -174,19 +174,16 @@ export class CalculatorElement extends HTMLElement {
     p.className = 'text-summary';
     p.setAttribute('role', 'status');
     p.append(`${describeHeld(h)} `);
-    const edit = document.createElement('button');
-    edit.type = 'button';
-    edit.className = 'linkish';
-    edit.textContent = 'Show the text for editing (slow for long records)';
-    edit.addEventListener('click', () => {
-      this.held.delete(key);
-      p.remove();
-      area.dataset.edit = '';
-      area.hidden = false;
-      area.value = h.text;
+    const replace = document.createElement('button');
+    replace.type = 'button';
+    replace.className = 'linkish';
+    replace.textContent = 'Clear it to paste or type another';
+    replace.addEventListener('click', () => {
+      this.setText(key, '', '');
+      area.focus();
       this.schedule();
     });
-    p.append(edit);
+    p.append(replace);
     area.after(p);
   }
 

@@ -2,8 +2,9 @@
  * Long text (an uploaded or pasted record of up to a few MB) is kept out of the live textarea:
  * Chromium lays out, spell-checks and copies a multi-megabyte textarea value on every read, and a
  * 4.99 MB upload blocked the page for seconds. The element holds such a text itself and the field
- * shows a summary instead — file name, rows, characters and checksum — with a button to put the
- * text back into the textarea for editing. Pure helpers here; the element does the DOM.
+ * shows a summary instead — file name, rows, characters and checksum — with a button to clear it
+ * and paste or type another (edit a long record in an editor, then load it again). Pure helpers
+ * here; the element does the DOM.
  */
 import { textSum } from './fieldState.ts';
 
@@ -38,5 +39,5 @@ export function holdText(text: string, name: string): HeldText {
 /** "dyno.csv: 420 000 rows, 3 873 912 characters, checksum 1a2b3c4d. Used as loaded; too long to edit here." */
 export function describeHeld(h: HeldText): string {
   const n = (x: number) => x.toLocaleString('en-GB').replace(/,/g, ' ');
-  return `${h.name}: ${n(h.rows)} rows, ${n(h.text.length)} characters, checksum ${h.sum}. Used as loaded; too long to show here for editing.`;
+  return `${h.name}: ${n(h.rows)} rows, ${n(h.text.length)} characters, checksum ${h.sum}. Used as loaded; too long to edit here (edit the file and load it again).`;
 }
