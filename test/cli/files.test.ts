@@ -60,6 +60,14 @@ describe('files the CLI reads', () => {
     expectOneLine(bin('calc', '--record', path), msg);
   });
 
+  it.each([
+    ['/dev/zero', /study.*not a regular file/],
+    [dir, /study.*directory/],
+    [fifo, /study.*FIFO/],
+  ])('study run refuses %s quickly with one line', (path, msg) => {
+    expectOneLine(bin('study', 'run', path), msg);
+  });
+
   it('calc --record reads a record file with a UTF-8 byte-order mark as the browser does', async () => {
     const { evaluate } = await import('../../src/calculators/evaluate.ts');
     const { makeRecord } = await import('../../src/records/replay.ts');
