@@ -5,6 +5,7 @@ import { defineCalculator, num, type InputDef } from '../types.ts';
 import { analyseStoreys } from './storeyAnalysis.ts';
 import { storeyCharts } from './storeyDampersCharts.ts';
 import { STOREY_CASES } from './storeyDampersCases.ts';
+import { maxOf } from '../../core/numeric/index.ts';
 
 /** TW-402 Hall C office wing (invented demo data): three storeys, bottom first. */
 const FRAME_ROWS = 'm [t], k [kN/m], h [m], n, theta [deg]\n140, 120000, 4.5, 4, 35\n140, 100000, 3.8, 4, 40\n100, 70000, 3.8, 2, 40';
@@ -68,7 +69,7 @@ export const storeyDampers = defineCalculator({
     const duration = num(values, 'cycles') * a.T;
     const hotE = hot.W * num(values, 'cycles');
     const hotDT = adiabaticRise(hotE, num(values, 'Cth'));
-    const driftRatio = Math.max(...a.duty.storeys.map((s, j) => s.drift / a.rows[j]!.h));
+    const driftRatio = maxOf(a.duty.storeys.map((s, j) => s.drift / a.rows[j]!.h));
     const warnings: string[] = [];
     if (a.eta !== undefined && a.eta <= 0.55 + 1e-12) warnings.push('η is at its floor of 0.55 (total damping above about 28 %): EN 1998-1 credits no more reduction; use a nonlinear analysis.');
     if (a.duty.xiD > 0.3) warnings.push('Supplemental damping above 30 %: the codes limit how much of it the linear procedures may credit; use a nonlinear analysis.');

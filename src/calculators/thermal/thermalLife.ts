@@ -2,6 +2,7 @@ import { ageingLife, halvingInterval, historyAgeing, readTemperatureHistory, tem
 import { choice, defineCalculator, num, optNum, text, type ChartSpec, type Values } from '../types.ts';
 import { q } from '../quantityText.ts';
 import { THERMAL_LIFE_CASES } from './thermalLifeCases.ts';
+import { maxOf, minOf } from '../../core/numeric/index.ts';
 
 const HOUR = 3600;
 const DAY = 24 * HOUR;
@@ -87,8 +88,8 @@ export const thermalLifeCalc = defineCalculator({
     const law = lawFrom(values);
     const h = historyFrom(values);
     const Teq = result.outputs.Teq as number;
-    const lo = Math.min(...h.T, law.Tref) - 10;
-    const hi = Math.max(...h.T, law.Tref) + 10;
+    const lo = Math.min(minOf(h.T), law.Tref) - 10;
+    const hi = Math.max(maxOf(h.T), law.Tref) + 10;
     const Ts = Array.from({ length: 61 }, (_, i) => lo + ((hi - lo) * i) / 60);
     return [
       {

@@ -5,6 +5,7 @@
 import { ComputationError } from '../errors.ts';
 import { lnAgeingRate, temperatureForLife, validateAgeingLaw, type AgeingLaw } from './ageingLaw.ts';
 import type { TemperatureHistory } from './temperatureHistory.ts';
+import { maxOf, minOf } from '../numeric/index.ts';
 
 export interface HistoryAgeing {
   /** Σ ∫ dt / L(T(t)) over the history: the share of the life it uses. */
@@ -44,8 +45,8 @@ const MAX_PANELS = 4000;
 export function historyAgeing(law: AgeingLaw, h: TemperatureHistory): HistoryAgeing {
   validateAgeingLaw(law);
   const n = h.t.length;
-  const Tmin = Math.min(...h.T);
-  const Tpeak = Math.max(...h.T);
+  const Tmin = minOf(h.T);
+  const Tpeak = maxOf(h.T);
   const hotFrom = Tpeak - 0.1 * (Tpeak - Tmin);
   let damage = 0;
   let hot = 0;

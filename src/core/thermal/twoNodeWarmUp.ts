@@ -2,6 +2,7 @@ import { ComputationError, POSITIVE, requireInRange } from '../errors.ts';
 import { integrateAdaptive } from '../ode/integrate.ts';
 import { MAX_BODY_SEGMENTS } from './bodyWarmUp.ts';
 import { checkProfile, type PowerProfile, type ProfileEnd } from './powerProfile.ts';
+import { maxOf } from '../numeric/index.ts';
 
 /** Most integration steps one two-node run may take (a stiff oil node would take millions: refused instead). */
 export const MAX_TWO_NODE_STEPS = 10000;
@@ -95,7 +96,7 @@ export function twoNodeWarmUp(
       d[3] = loss;
     },
   };
-  const eScale = 1e-6 * Math.max(1, ...p.P) * tp;
+  const eScale = 1e-6 * Math.max(1, maxOf(p.P)) * tp;
   let budget = MAX_TWO_NODE_STEPS;
   const opt = {
     rtol: 1e-9,
