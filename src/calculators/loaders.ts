@@ -18,6 +18,7 @@ export const calculatorLoaders: Readonly<Record<string, () => Promise<Calculator
   'harmonic-duty': () => import('./duty/harmonicDutyCalc.ts').then((m) => m.harmonicDutyCalc),
   'road-power': () => import('./duty/roadPower.ts').then((m) => m.roadPower),
   impact: () => import('./duty/impact.ts').then((m) => m.impact),
+  'storey-dampers': () => import('./duty/storeyDampersCalc.ts').then((m) => m.storeyDampers),
   'structural-dampers': () => import('./duty/structuralDampersCalc.ts').then((m) => m.structuralDampers),
   'recorded-motion': () => import('./duty/recordedMotionCalc.ts').then((m) => m.recordedMotionCalc),
   'body-cooling': () => import('./thermal/bodyCooling.ts').then((m) => m.bodyCoolingCalc),
@@ -27,4 +28,6 @@ export const calculatorLoaders: Readonly<Record<string, () => Promise<Calculator
   'oil-viscosity': () => import('./thermal/oilViscosity.ts').then((m) => m.oilViscosityCalc),
   'damping-fade': () => import('./thermal/dampingFade.ts').then((m) => m.dampingFadeCalc),
   'fade-fit': () => import('./thermal/fadeFit.ts').then((m) => m.fadeFitCalc),
+  'gas-charge': () => import('./thermal/gasCharge.ts').then((m) => m.gasChargeCalc),
+  'thermal-life': () => import('./thermal/thermalLife.ts').then((m) => m.thermalLifeCalc),
 };

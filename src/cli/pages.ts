@@ -5,7 +5,7 @@
  */
 import { lstatSync, readdirSync, realpathSync, statSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
-import { parse } from 'yaml';
+import { parseDocument } from 'yaml';
 import { pageSchema, type PageMeta } from '../content/schema.ts';
 import { FileReadError, readBoundedFile } from './readFile.ts';
 
@@ -72,7 +72,12 @@ export function parsePage(text: string): { meta?: PageMeta; errors: string[] } {
   if (!m) return { errors: ['no frontmatter: the file must start with a --- block'] };
   let data: unknown;
   try {
-    data = parse(m[1]!, { schema: 'core' });
+    // warnings (an unknown tag such as !!js/function) are reported here as a problem of the page,
+    // never printed by the YAML library itself (its process warning echoed raw control characters)
+    const doc = parseDocument(m[1]!, { schema: 'core', logLevel: 'silent' });
+    const problem = doc.errors[0] ?? doc.warnings[0];
+    if (problem) return { errors: [`frontmatter is not valid YAML: ${problem.message.split('\n')[0]}`] };
+    data = doc.toJS({ maxAliasCount: 100 });
   } catch (e) {
     return { errors: [`frontmatter is not valid YAML: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`] };
   }

@@ -3,27 +3,16 @@
  * and validation, used by the Astro content collection and by `dampbook check`.
  */
 import { z } from 'zod';
-import { sources } from '../core/sources/index.ts';
+import { caseSchema, PROVENANCE, sourceRefSchema } from '../calculators/caseSchema.ts';
 
-const sourceKeys = Object.keys(sources) as [keyof typeof sources, ...(keyof typeof sources)[]];
+export { PROVENANCE, sourceRefSchema };
 
-export const PROVENANCE = ['published', 'from memory', 'common practice, no source', 'closed form'] as const;
-
-export const sourceRefSchema = z.object({
-  key: z.enum(sourceKeys),
-  locator: z.string().min(1),
-});
-
-export const verificationCaseSchema = z.object({
-  name: z.string().min(1),
-  calculator: z.string().min(1),
-  inputs: z.record(z.union([z.number(), z.string()])),
-  expected: z.record(z.union([z.number(), z.string()])),
-  /** Relative tolerance (absolute when the expected value is 0). */
-  tolerance: z.number().positive().max(0.5),
-  source: sourceRefSchema,
-  provenance: z.union([z.enum(PROVENANCE), z.string().regex(/^reference library .+/)]),
-});
+/**
+ * A page's own extra case: the shared case shape plus the calculator it runs. A page runs every
+ * case of the calculators it lists (their definitions hold them); its frontmatter names only cases
+ * particular to the page, and one that repeats a definition's case is refused (verify.ts).
+ */
+export const verificationCaseSchema = caseSchema.extend({ calculator: z.string().min(1) });
 
 export const TOPICS = ['Oscillators', 'Damping from tests', 'Damper laws', 'Duty cycles', 'Thermal rating', 'Handbook'] as const;
 
@@ -52,7 +41,8 @@ export const pageSchema = z
     if (p.status !== 'draft' && !p.checkedBy) ctx.addIssue({ code: 'custom', path: ['checkedBy'], message: `a ${p.status} page needs checkedBy` });
     if (p.status === 'approved') {
       if (!p.approvedBy) ctx.addIssue({ code: 'custom', path: ['approvedBy'], message: 'an approved page needs approvedBy' });
-      if (p.verification.length === 0) ctx.addIssue({ code: 'custom', path: ['verification'], message: 'an approved page needs at least one verification case' });
+      // every calculator's definition carries sourced cases (test/calculators/verification.test.ts)
+      if (p.verification.length === 0 && p.calculators.length === 0) ctx.addIssue({ code: 'custom', path: ['verification'], message: 'an approved page needs at least one verification case (a calculator or a case of its own)' });
     }
   });
 

@@ -1,11 +1,15 @@
 /**
- * Executable verification of a page: runs each verification case of the page's frontmatter
- * against the core (through the calculator registry) and compares every expected output.
- * Used by the page layout (the build fails on a failing case), `dampbook check` and the tests.
- * Pure: no file system, no Astro.
+ * Executable verification of a page: runs every verification case of the calculators the page
+ * lists (one list per calculator, in its definition), then the page's own extra cases from its
+ * frontmatter, and compares every expected output by the one comparison rule
+ * (core/numeric/compare.ts). Used by the page layout (the build fails on a failing case),
+ * `dampbook check` and the tests. A frontmatter case that repeats a definition's case is a problem:
+ * two copies of one check drift apart (20 of 25 once had). Pure: no file system, no Astro.
  */
 import { evaluate } from '../calculators/evaluate.ts';
 import { getCalculator } from '../calculators/registry.ts';
+import type { CalculatorDefinition, Values } from '../calculators/types.ts';
+import { relativeDifference } from '../core/numeric/index.ts';
 import type { PageMeta, PageVerificationCase } from './schema.ts';
 
 /** One compared output of one case. */
@@ -33,10 +37,7 @@ export interface PageVerification {
 }
 
 /** |computed − expected| / |expected|, or the absolute difference when expected is 0. */
-export function difference(computed: number, expected: number): number {
-  const d = Math.abs(computed - expected);
-  return expected === 0 ? d : d / Math.abs(expected);
-}
+export const difference = relativeDifference;
 
 export function runCase(c: PageVerificationCase): CheckRow[] {
   const base = { case: c.name, calculator: c.calculator, tolerance: c.tolerance, source: c.source, provenance: c.provenance };
@@ -62,9 +63,43 @@ export function runCase(c: PageVerificationCase): CheckRow[] {
   });
 }
 
+/** A definition's cases as page cases (with the calculator id), in the definition's order. */
+export function definitionCases(calc: CalculatorDefinition): PageVerificationCase[] {
+  const defined = (o: Values) => Object.fromEntries(Object.entries(o).filter((e): e is [string, number | string] => e[1] !== undefined));
+  return calc.verification.map((v) => ({ ...v, inputs: defined(v.inputs), calculator: calc.id }));
+}
+
+/** The name of the definition case a page case repeats (same calculator, same inputs), if any. */
+export function repeatedCase(c: PageVerificationCase): string | undefined {
+  const calc = getCalculator(c.calculator);
+  if (!calc) return undefined;
+  const mine = normalised(calc, c.inputs);
+  if (!mine) return undefined;
+  return calc.verification.find((v) => { const theirs = normalised(calc, v.inputs); return theirs !== undefined && sameInputs(mine, theirs); })?.name;
+}
+
+function normalised(calc: CalculatorDefinition, inputs: Values): Values | undefined {
+  try { return evaluate(calc, inputs).values; } catch { return undefined; }
+}
+
+function sameInputs(a: Values, b: Values): boolean {
+  const keys = new Set([...Object.keys(a), ...Object.keys(b)]);
+  return [...keys].every((k) => {
+    const x = a[k], y = b[k];
+    return typeof x === 'number' && typeof y === 'number' ? relativeDifference(x, y) <= 1e-12 : x === y;
+  });
+}
+
 export function verifyPage(meta: Pick<PageMeta, 'calculators' | 'verification'>): PageVerification {
-  const problems = meta.calculators.filter((id) => !getCalculator(id)).map((id) => `lists calculator '${id}', which does not exist`);
-  const rows = meta.verification.flatMap(runCase);
+  const known = meta.calculators.flatMap((id) => { const c = getCalculator(id); return c ? [c] : []; });
+  const problems = [
+    ...meta.calculators.filter((id) => !getCalculator(id)).map((id) => `lists calculator '${id}', which does not exist`),
+    ...meta.verification.flatMap((c) => {
+      const twin = repeatedCase(c);
+      return twin === undefined ? [] : [`frontmatter case '${c.name}' repeats the case '${twin}' of calculator ${c.calculator} (same inputs); keep it once, in the definition`];
+    }),
+  ];
+  const rows = [...known.flatMap(definitionCases), ...meta.verification].flatMap(runCase);
   return { rows, failures: rows.filter((r) => !r.pass), problems };
 }
 

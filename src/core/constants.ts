@@ -54,3 +54,21 @@ export const ISO_8608_N0_SQUARED = 0.01;
  * @source incropera2007 Table A.4 (Air at atmospheric pressure), rows used here (from memory)
  */
 export const AIR_TABLE_RANGE = { min: 200, max: 700 } as const;
+
+/**
+ * Molar gas constant R, J/(mol·K), exact since the 2019 SI redefinition: R = N_A·k with the exact
+ * Avogadro and Boltzmann constants. Used by the Arrhenius ageing law (E_a/R in kelvin).
+ *
+ * $$R = N_A k = 6.022\,140\,76\times10^{23}\ \text{mol}^{-1} \times 1.380\,649\times10^{-23}\ \text{J/K}$$
+ *
+ * @source codata2018 (R = 8.314 462 618… J mol⁻¹ K⁻¹, exact)
+ */
+export const MOLAR_GAS_CONSTANT = 8.31446261815324;
+
+/**
+ * Standard atmosphere, Pa, exact by definition (10th CGPM, 1954): the outside pressure a gas
+ * charge's gauge pressure and rod force are reckoned against.
+ *
+ * @source nist811 (Appendix B.8: atmosphere, standard (atm) = 1.013 25 × 10⁵ Pa)
+ */
+export const STANDARD_ATMOSPHERE = 101325;

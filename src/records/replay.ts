@@ -8,6 +8,7 @@ import { evaluate } from '../calculators/evaluate.ts';
 import { isNumeralChoice, migrateYesNoNumbers } from '../calculators/yesNoNumbers.ts';
 import type { CalculatorDefinition, InputDef, Outputs, Values } from '../calculators/types.ts';
 import { DampbookError } from '../core/errors.ts';
+import { relativeDifference, withinTolerance } from '../core/numeric/index.ts';
 import { findUnit, fromSI, siUnit, toSI } from '../core/units/index.ts';
 import { RECORD_FORMAT, type CalcRecord, type Quantity } from './record.ts';
 
@@ -120,8 +121,8 @@ export function replayRecord(calc: CalculatorDefinition, rec: CalcRecord, ctx: R
     if (typeof q.value === 'number' && typeof computed === 'number' && def.kind !== 'text') {
       let recordedSI: number;
       try { recordedSI = q.unit === undefined ? q.value : toSI(q.value, findUnit(def.kind, q.unit)); } catch { diffs.push({ key, recorded: q.value, computed }); continue; }
-      const d = Math.abs(computed - recordedSI) / (recordedSI === 0 ? 1 : Math.abs(recordedSI));
-      if (d <= REPRODUCE_TOLERANCE || Math.abs(computed - recordedSI) <= REPRODUCE_FLOOR) matched++; else diffs.push({ key, recorded: recordedSI, computed, difference: d });
+      if (withinTolerance(computed, recordedSI, REPRODUCE_TOLERANCE, REPRODUCE_FLOOR)) matched++;
+      else diffs.push({ key, recorded: recordedSI, computed, difference: relativeDifference(computed, recordedSI) });
     } else if (computed !== undefined && String(computed) === String(q.value)) matched++;
     else diffs.push({ key, recorded: q.value, computed });
   }

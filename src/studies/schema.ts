@@ -101,6 +101,8 @@ export function validateStudy(data: unknown): StudyParse {
 export function parseStudy(textIn: string): StudyParse {
   if (typeof textIn !== 'string') return { ok: false, message: 'Not a valid study: not text.' };
   if (textIn.length > MAX_STUDY_CHARS) return { ok: false, message: `Not a valid study: ${textIn.length} characters; at most ${MAX_STUDY_CHARS}.` };
+  // a UTF-8 byte-order mark is not part of the study: the build, the browser and the CLI all drop it (as for records and pages)
+  if (textIn.charCodeAt(0) === 0xfeff) textIn = textIn.slice(1);
   let data: unknown;
   try {
     data = JSON.parse(textIn);

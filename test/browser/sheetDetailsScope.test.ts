@@ -44,4 +44,16 @@ describe('sheet details are kept per page', () => {
     expect(await page.locator('[data-sheet-field="calc"]').inputValue()).toBe('');
     expect(await page.evaluate(() => localStorage.getItem('dampbook:sheet'))).toBeNull();
   });
+
+  it('a study opened from the address gives the sheet its calculation number at once, not on the next load', async () => {
+    const w = await watchedPage(site.browser, site.server.origin);
+    const { page } = w;
+    // the TW-210 class D demo study (content/studies/) has the road page as its first step
+    await page.goto(`${site.server.url}duty/road-power/?study=tw-210-rear-damper-class-d`);
+    await page.waitForSelector('db-calculator[data-calc="road-power"][data-study]');
+    await expect.poll(() => page.locator('[data-sheet="calc"]').first().textContent()).toBe('TW-210-C-031');
+    expect(await page.locator('[data-sheet-field="project"]').inputValue()).toBe('Fellrunner site utility vehicle');
+    expect(await page.locator('#sheet-page-css').textContent()).toContain('TW-210-C-031');
+    expect(w.pageErrors).toEqual([]);
+  });
 });

@@ -36,6 +36,7 @@ const TO_SI: Readonly<Record<string, number>> = {
   Hz: 1, rpm: 1 / 60, 'cycles/min': 1 / 60, 'rad/s': 1, rad: 1, '°': Math.PI / 180,
   'm²': 1, 'cm²': 1e-4, 'mm²': 1e-6, 'in²': 6.4516e-4, 'ft²': 0.09290304,
   'W/(m²·K)': 1, 'Btu/(h·ft²·°F)': 5.678263,
+  'W/m²': 1, 'kW/m²': 1e3, 'Btu/(h·ft²)': 3.154591,
   'm²/s': 1, 'mm²/s': 1e-6, 'ft²/s': 0.09290304, 'in²/s': 6.4516e-4,
   'Pa·s': 1, 'mPa·s': 1e-3, 'lbf·s/ft²': 47.88026,
   'J/K': 1, 'kJ/K': 1e3, 'Btu/°F': 1899.101,
@@ -47,6 +48,7 @@ const TO_SI: Readonly<Record<string, number>> = {
   '1/K': 1, '%/K': 0.01, '1/°F': 1.8, '%/°F': 0.018,
   // B.8: pound-foot squared 4.214011E-02, pound-inch squared 2.926397E-04 kg·m²; pound-force foot 1.355818, pound-force inch 1.129848E-01 N·m
   'kg·m²': 1, 'lb·ft²': 0.04214011, 'lb·in²': 2.926397e-4, 'slug·ft²': 1.355818, 'N·m': 1, 'lbf·ft': 1.355818, 'lbf·in': 0.1129848,
+  L: 1e-3, 'in³': 1.638706e-5, 'J/mol': 1, 'kJ/mol': 1e3, 'kcal/mol': 4184,
 };
 
 /**

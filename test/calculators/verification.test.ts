@@ -7,12 +7,21 @@ import { calculators } from '../../src/calculators/registry.ts';
 import { evaluate, defaults } from '../../src/calculators/evaluate.ts';
 import { sources } from '../../src/core/sources/index.ts';
 import { expectClose } from '../helpers/expectClose.ts';
+import { caseSchema } from '../../src/calculators/caseSchema.ts';
 
 describe.each(calculators.map((c) => [c.id, c] as const))('calculator %s', (_id, calc) => {
   it('has at least one sourced verification case and known source keys', () => {
     expect(calc.verification.length).toBeGreaterThan(0);
     for (const v of calc.verification) expect(Object.keys(sources)).toContain(v.source.key);
     for (const s of calc.sources) expect(Object.keys(sources)).toContain(s.key);
+  });
+
+  it('writes every case in the one case shape (the zod schema pages use too), with why its tolerance is what it is', () => {
+    for (const v of calc.verification) {
+      const parsed = caseSchema.safeParse(JSON.parse(JSON.stringify(v)));
+      expect(parsed.success ? [] : parsed.error.issues.map((i) => `${v.name}: ${i.path.join('.')}: ${i.message}`)).toEqual([]);
+      expect(v.why.length).toBeGreaterThan(3);
+    }
   });
 
   it('computes finite outputs at its defaults', () => {

@@ -36,14 +36,23 @@ describe('dampbook check', () => {
   });
 
   it('fails a broken verification value naming the page, the case, the expected and the computed value', async () => {
-    // ζ = 40 / (2√(4000·10)) = 0.1 exactly (closed form); the fixture claims 0.15
-    const dir = fixture('broken-value', (t) => t.replace('expected: { wn: 20, zeta: 0.1,', 'expected: { wn: 20, zeta: 0.15,'));
+    // a page's own extra case: ζ = 40 / (2√(4000·20)) = 0.0707107 (closed form); the fixture claims 0.15
+    const extra = `verification:\n  - name: Heavier mount — 20 kg on 4 kN/m with 40 N·s/m\n    calculator: sdof\n    inputs: { m: 20, k: 4000, c: 40 }\n    expected: { zeta: 0.15 }\n    tolerance: 1.0e-12\n    source: { key: rao2017, locator: '§2.6 closed forms' }\n    provenance: closed form\n`;
+    const dir = fixture('broken-value', (t) => t.replace('calculators: [sdof]\n', `calculators: [sdof]\n${extra}`));
     const r = await run('check', '--content', dir);
     expect(r.code).toBe(1);
     const line = r.out.split('\n').find((l) => l.startsWith('FAIL'))!;
     expect(line).toContain('oscillators/sdof.mdx');
-    expect(line).toContain("case 'Contract case — 10 kg on 4 kN/m with 40 N·s/m'");
-    expect(line).toContain('zeta expected 0.15, computed 0.1');
+    expect(line).toContain("case 'Heavier mount — 20 kg on 4 kN/m with 40 N·s/m'");
+    expect(line).toContain('zeta expected 0.15, computed 0.0707');
+  });
+
+  it("fails a page case that repeats its calculator's own case, naming both", async () => {
+    const copy = `verification:\n  - name: Copied contract case\n    calculator: sdof\n    inputs: { m: 10, k: 4000, c: 40 }\n    expected: { zeta: 0.1 }\n    tolerance: 1.0e-12\n    source: { key: rao2017, locator: '§2.6 closed forms' }\n    provenance: closed form\n`;
+    const dir = fixture('repeated-case', (t) => t.replace('calculators: [sdof]\n', `calculators: [sdof]\n${copy}`));
+    const r = await run('check', '--content', dir);
+    expect(r.code).toBe(1);
+    expect(r.out).toMatch(/FAIL .*oscillators\/sdof\.mdx.*frontmatter case 'Copied contract case' repeats the case 'Issue contract case: 10 kg on 4 kN\/m with 40 N·s\/m' of calculator sdof/s);
   });
 
   it('fails a frontmatter error naming the file and the field', async () => {

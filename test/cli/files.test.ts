@@ -60,6 +60,14 @@ describe('files the CLI reads', () => {
     expectOneLine(bin('calc', '--record', path), msg);
   });
 
+  it.each([
+    ['/dev/zero', /study.*not a regular file/],
+    [dir, /study.*directory/],
+    [fifo, /study.*FIFO/],
+  ])('study run refuses %s quickly with one line', (path, msg) => {
+    expectOneLine(bin('study', 'run', path), msg);
+  });
+
   it('calc --record reads a record file with a UTF-8 byte-order mark as the browser does', async () => {
     const { evaluate } = await import('../../src/calculators/evaluate.ts');
     const { makeRecord } = await import('../../src/records/replay.ts');
@@ -112,5 +120,24 @@ describe('files the CLI reads', () => {
     const b = await run('calc', 'ring-down', '--in', `record=@${plain}`, '--json');
     expect(a.code, a.err).toBe(0);
     expect((JSON.parse(a.out) as { outputs: unknown }).outputs).toEqual((JSON.parse(b.out) as { outputs: unknown }).outputs);
+  });
+});
+
+describe('calc --record keeps the SI-only rule of the old power-law key c', () => {
+  // behaviour, no reference value: the power law's C has a unit that depends on α, so an old
+  // record giving it in lbf·s/in is refused exactly as the page's record import refuses it
+  it('refuses a power-law C recorded in lbf·s/in with one line naming c, and nothing else is computed', async () => {
+    const { evaluate } = await import('../../src/calculators/evaluate.ts');
+    const { makeRecord } = await import('../../src/records/replay.ts');
+    const epc = getCalculator('energy-per-cycle')!;
+    const base = evaluate(epc, { law: 'power', Fref: 1500 });
+    const rec = makeRecord(epc, base.values, base.outputs, {}, { coreVersion: '0.1.0' }, new Date('2026-12-02T10:00:00Z'));
+    const f = join(dir, 'power-us.json');
+    writeFileSync(f, JSON.stringify({ ...rec, inputs: { ...rec.inputs, c: { value: 1500, unit: 'lbf.s/in' } } }));
+    const r = await run('calc', '--record', f);
+    expect(r.code).not.toBe(0);
+    expect(r.out).toBe('');
+    expect(r.err.split('\n')).toHaveLength(1);
+    expect(r.err).toMatch(/'c'.*SI base units/);
   });
 });

@@ -79,3 +79,21 @@ describe('CLI messages', () => {
     expectClean(r.out);
   });
 });
+
+describe('one decimal-comma rule for the page and the CLI', () => {
+  it.each(['1,5', '1,5 kg', '1,500', '-0,25e3'])('calc refuses m=%s with the message the page shows at the field', async (m) => {
+    const { DECIMAL_COMMA, readField } = await import('../../src/components/internal/fieldState.ts');
+    const def = getCalculator('sdof')!.inputs.find((i) => i.key === 'm')!;
+    expect(readField(def, m, 'kg', {})).toEqual({ ok: false, message: DECIMAL_COMMA });
+    const r = await run('calc', 'sdof', '--in', `m=${m}`, '--in', 'k=4000', '--in', 'c=40');
+    expect(r.code).toBe(1);
+    expect(r.err).toHaveLength(1);
+    expect(r.err[0]).toContain(DECIMAL_COMMA);
+  });
+
+  it('a decimal point still reads, with or without a unit', async () => {
+    const r = await run('calc', 'sdof', '--in', 'm=1.5 kg', '--in', 'k=4000', '--in', 'c=40', '--json');
+    expect(r.code, r.err.join('\n')).toBe(0);
+    expect((JSON.parse(r.out[0]!) as { inputs: { m: number } }).inputs.m).toBe(1.5);
+  });
+});

@@ -2,6 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { describeRow, difference, failureReport, runCase, verifyPage } from '../../src/content/verify.ts';
 import type { PageVerificationCase } from '../../src/content/schema.ts';
+import { getCalculator } from '../../src/calculators/registry.ts';
 
 // closed form: ζ = c / (2√(km)) = 40 / 400 = 0.1 (Rao, Mechanical Vibrations, 6th ed., §2.6; closed form)
 const good: PageVerificationCase = {
@@ -30,6 +31,22 @@ describe('verification runner', () => {
     expect(describeRow(runCase({ ...good, calculator: 'nope' })[0]!)).toMatch(/no calculator has the id 'nope'/);
     expect(describeRow(runCase({ ...good, expected: { zz: 1 } })[0]!)).toMatch(/no output 'zz'/);
     expect(describeRow(runCase({ ...good, inputs: { m: -1, k: 4000, c: 40 } })[0]!)).toMatch(/'m'/);
+  });
+
+  it("runs the cases of every calculator the page lists, from the calculator's definition", () => {
+    const v = verifyPage({ calculators: ['sdof'], verification: [] });
+    expect(new Set(v.rows.map((r) => r.case))).toEqual(new Set(getCalculator('sdof')!.verification.map((c) => c.name)));
+    expect(v.failures).toEqual([]);
+  });
+
+  it('refuses a frontmatter case that repeats a definition case (same inputs, however written)', () => {
+    const twin = getCalculator('sdof')!.verification[0]!;
+    // the same inputs written with units: still the same case
+    const copy: PageVerificationCase = { ...good, name: 'copied', inputs: { m: '10 kg', k: '4 kN/m', c: 40 } };
+    expect(twin.inputs).toMatchObject({ m: 10, k: 4000, c: 40 });
+    const v = verifyPage({ calculators: ['sdof'], verification: [copy] });
+    expect(v.problems).toEqual([`frontmatter case 'copied' repeats the case '${twin.name}' of calculator sdof (same inputs); keep it once, in the definition`]);
+    expect(verifyPage({ calculators: ['sdof'], verification: [{ ...copy, inputs: { m: 12, k: 4000, c: 40 } }] }).problems).toEqual([]);
   });
 
   it('uses a relative difference, absolute at an expected zero', () => {

@@ -3,6 +3,7 @@
  * computed, the difference and the tolerance with its justification, so a red test explains itself.
  */
 import { expect } from 'vitest';
+import { relativeDifference, withinTolerance } from '../../src/core/numeric/index.ts';
 
 export interface CloseCheck {
   readonly label: string;
@@ -14,13 +15,12 @@ export interface CloseCheck {
   readonly inputs?: unknown;
 }
 
-export function relDiff(computed: number, expected: number): number {
-  return expected === 0 ? Math.abs(computed) : Math.abs(computed - expected) / Math.abs(expected);
-}
+/** The product's one comparison rule (verification, record replay and these tests agree). */
+export const relDiff = relativeDifference;
 
 export function expectClose(c: CloseCheck): void {
   const d = relDiff(c.computed, c.expected);
-  const ok = Number.isFinite(c.computed) && d <= c.tol;
+  const ok = withinTolerance(c.computed, c.expected, c.tol);
   if (!ok) {
     const msg = `${c.label}: computed ${c.computed}, expected ${c.expected}, rel. diff ${d.toExponential(3)} > tol ${c.tol}` +
       (c.why ? ` (${c.why})` : '') + (c.inputs !== undefined ? `; inputs ${JSON.stringify(c.inputs)}` : '');

@@ -79,3 +79,22 @@ describe('dampbook study', () => {
     expect(JSON.parse(execFileSync('node', ['bin/dampbook.mjs', 'study', 'run', 'content/studies/tw-118-end-stop.json', '--json'], { encoding: 'utf8' })).verdicts).toHaveLength(5);
   });
 });
+
+describe('a study file with a UTF-8 byte-order mark', () => {
+  it('is read as without one by parseStudy (the build and the browser) and by study run', async () => {
+    const { parseStudy } = await import('../../src/studies/schema.ts');
+    const text = readFileSync('content/studies/tw-118-end-stop.json', 'utf8');
+    const plain = parseStudy(text);
+    const bom = parseStudy(`\uFEFF${text}`);
+    expect(bom.ok, bom.ok ? '' : bom.message).toBe(true);
+    expect(bom).toEqual(plain);
+    const f = join(mkdtempSync(join(tmpdir(), 'dampbook-study-bom-')), 'bom.json');
+    writeFileSync(f, `\uFEFF${text}`);
+    const out: string[] = [];
+    const a = await main(['study', 'run', f, '--json'], (s) => out.push(s), () => {});
+    const b: string[] = [];
+    await main(['study', 'run', 'content/studies/tw-118-end-stop.json', '--json'], (s) => b.push(s), () => {});
+    expect(a).toBe(0);
+    expect(out).toEqual(b);
+  });
+});

@@ -3,6 +3,7 @@ import { harmonicDutyCalc } from './harmonicDutyCalc.ts';
 import { impact } from './impact.ts';
 import { recordedMotionCalc } from './recordedMotionCalc.ts';
 import { roadPower } from './roadPower.ts';
+import { storeyDampers } from './storeyDampersCalc.ts';
 import { structuralDampers } from './structuralDampersCalc.ts';
 
-export const dutyCalculators: readonly CalculatorDefinition[] = [harmonicDutyCalc, roadPower, impact, structuralDampers, recordedMotionCalc];
+export const dutyCalculators: readonly CalculatorDefinition[] = [harmonicDutyCalc, roadPower, impact, structuralDampers, storeyDampers, recordedMotionCalc];

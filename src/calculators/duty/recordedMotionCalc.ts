@@ -2,21 +2,26 @@ import { MAX_POWER_BLOCKS, parseRecordedMotion, recordedMotion, type ColumnLayou
 import { formatPowerProfile } from '../../core/thermal/index.ts';
 import { InputRangeError } from '../../core/errors.ts';
 import type { DamperLaw } from '../../core/dampers/index.ts';
-import { choice, defineCalculator, num, onlyWhen, optNum, text, type ChartSpec, type Values } from '../types.ts';
+import { choice, defineCalculator, num, onlyWhen, optNum, text, type ChartSpec, type Values, type VerificationCase } from '../types.ts';
 import { demoDynoRecord, kelvinVoigtRecord, sineRecord } from './demoRecord.ts';
 import { LAW_LAYOUTS, loopCharts, loopInputs, loopOf, loopOutputs, loopResults } from './recordedMotionLoop.ts';
 import { lawFromValues, lawInputs } from '../damperLaw/inputs.ts';
 import { q } from '../quantityText.ts';
+import { memoLast } from '../memoLast.ts';
 
 type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion>; law?: DamperLaw; loop: ReturnType<typeof loopOf> };
 // charts(values, result) receives the same values object compute saw: parse a long record once.
 const analysed = new WeakMap<Values, Analysis>();
 
+// the record is parsed once per change of its text or layout, not on every keystroke in another
+// field (a 2 MB record took about 0.3–0.5 s to parse); recordedMotion and loopOf only read it
+const parseRecord = memoLast(parseRecordedMotion);
+
 function analyse(values: Values): Analysis {
   const hit = analysed.get(values);
   if (hit) return hit;
   const layout = choice<ColumnLayout | 'autoF'>(values, 'layout');
-  const rec = parseRecordedMotion(text(values, 'csv'), layout === 'autoF' ? 'auto' : layout);
+  const rec = parseRecord(text(values, 'csv'), layout === 'autoF' ? 'auto' : layout);
   if (layout === 'autoF' && !rec.F) throw new InputRangeError('layout', layout, undefined, '', 'the header names no force column: choose "from the header, force from the damper law" (auto), or tx / tv, and a damper law');
   // the law's inputs apply only under the layouts that may lack a force column (their `alsoWhen`)
   const law = (LAW_LAYOUTS as readonly string[]).includes(layout) ? lawFromValues(values) : undefined;
@@ -143,7 +148,20 @@ export const recordedMotionCalc = defineCalculator({
       ...loopCharts(rec, r, loop, law),
     ];
   },
-  verification: [
+  // built on first use: the cases' synthetic records (~9,000 rows) cost tens of milliseconds
+  // to write, and every page with a study open loads this definition without checking it
+  get verification() { return (cases ??= verificationCases()); },
+  sources: [
+    { key: 'chopra2017', locator: 'eq. 3.8.1' },
+    { key: 'fornberg1988', locator: 'three-point weights on uneven grids (from memory)' },
+    { key: 'asce7_16', locator: '§17.8.5 eqs. 17.8-1, 17.8-2 effective stiffness and damping of prototype tests; §18.6 damping devices (from memory)' },
+  ],
+});
+
+let cases: readonly VerificationCase[] | undefined;
+
+function verificationCases(): VerificationCase[] {
+  return [
     {
       name: 'Sinusoidal stroke ±25 mm at 1 Hz through a linear damper c = 1500 N·s/m: P = ½·c·ω²·X² (two cycles, 1 kHz)',
       inputs: { csv: sineRecord({ X: 0.025, f: 1, cycles: 2, rate: 1000, columns: 'tx' }), layout: 'auto', law: 'linear', c: 1500 },
@@ -200,10 +218,5 @@ export const recordedMotionCalc = defineCalculator({
       source: { key: 'asce7_16', locator: '§17.8.5.1 eq. 17.8-1 effective stiffness (from memory)' },
       provenance: 'from memory',
     },
-  ],
-  sources: [
-    { key: 'chopra2017', locator: 'eq. 3.8.1' },
-    { key: 'fornberg1988', locator: 'three-point weights on uneven grids (from memory)' },
-    { key: 'asce7_16', locator: '§17.8.5 eqs. 17.8-1, 17.8-2 effective stiffness and damping of prototype tests; §18.6 damping devices (from memory)' },
-  ],
-});
+  ];
+}

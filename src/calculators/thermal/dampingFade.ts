@@ -1,17 +1,19 @@
 import { DampbookError } from '../../core/errors.ts';
-import { bodyCooling, dutyPower, fadeCoefficient, fadeEquilibrium, fadeLogSlope, fadeRatio, oilDensity, type FadeDuty, type FadeModel } from '../../core/thermal/index.ts';
+import { bodyCooling, dutyPower, fadeCoefficient, fadeEquilibrium, fadeLogSlope, fadeRatio, oilAtBody, oilDensity, type Body, type FadeDuty, type FadeModel, type OilNode } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
 import { bodyFrom, bodyInputs } from './bodyInputs.ts';
 import { betaFrom, FLUID_SOURCES, fluidFrom, fluidInputs, lawInputs, spanWarning } from './fluidInputs.ts';
 import { q } from '../quantityText.ts';
 import { DAMPING_FADE_CASES } from './dampingFadeCases.ts';
 import { ZERO_CELSIUS } from '../../core/constants.ts';
+import { HEAT_PATH_STUDY, heatPathInputs, withHeatPaths } from './heatPathInputs.ts';
+import { OIL_NODE_STUDY, oilBodyNote, oilNodeInputs, twoNodes } from './oilNodeInputs.ts';
 
 /** Highest temperature searched for the equilibrium the body would reach if nothing failed at the limit (K). */
 const SEARCH_T_MAX = ZERO_CELSIUS + 400; // 673.15 K, the top of the temperature inputs
 
 function setup(values: Values) {
-  const body = bodyFrom(values);
+  const body = withHeatPaths(bodyFrom(values), values);
   const fluid = fluidFrom(values);
   const model: FadeModel = {
     cRef: num(values, 'cRef'), Tref: num(values, 'Tref'), viscousShare: num(values, 'share'),
@@ -20,7 +22,8 @@ function setup(values: Values) {
   const duty: FadeDuty = choice(values, 'duty') === 'harmonic'
     ? { kind: 'harmonic', X: num(values, 'X'), omega: 2 * Math.PI * num(values, 'f') }
     : { kind: 'random', P: num(values, 'P') };
-  return { body, model, duty, fluid, Tlimit: num(values, 'Tlimit') };
+  const oil: OilNode | undefined = twoNodes(values) ? { Gob: num(values, 'Gob'), Coil: num(values, 'Coil') } : undefined;
+  return { body, model, duty, fluid, oil, Tlimit: num(values, 'Tlimit') };
 }
 
 /** Damping fade and the coupled thermal equilibrium of a damper. */
@@ -43,10 +46,13 @@ export const dampingFadeCalc = defineCalculator({
     { key: 'Tlimit', label: 'Temperature limit', kind: 'temperature', default: 373.15, min: 243.15, max: 673.15, help: 'Oil or seal limit; the search for an equilibrium stops here.' },
     { key: 'Cth', label: 'Heat capacity C', kind: 'heatCapacity', default: 1395, min: 0, max: 1e7, minExclusive: true, help: 'Σ m·c, for the time to the limit when no equilibrium exists.' },
     ...bodyInputs(),
+    ...heatPathInputs(),
+    ...oilNodeInputs(true),
   ],
   outputs: [
     { key: 'status', label: 'Result', kind: 'text' },
-    { key: 'Teq', label: 'Equilibrium body temperature', kind: 'temperature', optional: true },
+    { key: 'Teq', label: 'Equilibrium body temperature', kind: 'temperature', optional: true, feeds: [{ page: 'gas-charge', input: 'T', label: 'Gas pressure at this equilibrium' }] },
+    { key: 'ToilEq', label: 'Equilibrium oil temperature', kind: 'temperature', optional: true, help: 'The body temperature with one node; + P/G_ob with two. The coefficient is taken at this temperature.' },
     { key: 'cEq', label: 'Damping coefficient at equilibrium', kind: 'damping', optional: true },
     { key: 'Peq', label: 'Damper power at equilibrium', kind: 'power', optional: true },
     { key: 'fade', label: 'Coefficient lost to fade', kind: 'fraction', optional: true, help: '1 − c_eq/c_ref (or at the limit when no equilibrium).' },
@@ -61,7 +67,7 @@ export const dampingFadeCalc = defineCalculator({
     { key: 'muRef', label: 'Dynamic viscosity at T_ref', kind: 'dynamicViscosity', optional: true, help: 'μ = ρ·ν of the fluid at T_ref (physical law).' },
   ],
   compute(values) {
-    const { body, model, duty, fluid, Tlimit } = setup(values);
+    const { body, model, duty, fluid, oil, Tlimit } = setup(values);
     const warnings: string[] = [];
     const Tcold = num(values, 'Tcold');
     const common = {
@@ -74,28 +80,30 @@ export const dampingFadeCalc = defineCalculator({
     if (Tlimit <= body.Tamb + 1) {
       return { outputs: { status: 'limit not above the air temperature', crossings: 0, cLimit: fadeCoefficient(model, Tlimit), ...common }, warnings: [...warnings, 'The limit must be above the air temperature.'] };
     }
-    const eq = fadeEquilibrium(body, model, duty, Tlimit, num(values, 'Cth'));
+    const eq = fadeEquilibrium(body, model, duty, Tlimit, num(values, 'Cth'), oil);
     warnings.push(...eq.warnings, ...bodyCooling(body, Tlimit).warnings);
     if (duty.kind === 'random') warnings.push('Random road: the damper power does not depend on c, so fade changes the ride, not the temperature.');
     const cLimit = fadeCoefficient(model, Tlimit);
     if (eq.reached) {
+      const note = oilBodyNote(eq.reached.Toil, eq.reached.T);
+      if (note) warnings.push(note);
       return {
-        outputs: { status: 'equilibrium below the limit', Teq: eq.reached.T, cEq: eq.reached.c, Peq: eq.reached.P, fade: 1 - eq.reached.c / model.cRef, crossings: eq.crossings.length, cLimit, Tactual: eq.reached.T, cActual: eq.reached.c, ...common },
+        outputs: { status: 'equilibrium below the limit', Teq: eq.reached.T, ToilEq: eq.reached.Toil, cEq: eq.reached.c, Peq: eq.reached.P, fade: 1 - eq.reached.c / model.cRef, crossings: eq.crossings.length, cLimit, Tactual: eq.reached.T, cActual: eq.reached.c, ...common },
         warnings,
       };
     }
-    const beyond = equilibriumAbove(body, model, duty, Tlimit);
+    const beyond = equilibriumAbove(body, model, duty, Tlimit, oil);
     if (beyond) warnings.push(`Past the limit the body would settle at ${(beyond.T - ZERO_CELSIUS).toFixed(0)} °C with c = ${beyond.c.toFixed(0)} N·s/m, if the oil and seals survived that.`);
     else warnings.push(`No equilibrium below ${(SEARCH_T_MAX - ZERO_CELSIUS).toFixed(0)} °C either: the duty overwhelms the body.`);
     return { outputs: { status: 'no equilibrium below the limit', crossings: 0, tLimit: eq.tLimit, fade: 1 - cLimit / model.cRef, cLimit, Tactual: beyond?.T, cActual: beyond?.c, ...common }, warnings };
   },
   charts(values, result): ChartSpec[] {
-    const { body, model, duty, Tlimit } = setup(values);
+    const { body, model, duty, oil, Tlimit } = setup(values);
     const lo = body.Tamb;
     const hi = Math.min(673.15, Math.max(Tlimit, lo + 10) + 20);
     const T = Array.from({ length: 61 }, (_, i) => lo + ((hi - lo) * i) / 60);
     const Q = T.map((t) => bodyCooling(body, t).Q);
-    const P = T.map((t) => dutyPower(duty, fadeCoefficient(model, t)));
+    const P = T.map((t, i) => dutyPower(duty, fadeCoefficient(model, oilAtBody(Q[i]!, t, oil))));
     const c = T.map((t) => fadeCoefficient(model, t));
     const Teq = result.outputs.Teq as number | undefined;
     const markers = [{ x: Tlimit, label: 'limit' }, ...(Teq !== undefined ? [{ x: Teq, label: 'equilibrium' }] : [])];
@@ -105,10 +113,10 @@ export const dampingFadeCalc = defineCalculator({
         id: 'equilibrium',
         title: 'Heat rejected and damper power against body temperature',
         x: { label: 'Body temperature', kind: 'temperature' },
-        y: { label: 'Power', kind: 'power', min: 0 },
+        y: { label: 'Power', kind: 'power', ...(body.Qsun === undefined ? { min: 0 } : {}) },
         series: [
           { label: 'heat rejected Q(T)', x: T, y: Q, tone: 0 },
-          { label: 'damper power P(c(T))', x: T, y: P, style: 'dash', tone: 3 },
+          { label: oil ? 'damper power P(c(T_oil)), oil in equilibrium with the body' : 'damper power P(c(T))', x: T, y: P, style: 'dash', tone: 3 },
         ],
         markers,
         summary: `Heat rejected rises from 0 to ${q(Q.at(-1)!, 'power', 3)} over the range; damper power goes from ${q(P[0]!, 'power', 3)} to ${q(P.at(-1)!, 'power', 3)}. ${what}`,
@@ -131,16 +139,17 @@ export const dampingFadeCalc = defineCalculator({
     ...FLUID_SOURCES,
   ],
   study: {
-    inputs: { cRef: 'dampingCoefficient', Tref: 'referenceTemperature', share: 'fadeShare', fadeLaw: 'fadeLaw', beta: 'oilExpansion', fluid: 'damperFluid', nu40: 'oilViscosity40', nu100: 'oilViscosity100', X: 'strokeAmplitude', f: 'strokeFrequency', P: 'meanPower', Tlimit: 'allowedTemperature', Cth: 'heatCapacity', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+    inputs: { cRef: 'dampingCoefficient', Tref: 'referenceTemperature', share: 'fadeShare', fadeLaw: 'fadeLaw', beta: 'oilExpansion', fluid: 'damperFluid', nu40: 'oilViscosity40', nu100: 'oilViscosity100', X: 'strokeAmplitude', f: 'strokeFrequency', P: 'meanPower', Tlimit: 'allowedTemperature', Cth: 'heatCapacity', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed', ...HEAT_PATH_STUDY, ...OIL_NODE_STUDY, Coil: 'oilHeatCapacity' },
+    publishes: { ToilEq: 'oilTemperature' },
   },
 });
 
 /** The equilibrium the body would reach above the limit (searched from the limit to SEARCH_T_MAX), if any. */
-function equilibriumAbove(body: ReturnType<typeof bodyFrom>, model: FadeModel, duty: FadeDuty, Tlimit: number): { T: number; c: number } | undefined {
+function equilibriumAbove(body: Body, model: FadeModel, duty: FadeDuty, Tlimit: number, oil: OilNode | undefined): { T: number; c: number } | undefined {
   if (Tlimit >= SEARCH_T_MAX - 1) return undefined;
   try {
-    const eq = fadeEquilibrium(body, model, duty, SEARCH_T_MAX);
-    const hit = eq.crossings.find((x) => x.T >= Tlimit && x.stable) ?? eq.crossings.find((x) => x.T >= Tlimit);
+    const eq = fadeEquilibrium(body, model, duty, SEARCH_T_MAX, undefined, oil && { Gob: oil.Gob });
+    const hit = eq.crossings.find((x) => x.Toil >= Tlimit && x.stable) ?? eq.crossings.find((x) => x.Toil >= Tlimit);
     return hit && { T: hit.T, c: hit.c };
   } catch (e) {
     // a viscosity law or a correlation that gives out far above the limit: no answer, not a wrong one

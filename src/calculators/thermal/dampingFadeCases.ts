@@ -67,4 +67,22 @@ export const DAMPING_FADE_CASES: readonly VerificationCase[] = [
       source: { key: 'andrade1930', locator: 'ln ν linear in 1/T (from memory)' },
       provenance: 'closed form',
     },
+    {
+      name: 'Two nodes, random road: 41.01 W settles the body at 80 °C and the oil 5 K above it (G_ob = 8.202 W/K)',
+      inputs: { ...TW210, cRef: 980, share: 0.6, duty: 'random', P: 41.01, nodes: 'two', Gob: 8.202, Coil: 475 },
+      expected: { Teq: 353.15, ToilEq: 358.15 },
+      tolerance: 1e-4,
+      why: 'P independent of c; body as the body-cooling check, oil = body + P/G_ob',
+      source: { key: 'incropera2007', locator: 'eq. 3.19 thermal resistance (from memory); eq. 9.34, eq. 1.9, Table A.4' },
+      provenance: 'reference library numpy (independent evaluation, version not recorded)',
+    },
+    {
+      name: 'Two nodes, no viscous share: c stays 980 N·s/m, so the power is ½cω²X² whatever the oil temperature',
+      inputs: { ...TW210, cRef: 980, share: 0, duty: 'harmonic', X: 0.02, f: 1.5, nodes: 'two', Gob: 4, Coil: 475 },
+      expected: { cEq: 980, Peq: 17.409982, status: 'equilibrium below the limit' },
+      tolerance: 1e-6,
+      why: 'closed form ½·980·(3π)²·0.02²',
+      source: { key: 'incropera2007', locator: '§1.3 energy balance (from memory)' },
+      provenance: 'closed form',
+    },
 ];

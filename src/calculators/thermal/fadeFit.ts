@@ -1,4 +1,5 @@
 import { ComputationError } from '../../core/errors.ts';
+import { maxAbsOf, maxOf, minOf } from '../../core/numeric/extent.ts';
 import { fadeFit, fadeRatio, readUnitRows } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { q } from '../quantityText.ts';
@@ -62,8 +63,8 @@ export const fadeFitCalc = defineCalculator({
     if (fit.temperatures.length === 2) warnings.push('Two test temperatures fix the two unknowns exactly: r² then shows only the scatter within each temperature. A third temperature checks the law.');
     const Ts = rows.map((r) => r[0]!);
     const Tcold = num(values, 'Tcold');
-    if (Tcold < Math.min(...Ts) - 1) warnings.push(`The cold-start temperature is below the coldest test (${(Math.min(...Ts) - ZERO_CELSIUS).toFixed(1)} °C): the ratio is an extrapolation of the law.`);
-    for (const w of [spanWarning(fluid, Tcold, 'cold-start temperature'), spanWarning(fluid, Math.min(...Ts), 'coldest test'), spanWarning(fluid, Math.max(...Ts), 'warmest test')]) if (w) warnings.push(w);
+    if (Tcold < minOf(Ts) - 1) warnings.push(`The cold-start temperature is below the coldest test (${(minOf(Ts) - ZERO_CELSIUS).toFixed(1)} °C): the ratio is an extrapolation of the law.`);
+    for (const w of [spanWarning(fluid, Tcold, 'cold-start temperature'), spanWarning(fluid, minOf(Ts), 'coldest test'), spanWarning(fluid, maxOf(Ts), 'warmest test')]) if (w) warnings.push(w);
     const coldRatio = unclippedRatio(fit, Tcold);
     if (!(coldRatio > 0)) throw new ComputationError(`the fitted law gives no positive coefficient at ${(Tcold - ZERO_CELSIUS).toFixed(1)} °C (share ${fit.share.toFixed(3)})`);
     return {
@@ -75,12 +76,12 @@ export const fadeFitCalc = defineCalculator({
   charts(values, result): ChartSpec[] {
     const { fit, rows } = analyse(values);
     const Ts = rows.map((r) => r[0]!);
-    const lo = Math.min(num(values, 'Tcold'), ...Ts) - 5;
-    const hi = Math.max(...Ts) + 20;
+    const lo = Math.min(num(values, 'Tcold'), minOf(Ts)) - 5;
+    const hi = maxOf(Ts) + 20;
     const T = Array.from({ length: 61 }, (_, i) => lo + ((hi - lo) * i) / 60);
     const c = T.map((t) => fit.cRef * unclippedRatio(fit, t));
     const byT = fit.temperatures;
-    const vmax = Math.max(...rows.map((r) => Math.abs(r[1]!)));
+    const vmax = maxAbsOf(rows.map((r) => r[1]!));
     return [
       {
         id: 'fade-law',

@@ -6,7 +6,9 @@ import { warmUpCalc } from './warmUp.ts';
 import { oilViscosityCalc } from './oilViscosity.ts';
 import { dampingFadeCalc } from './dampingFade.ts';
 import { fadeFitCalc } from './fadeFit.ts';
+import { gasChargeCalc } from './gasCharge.ts';
+import { thermalLifeCalc } from './thermalLife.ts';
 
 export const thermalCalculators: readonly CalculatorDefinition[] = [
-  bodyCoolingCalc, steadyTemperatureCalc, powerRatingCalc, warmUpCalc, oilViscosityCalc, dampingFadeCalc, fadeFitCalc,
+  bodyCoolingCalc, steadyTemperatureCalc, powerRatingCalc, warmUpCalc, oilViscosityCalc, dampingFadeCalc, fadeFitCalc, gasChargeCalc, thermalLifeCalc,
 ];

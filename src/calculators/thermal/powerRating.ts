@@ -1,6 +1,7 @@
 import { bodyCooling } from '../../core/thermal/index.ts';
 import { defineCalculator, num, type ChartSpec } from '../types.ts';
 import { BODY_DETAIL_OUTPUTS, bodyFrom, bodyInputs } from './bodyInputs.ts';
+import { HEAT_PATH_STUDY, heatPathInputs, withHeatPaths } from './heatPathInputs.ts';
 import { q } from '../quantityText.ts';
 import { ZERO_CELSIUS } from '../../core/constants.ts';
 
@@ -20,6 +21,7 @@ export const powerRatingCalc = defineCalculator({
   inputs: [
     { key: 'Tmax', label: 'Allowed body temperature T_max', kind: 'temperature', default: 373.15, min: 233.15, max: 673.15, required: true, help: 'The oil or seal limit the maker allows at the body surface, e.g. 100 °C.' },
     ...bodyInputs(),
+    ...heatPathInputs(),
   ],
   outputs: [
     { key: 'Pmax', label: 'Continuous power rating P_max', kind: 'power' },
@@ -31,7 +33,7 @@ export const powerRatingCalc = defineCalculator({
     ...BODY_DETAIL_OUTPUTS,
   ],
   compute(values) {
-    const body = bodyFrom(values);
+    const body = withHeatPaths(bodyFrom(values), values);
     const Tmax = num(values, 'Tmax');
     const r = bodyCooling(body, Tmax);
     const warnings = [...r.warnings];
@@ -44,7 +46,7 @@ export const powerRatingCalc = defineCalculator({
     };
   },
   charts(values): ChartSpec[] {
-    const body = bodyFrom(values);
+    const body = withHeatPaths(bodyFrom(values), values);
     const Tmax = num(values, 'Tmax');
     const Vtop = Math.max(30, 1.5 * body.V);
     const V = Array.from({ length: 41 }, (_, i) => (Vtop * i) / 40);
@@ -90,6 +92,6 @@ export const powerRatingCalc = defineCalculator({
   ],
   sources: [{ key: 'incropera2007', locator: 'eqs. 9.34, 9.26, 7.54, 9.64, 1.9; Table A.4 (from memory)' }],
   study: {
-    inputs: { Tmax: 'allowedTemperature', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+    inputs: { Tmax: 'allowedTemperature', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', Tamb: 'airTemperature', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed', ...HEAT_PATH_STUDY },
   },
 });

@@ -6,6 +6,10 @@ import {
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { bodyFrom, bodyInputs } from './bodyInputs.ts';
 import { q } from '../quantityText.ts';
+import { HISTORY_HANDOFF_MAX, warmUpHistory } from './warmUpHistory.ts';
+import { HEAT_PATH_STUDY, heatPathInputs, withHeatPaths } from './heatPathInputs.ts';
+import { OIL_NODE_STUDY, oilBodyNote, oilNodeInputs, twoNodes } from './oilNodeInputs.ts';
+import { warmUpTwoNode } from './warmUpTwoNode.ts';
 
 /** The default profile: the Tarnwick test-bay cycle (10 min at 120 W, 10 min off). */
 const DEFAULT_PROFILE = '# time [s], power [W] from then on; the last line is the end time alone\n0, 120\n600, 0\n1200';
@@ -42,10 +46,20 @@ function setup(values: Values) {
 
 type Setup = ReturnType<typeof setup>;
 
+/** The body of the body model: its fields, the page's air temperature, mounts and sun. */
+function modelBody(values: Values) {
+  return withHeatPaths({ ...bodyFrom(values), Tamb: num(values, 'Tamb') }, values);
+}
+
 /** Body-model run: C dT/dt = P(t) − Q(T) with h(T) from the correlations, piecewise between switching times. */
 function bodyRun(values: Values, m: Setup, tEnd: number, stopAt?: number) {
-  const body = { ...bodyFrom(values), Tamb: num(values, 'Tamb') };
+  const body = modelBody(values);
   return bodyWarmUp((T) => bodyCooling(body, T).Q, m.C, body.Tamb, m.profile, m.end, tEnd, stopAt);
+}
+
+/** Length of the two-node run: the time of interest, two periods, and five time constants to settle. */
+function twoNodeEnd(values: Values, m: Setup, tau: number): number {
+  return Math.min(1e7, Math.max(num(values, 't'), 2 * m.period, 5 * tau));
 }
 
 /** Lumped warm-up and cool-down of a damper at constant or on/off power. */
@@ -72,6 +86,8 @@ export const warmUpCalc = defineCalculator({
     { key: 'kBody', label: 'Conductivity of the body (Biot check)', kind: 'thermalConductivity', default: 50, min: 0, max: 500, minExclusive: true, help: 'Steel ≈ 50 W/(m·K). Still oil is 0.14; a working damper stirs its oil.' },
     { key: 'loss', label: 'Heat-loss model', kind: 'choice', default: 'constant', options: [{ value: 'constant', label: 'constant UA (closed form)' }, { value: 'body', label: 'also: body model, h from temperature (ODE)' }], help: 'The body model integrates C dT/dt = P − Q(T) with the convection and radiation correlations.' },
     ...bodyInputs({ key: 'loss', is: ['body'] }, ['Tamb']),
+    ...heatPathInputs({ key: 'loss', is: ['body'] }),
+    ...oilNodeInputs(true),
   ],
   outputs: [
     { key: 'tau', label: 'Time constant τ = C/UA', kind: 'time' },
@@ -79,14 +95,25 @@ export const warmUpCalc = defineCalculator({
     { key: 'tLimit', label: 'Time to the limit', kind: 'time', optional: true, help: 'Absent when the limit is never reached.' },
     { key: 'reached', label: 'Limit reached', kind: 'text', help: '"yes" or "no".' },
     { key: 'T', label: 'Temperature at t', kind: 'temperature' },
-    { key: 'Tpeak', label: 'Highest temperature (cyclic peak)', kind: 'temperature', help: 'Equals T_ss at constant power; a repeated profile: the peak of its periodic steady state; one run: the highest temperature reached.' },
+    { key: 'Tpeak', label: 'Highest temperature (cyclic peak)', kind: 'temperature', help: 'Equals T_ss at constant power; a repeated profile: the peak of its periodic steady state; one run: the highest temperature reached.',
+      feeds: [
+        { page: 'thermal-life', input: 'T', label: 'Seal and oil life over this run', with: { history: 'history' }, set: { mode: 'history' } },
+        { page: 'gas-charge', input: 'T', label: 'Gas pressure at this peak temperature' },
+      ] },
     { key: 'CthTotal', label: 'Total heat capacity', kind: 'heatCapacity' },
     { key: 'tCool', label: 'Cool-down time to the target', kind: 'time', optional: true, help: 'From the limit (or the peak if lower) with the power off.' },
     { key: 'Bi', label: 'Biot number', kind: 'dimensionless', digits: 2 },
     { key: 'TssBody', label: 'Equilibrium, body model', kind: 'temperature', optional: true },
     { key: 'tLimitBody', label: 'Time to the limit, body model', kind: 'time', optional: true },
     { key: 'Pmean', label: 'Mean power P̄', kind: 'power', help: 'd·P, or the energy of the profile over its length.' },
+    { key: 'ToilT', label: 'Oil temperature at t (two nodes)', kind: 'temperature', optional: true },
+    { key: 'TbodyT', label: 'Body temperature at t (two nodes)', kind: 'temperature', optional: true },
+    { key: 'ToilPeak', label: 'Highest oil temperature of the run (two nodes)', kind: 'temperature', optional: true, help: 'Over the run: the time of interest, two periods and five time constants.' },
+    { key: 'tLimitOil', label: 'Time for the oil to reach the limit (two nodes)', kind: 'time', optional: true, help: 'Absent when the oil stays below the limit over the run.' },
+    { key: 'ToilSs', label: 'Oil equilibrium at the mean power (two nodes)', kind: 'temperature', optional: true, help: 'T_ss + P̄/G_ob (constant UA) or the body model’s equilibrium + P̄/G_ob.' },
+    { key: 'closure', label: 'Energy audit of the two-node run (put in − stored − shed)/put in', kind: 'dimensionless', digits: 2, optional: true, help: 'Integration check: should be near 1e-9 or smaller.' },
   ],
+  handoffs: [{ key: 'history', help: 'The body temperature from a cold start over the time of interest, then the cool-down, as rows "t, T" (s, K) for the thermal-life page.', maxLength: HISTORY_HANDOFF_MAX }],
   compute(values) {
     const m = setup(values);
     const { C, Tamb, duty } = m;
@@ -107,9 +134,12 @@ export const warmUpCalc = defineCalculator({
     };
     const profile = choice(values, 'power') === 'profile';
     if (profile && m.end === 'off') warnings.push('One run of the profile, then no power: T_ss is the equilibrium of its mean power if that were held; the peak is the highest temperature of the run.');
+    let TbodyEq = duty.Tmean;
     if (choice(values, 'loss') === 'body') {
-      const body = { ...bodyFrom(values), Tamb };
+      const body = modelBody(values);
       const ss = steadyTemperature(body, m.Pmean);
+      TbodyEq = ss.Ts;
+      if (body.Qsun !== undefined) warnings.push(`The constant-UA results leave out the ${body.Qsun.toPrecision(3)} W absorbed from the sun; the body-model results include it.`);
       warnings.push(...ss.warnings);
       outputs.TssBody = ss.Ts;
       const UAtyped = num(values, 'UA');
@@ -128,7 +158,24 @@ export const warmUpCalc = defineCalculator({
         }
       }
     }
-    return { outputs, warnings };
+    if (twoNodes(values)) {
+      const Gob = num(values, 'Gob');
+      const tEnd = twoNodeEnd(values, m, duty.tau);
+      try {
+        const body = choice(values, 'loss') === 'body' ? modelBody(values) : undefined;
+        const r = warmUpTwoNode(values, m, body, tEnd, num(values, 't'), Tlimit, 0);
+        Object.assign(outputs, {
+          ToilT: r.oilAtT, TbodyT: r.bodyAtT, ToilPeak: r.oilPeak, ToilSs: TbodyEq + m.Pmean / Gob, tLimitOil: r.tLimitOil, closure: r.closure,
+        });
+        const note = oilBodyNote(TbodyEq + m.Pmean / Gob, TbodyEq);
+        if (note) warnings.push(note);
+      } catch (e) {
+        if (!(e instanceof ComputationError)) throw e;
+        warnings.push(`Two-node model not run: ${e.message}.`);
+      }
+    }
+    const history = warmUpHistory({ at: duty.at, profile: m.profile, end: m.end, tau: duty.tau, Tamb }, num(values, 't'));
+    return { outputs, warnings, handoff: { history } };
   },
   charts(values, result): ChartSpec[] {
     const m = setup(values);
@@ -148,6 +195,17 @@ export const warmUpCalc = defineCalculator({
       let r: ReturnType<typeof bodyRun> | undefined;
       try { r = bodyRun(values, m, tEnd); } catch (e) { if (!(e instanceof ComputationError) || choice(values, 'power') !== 'profile') throw e; }
       if (r) series.push({ label: 'body model, h(T) (ODE)', x: r.t, y: r.y, style: 'dash', tone: 2 });
+    }
+    if (twoNodes(values)) {
+      let r: ReturnType<typeof warmUpTwoNode> | undefined;
+      const body = choice(values, 'loss') === 'body' ? modelBody(values) : undefined;
+      // Tlimit = ∞: the chart needs no limit crossing
+      try { r = warmUpTwoNode(values, m, body, twoNodeEnd(values, m, duty.tau), 0, Infinity, tEnd); } catch (e) { if (!(e instanceof ComputationError)) throw e; }
+      if (r) {
+        const how = body ? 'ODE' : 'exact';
+        series.push({ label: `oil, two nodes (${how})`, x: r.t, y: r.oil, tone: 4 });
+        series.push({ label: `body, two nodes (${how})`, x: r.t, y: r.body, style: 'thin', tone: 4 });
+      }
     }
     const reach = tl === undefined ? `never reaches ${q(Tlimit, 'temperature', 3)}; it settles at ${q(duty.Tpeak, 'temperature')}` : `reaches ${q(Tlimit, 'temperature', 3)} after ${(tl / 60).toFixed(1)} min`;
     return [{
@@ -205,13 +263,40 @@ export const warmUpCalc = defineCalculator({
       source: { key: 'incropera2007', locator: '§5.3 (from memory)' },
       provenance: 'closed form',
     },
+    {
+      name: 'Two nodes: C_oil = 475 J/K, C_body = 920 J/K, G_ob = 8 W/K, UA = 0.745664 W/K, 50 W from 25 °C: oil and body at 600 s, oil equilibrium',
+      inputs: { P: 50, Cth: 1395, UA: 0.745664, Tamb: 298.15, Tlimit: 373.15, t: 600, nodes: 'two', Coil: 475, Gob: 8 },
+      expected: { ToilT: 319.990908, TbodyT: 315.356401, ToilSs: 371.454330, tau: 1870.81581 },
+      tolerance: 1e-6,
+      why: 'linear two-node system x′ = Ax + b solved by the matrix exponential (scipy.linalg.expm), 9 s.f.; the adaptive integrator runs at rtol 1e-9',
+      source: { key: 'incropera2007', locator: '§5.3 lumped capacitance, one energy balance per node (from memory)' },
+      provenance: 'reference library scipy@1.17.1 (matrix exponential of the closed-form linear system)',
+    },
+    {
+      name: 'Same two nodes at 3600 s',
+      inputs: { P: 50, Cth: 1395, UA: 0.745664, Tamb: 298.15, Tlimit: 373.15, t: 3600, nodes: 'two', Coil: 475, Gob: 8 },
+      expected: { ToilT: 360.918358, TbodyT: 354.999093 },
+      tolerance: 1e-6,
+      why: 'matrix-exponential closed form, 9 s.f.',
+      source: { key: 'incropera2007', locator: '§5.3 (from memory)' },
+      provenance: 'reference library scipy@1.17.1 (matrix exponential of the closed-form linear system)',
+    },
+    {
+      name: 'Same two nodes at 150 W: the oil reaches 100 °C at 719.8 s (one node: 872.8 s)',
+      inputs: { P: 150, Cth: 1395, UA: 0.745664, Tamb: 298.15, Tlimit: 373.15, nodes: 'two', Coil: 475, Gob: 8 },
+      expected: { tLimitOil: 719.824197, tLimit: 872.811964 },
+      tolerance: 1e-6,
+      why: 'root of the matrix-exponential oil temperature (scipy brentq, xtol 1e-12); the event is located to round-off',
+      source: { key: 'incropera2007', locator: '§5.3 (from memory)' },
+      provenance: 'reference library scipy@1.17.1 (matrix exponential of the closed-form linear system)',
+    },
   ],
   sources: [
     { key: 'incropera2007', locator: '§5.1–5.3 lumped capacitance, eq. 5.10 Biot number; Tables A.1, A.3, A.5 (from memory)' },
     { key: 'hairer1993', locator: '§II.4–II.6 embedded Runge–Kutta with step-size control and dense output' },
   ],
   study: {
-    inputs: { P: 'meanPower', Cth: 'heatCapacity', UA: 'conductance', Tamb: 'airTemperature', Tlimit: 'allowedTemperature', t: 'dutyLength', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed' },
+    inputs: { P: 'meanPower', Cth: 'heatCapacity', UA: 'conductance', Tamb: 'airTemperature', Tlimit: 'allowedTemperature', t: 'dutyLength', D: 'bodyDiameter', L: 'bodyLength', orientation: 'bodyOrientation', eps: 'bodyEmissivity', flowFactor: 'localFlowFactor', dTsur: 'surroundingsAboveAir', V: 'vehicleSpeed', ...HEAT_PATH_STUDY, ...OIL_NODE_STUDY, Coil: 'oilHeatCapacity' },
     publishes: { CthTotal: 'heatCapacity' },
     refuse: (values, bound) => bound.has('P') && values.power === 'steady' && values.duty !== 1
       ? `P (the power while on) came from the study's mean power, but the power is on for only ${String(values.duty)} of each period: type P = mean power / on fraction on this step, or set the on fraction to 1`

@@ -3,6 +3,7 @@
  * band (force against velocity), and the residuals against velocity with the band's half-width.
  */
 import { damperForce } from '../../core/dampers/index.ts';
+import { maxAbsOf, maxOf, minOf } from '../../core/numeric/extent.ts';
 import { q } from '../quantityText.ts';
 import { num, type ChartSpec, type Result, type Values } from '../types.ts';
 import { analyseSheet, bandHalfWidth } from './fvFitAnalysis.ts';
@@ -20,8 +21,8 @@ export function fvFitCharts(values: Values, result: Result): ChartSpec[] {
   const band = num(values, 'band');
   const floor = num(values, 'bandFloor');
   const knee = fit.law.kind === 'bilinear' ? fit.law.vknee : undefined;
-  const vmin = Math.min(0, ...data.v);
-  const vmax = Math.max(0, ...data.v);
+  const vmin = Math.min(0, minOf(data.v));
+  const vmax = Math.max(0, maxOf(data.v));
   const vs = curveSpeeds(vmin, vmax, knee);
   const Ffit = vs.map((v) => damperForce(fit.law, v));
   const hw = vs.map((v) => bandHalfWidth(fit.law, v, band, floor));
@@ -61,7 +62,7 @@ export function fvFitCharts(values: Values, result: Result): ChartSpec[] {
           { label: 'band (lower)', legend: false as const, x: vs, y: hw.map((h) => -h), style: 'dash' as const, tone: 2 },
         ] : []),
       ],
-      summary: `RMS force error ${q(fit.rmsError, 'force', 3)}; the largest residual is ${q(Math.max(...fit.residuals.map(Math.abs)), 'force', 3)}. A pattern in the residuals (not scatter) means the law does not suit the damper.`,
+      summary: `RMS force error ${q(fit.rmsError, 'force', 3)}; the largest residual is ${q(maxAbsOf(fit.residuals), 'force', 3)}. A pattern in the residuals (not scatter) means the law does not suit the damper.`,
     },
   ];
 }

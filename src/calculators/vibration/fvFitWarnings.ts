@@ -1,5 +1,6 @@
 /** Warnings of the fv-fit calculator: what the fit cannot vouch for, said where the reader looks. */
 import { linearFit } from '../../core/records/index.ts';
+import { maxAbsOf, maxOf, minOf } from '../../core/numeric/extent.ts';
 import { num, type Values } from '../types.ts';
 import type { analyseSheet } from './fvFitAnalysis.ts';
 
@@ -16,7 +17,7 @@ function restingForce(v: readonly number[], F: readonly number[]): number | unde
   };
   const r = side(1);
   const c = side(-1);
-  const big = 0.03 * Math.max(...F.map(Math.abs));
+  const big = 0.03 * maxAbsOf(F);
   if (r === undefined || c === undefined || Math.sign(r) !== Math.sign(c) || Math.abs(r) < big || Math.abs(c) < big) return undefined;
   return (r + c) / 2;
 }
@@ -25,7 +26,7 @@ export function warningsFor(values: Values, a: ReturnType<typeof analyseSheet>, 
   const { data, fit, kind } = a;
   const w: string[] = [];
   const vRated = num(values, 'vRated');
-  const vmax = Math.max(...data.v.map(Math.abs));
+  const vmax = maxAbsOf(data.v);
   if (fit.r2 < 0.98) w.push(`R² = ${fit.r2.toFixed(4)}: the ${kind} law describes these points poorly; compare the residual chart with another law.`);
   if (fit.nRebound === 0 || fit.nCompression === 0) {
     const has = fit.nRebound ? 'rebound' : 'compression';
@@ -46,7 +47,7 @@ export function warningsFor(values: Values, a: ReturnType<typeof analyseSheet>, 
   }
   if (vRated > vmax) w.push(`The rated velocity lies beyond the fastest point (${vmax.toPrecision(3)} m/s): the forces there are extrapolated.`);
   if (data.T) {
-    const spread = Math.max(...data.T) - Math.min(...data.T);
+    const spread = maxOf(data.T) - minOf(data.T);
     if (spread > 10) w.push(`The temperature column spans ${spread.toFixed(1)} K: damper force changes with oil temperature, so fit one temperature at a time.`);
   }
   if (outside.length) {

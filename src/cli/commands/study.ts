@@ -4,7 +4,6 @@
  * The study runs through the same planner and runner as the built package page; a missing or
  * invalid input, a dangling binding or a cycle exits 1 with one line naming the step and input.
  */
-import { readFileSync, statSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { getCalculator } from '../../calculators/registry.ts';
 import { siSymbol } from '../../core/units/index.ts';
@@ -13,17 +12,17 @@ import { planStudy, StudyError } from '../../studies/plan.ts';
 import { runStudy } from '../../studies/run.ts';
 import { MAX_STUDY_CHARS, parseStudy, STUDY_STORE, type Study } from '../../studies/schema.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
+import { fileLimit } from '../inputs.ts';
+import { FileReadError, readBoundedFile } from '../readFile.ts';
 
 function readStudy(args: ParsedArgs): { study: Study; file: string } {
   const file = args.positionals[2];
   if (!file) throw new UsageError('study needs a study file, e.g. dampbook study run content/studies/tw-118-end-stop.json');
   let text: string;
-  try {
-    if (statSync(file).size > MAX_STUDY_CHARS * 4) throw new StudyError(`study: ${file} is too large`);
-    text = readFileSync(file, 'utf8');
-  } catch (e) {
-    if (e instanceof StudyError) throw e;
-    throw new StudyError(`study: cannot read ${file}`);
+  // regular files only, at most the limit + 1 bytes read (`study run /dev/zero` once read without end)
+  try { text = readBoundedFile(file, fileLimit(MAX_STUDY_CHARS)).text; } catch (e) {
+    if (e instanceof FileReadError) throw new StudyError(`study: ${e.message}`);
+    throw e;
   }
   const p = parseStudy(text);
   if (!p.ok) throw new StudyError(`${file}: ${p.message}`);

@@ -12,6 +12,7 @@ import { DampbookError, InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, parseQuantity, toSI, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from './format.ts';
 import { clip, parseTyped, readField, splitTyped, textSum } from './fieldState.ts';
+import { describeHeld, holdText, LARGE_TEXT, type HeldText } from './heldText.ts';
 
 import { calculatorLoaders } from '../../calculators/loaders.ts';
 import { fetchNamedStudy, storedStudy } from './study-fetch.ts';
@@ -26,6 +27,8 @@ export class CalculatorElement extends HTMLElement {
   /** The last valid inputs (SI) and outputs shown; undefined while a field is bad. */
   values: Values | undefined;
   outputs: Outputs | undefined;
+  /** Long texts held out of their textarea (heldText.ts), by input key. */
+  private held = new Map<string, HeldText>();
 
   async connectedCallback(): Promise<void> {
     const id = this.dataset.calc ?? '';
@@ -99,7 +102,7 @@ export class CalculatorElement extends HTMLElement {
         if (rawAll === null) continue;
         const raw = urlValue(def, rawAll);
         if (raw === undefined) { this.showNote(def.key, def.fromUrl ? `The link's value for this field is too long (${rawAll.length} characters, at most ${def.maxLength}); the page's own data is shown.` : 'A link cannot fill this field; the page\'s own data is shown. Paste or load your data.'); continue; }
-        ctl.value = raw;
+        this.setText(def.key, raw, 'text from the link');
         continue;
       }
       if (rawAll === null) continue;
@@ -141,7 +144,47 @@ export class CalculatorElement extends HTMLElement {
     if (t instanceof HTMLInputElement && t.type === 'file') return;
     if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) return;
     if (t instanceof HTMLInputElement && t.name) this.showUnitNote(t.name);
+    // a long paste leaves the live textarea
+    if (t instanceof HTMLTextAreaElement && t.value.length > LARGE_TEXT) this.setText(t.name, t.value, 'pasted text');
     this.schedule();
+  }
+
+  /** The text of a text field: the held long text, else the textarea's. */
+  private textOf(key: string): string {
+    return this.held.get(key)?.text ?? this.control(key)?.value ?? '';
+  }
+
+  /**
+   * Puts text into a text field. A long text is held by the element and the field shows its
+   * summary (name, rows, characters, checksum) with a button to clear it and paste or type another;
+   * a short one goes into the textarea. Either way the same text is read and checked on recompute.
+   * A held text is never put back into the textarea: Chromium took 20 s to lay out 3 MB there.
+   */
+  private setText(key: string, text: string, name: string): void {
+    const area = this.control(key);
+    const f = this.field(key);
+    if (!(area instanceof HTMLTextAreaElement) || !f) return;
+    f.querySelector('.text-summary')?.remove();
+    if (text.length <= LARGE_TEXT) { this.held.delete(key); area.hidden = false; area.value = text; return; }
+    const h = holdText(text, clip(name, 80));
+    this.held.set(key, h);
+    area.value = '';
+    area.hidden = true;
+    const p = document.createElement('p');
+    p.className = 'text-summary';
+    p.setAttribute('role', 'status');
+    p.append(`${describeHeld(h)} `);
+    const replace = document.createElement('button');
+    replace.type = 'button';
+    replace.className = 'linkish';
+    replace.textContent = 'Clear it to paste or type another';
+    replace.addEventListener('click', () => {
+      this.setText(key, '', '');
+      area.focus();
+      this.schedule();
+    });
+    p.append(replace);
+    area.after(p);
   }
 
   private onChange(e: Event): void {
@@ -247,7 +290,8 @@ export class CalculatorElement extends HTMLElement {
       const v = values[def.key];
       const ctl = this.control(def.key);
       if (!ctl) continue;
-      if (def.kind === 'choice' || def.kind === 'text') { if (typeof v === 'string') ctl.value = v; continue; }
+      if (def.kind === 'text') { if (typeof v === 'string') this.setText(def.key, v, 'loaded text'); continue; }
+      if (def.kind === 'choice') { if (typeof v === 'string') ctl.value = v; continue; }
       const sel = this.unitSelect(def.key);
       const want = shown[def.key]?.unit;
       if (sel && want && [...sel.options].some((o) => o.value === want) && sel.value !== want) {
@@ -259,8 +303,10 @@ export class CalculatorElement extends HTMLElement {
       if (v === undefined && !isActive(def, values)) continue;
       if (typeof v !== 'number') { ctl.value = ''; continue; }
       const typed = shown[def.key];
-      // String() of a double parses back to the same double: the field reproduces the value exactly
-      ctl.value = typed && (!sel || sel.value === typed.unit) ? String(typed.value) : String(sel ? fromSI(v, findUnit(def.kind, sel.value)) : v);
+      // ten significant digits: a computed value (a mean power from another step, a value in hp)
+      // stays readable and reads back within 1e-9 of itself, the tolerance of sameValues and of
+      // the study's write-back, so it is never taken for a change
+      ctl.value = typed && (!sel || sel.value === typed.unit) ? String(typed.value) : formatInput(sel ? fromSI(v, findUnit(def.kind, sel.value)) : v);
     }
     this.recompute();
   }
@@ -287,7 +333,7 @@ export class CalculatorElement extends HTMLElement {
     const area = this.control(key);
     if (!file || !def || def.kind !== 'text' || !area) return;
     if (file.size > def.maxLength) { this.showFieldMessage(key, `File too large: ${file.size} bytes; at most ${def.maxLength}.`); return; }
-    area.value = await file.text();
+    this.setText(key, await file.text(), file.name);
     this.schedule();
   }
 
@@ -315,7 +361,7 @@ export class CalculatorElement extends HTMLElement {
       if (f) f.hidden = !active;
       if (!active) { this.showFieldMessage(def.key, ''); continue; }
       const ctl = this.control(def.key);
-      const r = readField(def, ctl?.value ?? '', this.unitSelect(def.key)?.value, values);
+      const r = readField(def, def.kind === 'text' ? this.textOf(def.key) : ctl?.value ?? '', this.unitSelect(def.key)?.value, values);
       if (r.ok) { values[def.key] = r.value; this.showFieldMessage(def.key, ''); }
       else { bad = true; this.showFieldMessage(def.key, r.message); }
     }
@@ -416,7 +462,8 @@ export class CalculatorElement extends HTMLElement {
       if (def.kind === 'text' && !def.fromUrl) {
         // the data itself cannot travel in a link: its checksum says on the other end that it differed
         params.delete(def.key);
-        if (typeof v === 'string' && v !== def.default) params.set(`${def.key}.sha`, textSum(v)); else params.delete(`${def.key}.sha`);
+        // a held long text has its checksum already (no 5 MB loop on every keystroke)
+        if (typeof v === 'string' && v !== def.default) params.set(`${def.key}.sha`, this.held.get(def.key)?.sum ?? textSum(v)); else params.delete(`${def.key}.sha`);
         continue;
       }
       if (v === undefined) { params.delete(def.key); continue; }
@@ -448,7 +495,8 @@ if (!customElements.get('db-calculator')) customElements.define('db-calculator',
  * one that does not apply (a choice of another mode the runner keeps).
  */
 function sameValues(calc: CalculatorDefinition, given: Values, read: Values): boolean {
-  const same = (x: unknown, y: unknown) => typeof x === 'number' && typeof y === 'number' ? Math.abs(x - y) <= 1e-12 * Math.max(Math.abs(x), Math.abs(y)) : x === y;
+  // 1e-9: a field holds ten significant digits (formatInput), so a value filled in reads back within 5e-10
+  const same = (x: unknown, y: unknown) => typeof x === 'number' && typeof y === 'number' ? Math.abs(x - y) <= 1e-9 * Math.max(Math.abs(x), Math.abs(y)) : x === y;
   return calc.inputs.every((d) => read[d.key] === undefined
     ? given[d.key] === undefined || !isActive(d, read)
     : same(read[d.key], given[d.key]));

@@ -6,7 +6,9 @@ import { checkInput, MAX_NUMBER_TEXT, rangeOf } from '../../calculators/evaluate
 import type { InputDef, NumberInput, Values } from '../../calculators/types.ts';
 import type { QuantityKind } from '../../core/units/index.ts';
 import { InputRangeError } from '../../core/errors.ts';
-import { isPlainNumber } from '../../core/numeric/plainNumber.ts';
+import { DECIMAL_COMMA, hasDecimalComma, isPlainNumber } from '../../core/numeric/plainNumber.ts';
+
+export { DECIMAL_COMMA, hasDecimalComma };
 import { findUnit, fromSI, splitQuantity, toSI } from '../../core/units/index.ts';
 import { formatNumber } from './format.ts';
 
@@ -33,13 +35,6 @@ export function parseTyped(text: string): number {
   const t = text.trim().replace(/\s+/g, '');
   return isPlainNumber(t) ? Number(t) : NaN;
 }
-
-/** True for text such as "1,5" or "2,5e3": a number written with a decimal comma. */
-export function hasDecimalComma(text: string): boolean {
-  return /^[-+]?\d*,\d+(e[-+]?\d+)?$/i.test(text.trim());
-}
-
-export const DECIMAL_COMMA = 'Use a decimal point (1.5, not 1,5): the handbook reads numbers the same way everywhere.';
 
 /**
  * A number typed with its unit ("22 kN/m", "250 N/mm", "980 N.s/m"): the number as typed and the

@@ -7,7 +7,7 @@
  * ever reaches the page through textContent and cssString().
  */
 import { pageCss, type Paper } from '../../sheets/pageCss.ts';
-import { STUDY_STORE } from '../../studies/storeKey.ts';
+import { STUDY_STORE, STUDY_STORED_EVENT } from '../../studies/storeKey.ts';
 
 const KEYS = ['project', 'no', 'calc', 'by', 'checker', 'date'] as const;
 type Key = (typeof KEYS)[number];
@@ -79,8 +79,8 @@ function render(write: boolean): void {
   history.replaceState(history.state, '', `${location.pathname}?${params.toString()}${location.hash}`);
 }
 
-if (panel) {
-  try { localStorage.removeItem(LEGACY_STORE); } catch { /* storage blocked: nothing to remove */ }
+/** Fills the fields: the address first, then details typed for this page, then the open study's. */
+function fill(): void {
   const params = new URLSearchParams(location.search);
   const typed = stored();
   const saved = KEYS.some((k) => typed[k]) ? typed : { ...typed, ...fromStudy() };
@@ -89,9 +89,17 @@ if (panel) {
     const el = field(k);
     if (el) el.value = (fromUrl ? params.get(`sheet-${k}`) ?? '' : saved[k] ?? '').slice(0, MAX);
   }
-  const sel = panel.querySelector<HTMLSelectElement>('[data-sheet-paper]');
+  const sel = panel?.querySelector<HTMLSelectElement>('[data-sheet-paper]');
   if (sel) sel.value = (params.get('paper') ?? saved.paper) === 'letter' ? 'letter' : 'a4';
   render(false);
+}
+
+if (panel) {
+  try { localStorage.removeItem(LEGACY_STORE); } catch { /* storage blocked: nothing to remove */ }
+  fill();
+  // a study opened (or closed) on this page after it loaded — e.g. from `?study=` — decides the
+  // header at once, not only on the next page load
+  document.addEventListener(STUDY_STORED_EVENT, fill);
   panel.addEventListener('input', () => render(true));
   panel.addEventListener('change', () => render(true));
   panel.querySelector('[data-sheet-print]')?.addEventListener('click', () => window.print());

@@ -36,7 +36,9 @@ class StudySession {
     if (named !== null) {
       params.delete('study');
       history.replaceState(history.state, '', `${location.pathname}${params.size ? `?${params}` : ''}${location.hash}`);
-      await this.fetchBuiltIn(named);
+      // the study just fetched and checked is the one now kept: no second parse of the stored copy
+      const fetched = await this.fetchBuiltIn(named);
+      if (fetched) { this.study = fetched; this.rerun(); return; }
     }
     const stored = readOpenStudy();
     if (stored && !stored.ok) this.error = { message: `The study kept in this browser is not valid and was not opened (${stored.message}).` };
@@ -44,12 +46,13 @@ class StudySession {
     this.rerun();
   }
 
-  private async fetchBuiltIn(id: string): Promise<void> {
+  private async fetchBuiltIn(id: string): Promise<Study | undefined> {
     const got = await fetchNamedStudy();
-    if (!got?.text) { this.error = { message: /^[a-z0-9-]{1,80}$/.test(id) ? `The study '${id}' named in the address is not part of this handbook.` : 'The address names no study of this handbook.' }; return; }
+    if (!got?.text) { this.error = { message: /^[a-z0-9-]{1,80}$/.test(id) ? `The study '${id}' named in the address is not part of this handbook.` : 'The address names no study of this handbook.' }; return undefined; }
     const parsed = parseStudy(got.text);
-    if (parsed.ok) saveOpenStudy(parsed.study);
-    else this.error = { message: `The study named in the address could not be opened: ${parsed.message}` };
+    if (parsed.ok) { saveOpenStudy(parsed.study); return parsed.study; }
+    this.error = { message: `The study named in the address could not be opened: ${parsed.message}` };
+    return undefined;
   }
 
   private rerun(): void {

@@ -5,6 +5,7 @@
  * followed: a page never changes under the reader's hands).
  */
 import { parseStudy, STUDY_STORE, type Study } from '../../studies/schema.ts';
+import { STUDY_STORED_EVENT } from '../../studies/storeKey.ts';
 
 export { STUDY_STORE };
 
@@ -20,9 +21,12 @@ export function readOpenStudy(): StoredStudy {
 
 /** Keeps the study; false when the browser refuses (storage full or disabled). */
 export function saveOpenStudy(study: Study): boolean {
-  try { localStorage.setItem(STUDY_STORE, JSON.stringify(study, null, 1)); return true; } catch { return false; }
+  try { localStorage.setItem(STUDY_STORE, JSON.stringify(study, null, 1)); } catch { return false; }
+  document.dispatchEvent(new Event(STUDY_STORED_EVENT));
+  return true;
 }
 
 export function closeOpenStudy(): void {
   try { localStorage.removeItem(STUDY_STORE); } catch { /* storage blocked: nothing is open */ }
+  document.dispatchEvent(new Event(STUDY_STORED_EVENT));
 }

@@ -12,3 +12,5 @@ export { fitLinearOrigin } from './fitLinear.ts';
 export { fitPowerLaw, type PowerLawFit } from './fitPowerLaw.ts';
 export { fitBilinear, type BilinearFit, type FitSide } from './fitBilinear.ts';
 export { fitDamperLaw, splitSides, type DamperLawFit, type FitLawKind } from './fitDamperLaw.ts';
+export { gasCharge, type GasCharge, type GasChargeInput } from './gasCharge.ts';
+export { gasStoredEnergy, NITROGEN_GAMMA } from './gasEnergy.ts';

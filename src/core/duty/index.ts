@@ -26,3 +26,6 @@ export { blockPower, MAX_POWER_BLOCKS, type BlockPower } from './blockPower.ts';
 export { recordedMotion, type RecordedMotionResult } from './recordedMotion.ts';
 export { roadDamperPower } from './roadDamperPower.ts';
 export { loopMetrics, loopDisplacement, BETA_MIN_END_FORCE, type LoopMetrics, type CycleLoop } from './loopMetrics.ts';
+export { dampingCorrection, ETA_FLOOR } from './dampingModification.ts';
+export { storeyDamping, type DamperStorey, type StoreyDampingInput, type StoreyDamping, type StoreyDuty } from './storeyDamping.ts';
+export { dampedDemand, type DampedDemand } from './storeyDemand.ts';

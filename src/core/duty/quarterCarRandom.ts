@@ -3,6 +3,7 @@
  * the exact transfer functions.
  */
 import { quarterCarCharacteristicFrequencies, quarterCarGains, type QuarterCar } from './quarterCar.ts';
+import { maxOf, minOf } from '../numeric/extent.ts';
 import { roadDisplacementPsd, type RoadInput } from './roadPsd.ts';
 import { spectralIntegral, spectralIntegrals, type SpectralIntegral } from './spectralIntegral.ts';
 import { WEIGHTING_WK, weightingSquared } from './comfortWeighting.ts';
@@ -20,7 +21,7 @@ export interface QuarterCarRandom {
 /** Quadrature band: three decades below the lowest characteristic frequency to three above the highest. */
 export function quarterCarBand(q: QuarterCar): [number, number] {
   const f = quarterCarCharacteristicFrequencies(q);
-  return [Math.min(...f) / 1000, Math.max(...f) * 1000];
+  return [minOf(f) / 1000, maxOf(f) * 1000];
 }
 
 /**

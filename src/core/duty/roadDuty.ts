@@ -5,6 +5,7 @@
 import { STANDARD_GRAVITY } from '../constants.ts';
 import { ALPHA_RANGE, gaussianMomentFactor } from '../dampers/index.ts';
 import { POSITIVE, requireInRange } from '../errors.ts';
+import { maxAbsOf } from '../numeric/extent.ts';
 import { checkQuarterCar, type QuarterCar } from './quarterCar.ts';
 import { damperVelocityVariance, quarterCarRandom } from './quarterCarRandom.ts';
 import { quarterCarWhiteVariances, whiteRoadDamperPower } from './quarterCarWhite.ts';
@@ -78,7 +79,7 @@ export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: Ro
   let closed: RoadDuty['closed'];
   const v = quarterCarWhiteVariances(q, roadVelocityWhiteLevel(road.Gd0, road.V));
   const check = road.w === 2 ? r : quarterCarRandom(q, { ...road, w: 2 }, 1e-6);
-  const closedFormDiff = Math.max(...KEYS.map((k) => Math.abs(Math.sqrt(check[k].value / v[k]) - 1)));
+  const closedFormDiff = maxAbsOf(KEYS.map((k) => Math.sqrt(check[k].value / v[k]) - 1));
   if (road.w === 2) {
     closed = {
       vRms: Math.sqrt(v.damperVelocity), P: whiteRoadDamperPower(q.kt, road.Gd0, road.V),

@@ -4,5 +4,7 @@ export { adaptiveSimpsonVector } from './adaptiveSimpsonVector.ts';
 export { gamma } from './gamma.ts';
 export { brentRoot, type BrentOptions } from './brent.ts';
 export { bracketRoots, type Crossing } from './bracketRoots.ts';
-export { PLAIN_NUMBER, isPlainNumber } from './plainNumber.ts';
+export { DECIMAL_COMMA, PLAIN_NUMBER, hasDecimalComma, isPlainNumber } from './plainNumber.ts';
 export { goldenSection, type GoldenMinimum } from './goldenSection.ts';
+export { relativeDifference, withinTolerance } from './compare.ts';
+export { maxOf, minOf, maxAbsOf } from './extent.ts';

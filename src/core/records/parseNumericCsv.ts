@@ -6,6 +6,7 @@
  */
 import { InputRangeError } from '../errors.ts';
 import { PLAIN_NUMBER } from '../numeric/plainNumber.ts';
+import { maxOf } from '../numeric/extent.ts';
 
 export type Delimiter = ',' | ';' | '\t' | ' ';
 
@@ -79,7 +80,7 @@ function detect(sample: readonly string[], minColumns: number): { d: Delimiter; 
         const c = parseRow(l, d, comma)?.length ?? -1;
         if (c >= minColumns) tally.set(c, (tally.get(c) ?? 0) + 1);
       }
-      const score = Math.max(0, ...tally.values()) / sample.length;
+      const score = Math.max(0, maxOf([...tally.values()])) / sample.length;
       if (score >= 0.5 && (!best || score > best.score)) best = { d, comma, score };
     }
   }

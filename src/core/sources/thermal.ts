@@ -15,4 +15,7 @@ export const thermal = {
   apiMpms11_1: { kind: 'standard', citation: 'API MPMS Chapter 11.1 (ASTM D1250, IP 200), Temperature and Pressure Volume Correction Factors for Generalized Crude Oils, Refined Products and Lubricating Oils, American Petroleum Institute, 2004.' },
   hryciow2022: { kind: 'paper', citation: 'Z. Hryciów, bench tests of twin-tube shock absorbers over a range of temperatures, Applied Sciences 12(24), 12765, 2022 (MDPI).' },
   lawson1974: { kind: 'book', citation: 'C. L. Lawson and R. J. Hanson, Solving Least Squares Problems, Prentice-Hall, 1974.' },
+  iso11346: { kind: 'standard', citation: 'ISO 11346:2014, Rubber, vulcanized or thermoplastic — Estimation of life-time and maximum temperature of use, 3rd ed., ISO.' },
+  miner1945: { kind: 'paper', citation: 'M. A. Miner, Cumulative damage in fatigue, J. Appl. Mech. 12(3), A159–A164, 1945.' },
+  cengel2015: { kind: 'book', citation: 'Y. A. Çengel and M. A. Boles, Thermodynamics: An Engineering Approach, 8th ed., McGraw-Hill Education, 2015.' },
 } as const satisfies Record<string, Source>;

@@ -21,6 +21,10 @@ export interface Body {
   readonly Tamb: number; // K, air far from the body
   readonly Tsur?: number; // K, radiating surroundings (default Tamb)
   readonly V: number; // m/s, air speed across the body (0 = still air)
+  /** Conductance of the mounts to air at T∞, W/K (`mountConductance`); default 0. */
+  readonly Gmount?: number;
+  /** Heat absorbed from the sun or another beam, W (`solarGain`); default 0. */
+  readonly Qsun?: number;
 }
 
 export interface BodyCooling {
@@ -32,8 +36,10 @@ export interface BodyCooling {
   readonly hRad: number; // W/(m²·K)
   readonly Qconv: number; // W
   readonly Qrad: number; // W
-  readonly Q: number; // W, heat leaving the body
-  readonly UA: number; // W/K, (hConv + hRad)·area
+  readonly Qmount: number; // W, conducted into the mounts, Gmount·(Ts − T∞)
+  readonly Qsun: number; // W, absorbed from the sun (a gain: it counts against the loss)
+  readonly Q: number; // W, net heat leaving the body, Qconv + Qrad + Qmount − Qsun
+  readonly UA: number; // W/K, (hConv + hRad)·area + Gmount
   readonly Ra: number; // on D (horizontal) or L (vertical)
   readonly Re: number; // on D
   readonly Pr: number;
@@ -46,13 +52,16 @@ export const BODY_T_RANGE = AIR_TABLE_RANGE;
 /**
  * Heat leaving a cylindrical body at surface temperature Ts by convection and radiation.
  *
- * $$Q = h_{conv}A(T_s-T_\infty) + h_r A(T_s-T_{sur}),\quad h_{conv} = (h_F^3 + h_N^3)^{1/3}$$
+ * $$Q = h_{conv}A(T_s-T_\infty) + h_r A(T_s-T_{sur}) + G_{m}(T_s-T_\infty) - Q_{sun},\quad h_{conv} = (h_F^3 + h_N^3)^{1/3}$$
  * h_N: Churchill–Chu horizontal cylinder on D, or Churchill–Chu vertical plate on L with the
  * slenderness test; h_F: Churchill–Bernstein on D; h_r linearised radiation. Properties at
  * T_f = (T_s + T_∞)/2. End faces, when included, take the lateral coefficients (an approximation:
  * common practice, no source; they are D/(2L) of the lateral area, 7 % for a 50 × 350 mm body).
+ * Mounts (G_m, fins: `mountConductance`) and a solar gain (`solarGain`) are optional and default to 0;
+ * the gain enters as a negative loss, so Q is the net heat the body must be given to hold T_s.
  *
- * @param body geometry, emissivity, air; D, L (0, 10] m; V [0, 100] m/s; Tamb, Tsur in [200, 700] K
+ * @param body geometry, emissivity, air; D, L (0, 10] m; V [0, 100] m/s; Tamb, Tsur in [200, 700] K;
+ *   Gmount [0, 1e5] W/K; Qsun [0, 1e6] W
  * @param Ts surface temperature, K, [200, 700]
  * @returns coefficients, heat flows, UA, the dimensionless groups and validity warnings
  * @throws InputRangeError for inputs outside those ranges
@@ -66,6 +75,8 @@ export function bodyCooling(body: Body, Ts: number): BodyCooling {
   requireInRange('Ts', Ts, BODY_T_RANGE, 'K');
   const Tamb = requireInRange('Tamb', body.Tamb, BODY_T_RANGE, 'K');
   const Tsur = requireInRange('Tsur', body.Tsur ?? Tamb, BODY_T_RANGE, 'K');
+  const Gmount = requireInRange('Gmount', body.Gmount ?? 0, { min: 0, max: 1e5 }, 'W/K');
+  const Qsun = requireInRange('Qsun', body.Qsun ?? 0, { min: 0, max: 1e6 }, 'W');
   const warnings: string[] = [];
   const Tfilm = 0.5 * (Ts + Tamb);
   const air = airProperties(Tfilm);
@@ -99,7 +110,11 @@ export function bodyCooling(body: Body, Ts: number): BodyCooling {
   const area = body.ends ? lateral + 2 * (Math.PI / 4) * D * D : lateral;
   const Qconv = hConv * area * (Ts - Tamb);
   const Qrad = hRad * area * (Ts - Tsur);
-  return { area, Tfilm, hNatural, hForced, hConv, hRad, Qconv, Qrad, Q: Qconv + Qrad, UA: (hConv + hRad) * area, Ra, Re, Pr: air.Pr, warnings };
+  const Qmount = Gmount * (Ts - Tamb);
+  // written so that with no mounts and no sun Q and UA are bit-for-bit the one-path values
+  const Q = Gmount === 0 && Qsun === 0 ? Qconv + Qrad : Qconv + Qrad + Qmount - Qsun;
+  const UA = (hConv + hRad) * area + Gmount;
+  return { area, Tfilm, hNatural, hForced, hConv, hRad, Qconv, Qrad, Qmount, Qsun, Q, UA, Ra, Re, Pr: air.Pr, warnings };
 }
 
 function fmtMm(x: number): string {

@@ -11,7 +11,7 @@ import { ZERO_CELSIUS } from '../constants.ts';
  * Brent's method to 1e-9 K and checked: the remaining imbalance must be below 1e-7 of P (or of
  * the larger of the convective and radiative flows), else a typed error (a jump, not a root).
  *
- * $$Q(T_s) = h_{conv}(T_s)\,A\,(T_s-T_\infty) + h_r(T_s)\,A\,(T_s-T_{sur}) = P$$
+ * $$Q(T_s) = h_{conv}(T_s)\,A\,(T_s-T_\infty) + h_r(T_s)\,A\,(T_s-T_{sur}) + G_m(T_s-T_\infty) - Q_{sun} = P$$
  *
  * @param body the body and its air (see `Body`)
  * @param P mean power to shed, W, [0, ∞)
@@ -39,5 +39,5 @@ export function steadyTemperature(body: Body, P: number): BodyCooling & { readon
 function balanceScale(body: Body, P: number, lo: number, hi: number): number {
   const a = bodyCooling(body, lo);
   const b = bodyCooling(body, hi);
-  return Math.max(P, Math.abs(a.Qconv), Math.abs(a.Qrad), Math.abs(b.Qconv), Math.abs(b.Qrad), 1e-12);
+  return Math.max(P, Math.abs(a.Qconv), Math.abs(a.Qrad), Math.abs(b.Qconv), Math.abs(b.Qrad), Math.abs(b.Qmount), a.Qsun, 1e-12);
 }

@@ -2,6 +2,7 @@
  * Conversion at the edges: the interface and the CLI call these; the core only sees SI.
  */
 import { DampbookError } from '../errors.ts';
+import { DECIMAL_COMMA, hasDecimalComma } from '../numeric/plainNumber.ts';
 import { QUANTITY_KINDS, SI_SYMBOL, type QuantityKind } from './kinds.ts';
 import { PREFERRED, UNITS, type UnitDef, type UnitSystem } from './table.ts';
 import { validateUnitTable } from './validate.ts';
@@ -83,6 +84,8 @@ export function splitQuantity(text: string): { readonly number: string; readonly
  * Returns NaN-free results or throws UnitError.
  */
 export function parseQuantity(text: string, kind: QuantityKind): number {
+  // the same rule as the page's fields: a decimal comma is refused with one message, not read as a unit
+  if (hasDecimalComma(text)) throw new UnitError(DECIMAL_COMMA);
   const q = splitQuantity(text);
   if (!q) throw new UnitError(`'${text.slice(0, 40)}' is not a number with an optional unit`);
   const value = Number(q.number);

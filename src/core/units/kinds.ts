@@ -22,6 +22,7 @@ export const QUANTITY_KINDS = [
   'angle',
   'area',
   'heatTransferCoefficient',
+  'heatFlux',
   'kinematicViscosity',
   'dynamicViscosity',
   'heatCapacity',
@@ -38,6 +39,8 @@ export const QUANTITY_KINDS = [
   'perTemperature',
   'momentOfInertia',
   'torque',
+  'volume',
+  'molarEnergy',
 ] as const;
 
 export type QuantityKind = (typeof QUANTITY_KINDS)[number];
@@ -64,6 +67,8 @@ export const SI_SYMBOL: Record<QuantityKind, string> = {
   angle: 'rad',
   area: 'm²',
   heatTransferCoefficient: 'W/(m²·K)',
+  /** Heat flux or irradiance (sunlight on a surface). */
+  heatFlux: 'W/m²',
   kinematicViscosity: 'm²/s',
   dynamicViscosity: 'Pa·s',
   heatCapacity: 'J/K',
@@ -83,4 +88,8 @@ export const SI_SYMBOL: Record<QuantityKind, string> = {
   /** Mass moment of inertia about an axis (rotary end-stop loads). */
   momentOfInertia: 'kg·m²',
   torque: 'N·m',
+  /** A volume of oil or gas (not road roughness, whose unit is also m³). */
+  volume: 'm³',
+  /** Energy per amount of substance: the activation energy of an ageing reaction. */
+  molarEnergy: 'J/mol',
 };

@@ -91,6 +91,7 @@ export const UNITS: readonly UnitDef[] = [
 
   si('W/m2K', 'W/(m²·K)', 'heatTransferCoefficient'),
   us('Btu/hft2F', 'Btu/(h·ft²·°F)', 'heatTransferCoefficient', BTU / HOUR / (FT * FT) / DEGF),
+  si('W/m2', 'W/m²', 'heatFlux'), si('kW/m2', 'kW/m²', 'heatFlux', 1e3), us('Btu/hft2', 'Btu/(h·ft²)', 'heatFlux', BTU / HOUR / (FT * FT)),
 
   si('m2/s', 'm²/s', 'kinematicViscosity'), si('cSt', 'mm²/s', 'kinematicViscosity', 1e-6),
   us('ft2/s', 'ft²/s', 'kinematicViscosity', FT * FT), us('in2/s', 'in²/s', 'kinematicViscosity', IN * IN),
@@ -120,6 +121,12 @@ export const UNITS: readonly UnitDef[] = [
 
   si('kg.m2', 'kg·m²', 'momentOfInertia'), us('lb.ft2', 'lb·ft²', 'momentOfInertia', LB * FT * FT), us('lb.in2', 'lb·in²', 'momentOfInertia', LB * IN * IN), us('slug.ft2', 'slug·ft²', 'momentOfInertia', (LBF / FT) * FT * FT),
   si('N.m', 'N·m', 'torque'), us('lbf.ft', 'lbf·ft', 'torque', LBF * FT), us('lbf.in', 'lbf·in', 'torque', LBF * IN),
+  // litre: 1 L = 1 dm³ (SI Brochure Table 8, accepted for use with the SI); in³ from the exact inch
+  si('m3', 'm³', 'volume'), si('cm3', 'cm³', 'volume', 1e-6), si('L', 'L', 'volume', 1e-3),
+  us('in3', 'in³', 'volume', IN * IN * IN),
+  // kcal_th = 4184 J exactly (NIST SP 811 B.8, calorie_th); the kcal/mol of the ageing literature
+  si('J/mol', 'J/mol', 'molarEnergy'), si('kJ/mol', 'kJ/mol', 'molarEnergy', 1e3),
+  { id: 'kcal/mol', symbol: 'kcal/mol', kind: 'molarEnergy', factor: 4184, exact: true, system: 'US', source: 'NIST SP 811 B.8' },
 
   any('1/h', 'per hour', 'eventRate'), any('1/min', 'per minute', 'eventRate', 60), any('1/s', 'per second', 'eventRate', 3600),
 ];
@@ -142,4 +149,7 @@ export const PREFERRED: Partial<Record<QuantityKind, { SI: string; US: string }>
   fraction: { SI: '1', US: '1' },
   momentOfInertia: { SI: 'kg.m2', US: 'lb.ft2' },
   torque: { SI: 'N.m', US: 'lbf.ft' },
+  pressure: { SI: 'MPa', US: 'psi' },
+  volume: { SI: 'cm3', US: 'in3' },
+  molarEnergy: { SI: 'kJ/mol', US: 'kcal/mol' },
 };

@@ -20,3 +20,5 @@ export { ringDown, type RingDownFit } from './ringDown.ts';
 export { tmdTuning, type TmdExcitation, type TmdTuning } from './tmdTuning.ts';
 export { tmdResponse, type TmdSystem, type TmdPhasors } from './tmdResponse.ts';
 export { tmdPeak, type TmdPeak } from './tmdPeak.ts';
+export { shearBuildingMode, MAX_STOREYS, type ShearBuildingMode } from './shearBuilding.ts';
+export { modalFactors, type ModalFactors } from './modalFactors.ts';

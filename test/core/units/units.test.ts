@@ -17,10 +17,13 @@ const NIST_B8: readonly (readonly [kind: Parameters<typeof findUnit>[0], id: str
   ['power', 'Btu/h', 2.930711e-1],
   ['velocity', 'mph', 4.4704e-1],
   ['heatTransferCoefficient', 'Btu/hft2F', 5.678263],
+  ['heatFlux', 'Btu/hft2', 3.154591],
   ['kinematicViscosity', 'ft2/s', 9.290304e-2],
   ['pressure', 'psi', 6.894757e3],
   ['specificHeat', 'Btu/lbF', 4.1868e3],
   ['thermalConductivity', 'Btu/hftF', 1.730735],
+  ['volume', 'in3', 1.638706e-5],
+  ['molarEnergy', 'kcal/mol', 4.184e3],
 ];
 
 describe('unit table', () => {
