@@ -23,14 +23,16 @@ describe('tolerances and sweep on the oscillator page', () => {
     await page.waitForSelector('db-calculator[data-calc="sdof"][data-envelope]');
     const zeta = host.locator('tr[data-out="zeta"] td.env');
     await expect.poll(() => zeta.textContent()).toBe('0.085 – 0.115');
-    expect(await host.locator('tr[data-out="zeta"] td.drv').textContent()).toBe('Damping coefficient low; Damping coefficient high');
+    expect(await host.locator('tr[data-out="zeta"] td.drv span').allTextContents()).toEqual(['min: Damping coefficient low', 'max: Damping coefficient high']);
     expect(await host.locator('.env-method').textContent()).toMatch(/all 2\^1 = 2 corners \+ 64 interior samples/);
     // the nominal value stays beside the range
     expect(await host.locator('tr[data-out="zeta"] .value').textContent()).toBe('0.1');
 
     await host.locator('input[name="m.tol"]').fill('9..11');
     await expect.poll(() => zeta.textContent()).toBe('0.08104 – 0.1212');
-    expect(await host.locator('tr[data-out="zeta"] td.drv').textContent()).toBe('Moving mass high, Damping coefficient low; Moving mass low, Damping coefficient high');
+    expect(await host.locator('tr[data-out="zeta"] td.drv span').allTextContents()).toEqual(['min: Moving mass high, Damping coefficient low', 'max: Moving mass low, Damping coefficient high']);
+    // ωn = √(k/m) does not depend on c: only the mass sets its ends
+    expect(await host.locator('tr[data-out="wn"] td.drv span').allTextContents()).toEqual(['min: Moving mass high', 'max: Moving mass low']);
 
     // US units: the field and its range convert alike; ranges show in the US unit, SI values unchanged
     await host.locator('input[name="units"][value="US"]').check();

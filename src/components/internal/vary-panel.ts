@@ -26,7 +26,7 @@ const SETTLE_MS = 150;
 
 const numberInputs = (calc: CalculatorDefinition) => calc.inputs.filter((d): d is NumberInput => d.kind !== 'choice' && d.kind !== 'text');
 
-function el<K extends keyof HTMLElementTagNameMap>(tag: K, cls: string, text?: string): HTMLElementTagNameMap[K] {
+function make<K extends keyof HTMLElementTagNameMap>(tag: K, cls: string, text?: string): HTMLElementTagNameMap[K] {
   const e = document.createElement(tag);
   e.className = cls;
   if (text !== undefined) e.textContent = text;
@@ -36,8 +36,8 @@ function el<K extends keyof HTMLElementTagNameMap>(tag: K, cls: string, text?: s
 export function attachVary(host: VaryHost): void {
   const calc = host.calc!;
   const uid = host.id || `c-${calc.id}`;
-  const toggle = el('label', 'vary-toggle no-print');
-  const on = el('input', 'vary-on');
+  const toggle = make('label', 'vary-toggle no-print');
+  const on = make('input', 'vary-on');
   on.type = 'checkbox';
   toggle.append(on, ' Tolerances: show the range of every result');
   host.querySelector('.units-switch')?.after(toggle);
@@ -45,15 +45,15 @@ export function attachVary(host: VaryHost): void {
   for (const def of numberInputs(calc)) {
     const field = host.querySelector<HTMLElement>(`.field[data-key="${CSS.escape(def.key)}"]`);
     if (!field) continue;
-    const row = el('div', 'tol-row');
+    const row = make('div', 'tol-row');
     row.hidden = true;
     const id = `${uid}-${def.key}-tol`;
-    const label = el('label', 'tol-label', 'Tolerance');
+    const label = make('label', 'tol-label', 'Tolerance');
     label.htmlFor = id;
-    const box = el('input', 'tol');
+    const box = make('input', 'tol');
     Object.assign(box, { type: 'text', id, name: `${def.key}.tol`, placeholder: '±15% or min..max', autocomplete: 'off' });
-    const unit = el('span', 'tol-unit');
-    const msg = el('p', 'tol-msg');
+    const unit = make('span', 'tol-unit');
+    const msg = make('p', 'tol-msg');
     msg.id = `${id}-msg`;
     msg.setAttribute('aria-live', 'polite');
     box.setAttribute('aria-describedby', msg.id);
@@ -61,7 +61,7 @@ export function attachVary(host: VaryHost): void {
     (field.querySelector('.field-row') ?? field.lastElementChild)?.after(row);
     boxes.set(def.key, { row, box, unit, msg });
   }
-  const method = el('p', 'env-method');
+  const method = make('p', 'env-method');
   method.setAttribute('role', 'status');
   host.querySelector('.calc-results .out-table')?.after(method);
 
@@ -133,25 +133,26 @@ export function attachVary(host: VaryHost): void {
   function render(e: EnvelopeResult): void {
     clear('');
     const label = (key: string) => calc.inputs.find((d) => d.key === key)?.label ?? key;
-    const ends = (d: Readonly<Record<string, string>>) => Object.entries(d).map(([k, v]) => `${label(k)} ${v}`).join(', ') || 'no varied input';
+    const ends = (d: Readonly<Record<string, string>>) => Object.entries(d).map(([k, v]) => `${label(k)} ${v}`).join(', ') || 'none (constant)';
     const table = host.querySelector('.calc-results .out-table');
-    const head = el('thead', 'env-head');
+    const head = make('thead', 'env-head');
     const tr = document.createElement('tr');
-    for (const t of ['Result', 'Nominal', 'Unit', 'Range (min – max)', 'Set by (at min; at max)']) { const th = el('th', '', t); th.scope = 'col'; tr.append(th); }
+    for (const t of ['Result', 'Nominal', 'Unit', 'Range (min – max)', 'Set by']) { const th = make('th', '', t); th.scope = 'col'; tr.append(th); }
     head.append(tr);
     table?.prepend(head);
     for (const o of calc.outputs) {
       const row = host.querySelector<HTMLElement>(`tr[data-out="${CSS.escape(o.key)}"]`);
       if (!row) continue;
       const b = e.bounds[o.key];
-      const env = el('td', 'env');
-      const drv = el('td', 'drv');
+      const env = make('td', 'env');
+      const drv = make('td', 'drv');
       if (b && o.kind !== 'text') {
         const u = displayUnit(o.kind, host.system);
         env.textContent = `${formatNumber(fromSI(b.min, u), o.digits ?? 4)} – ${formatNumber(fromSI(b.max, u), o.digits ?? 4)}`;
         env.dataset.min = String(b.min);
         env.dataset.max = String(b.max);
-        drv.textContent = `${ends(b.minDrivers)}; ${ends(b.maxDrivers)}`;
+        // one line per end: "min: Moving mass high, Damping coefficient low"
+        drv.append(make('span', 'drv-end', `min: ${ends(b.minDrivers)}`), document.createElement('br'), make('span', 'drv-end', `max: ${ends(b.maxDrivers)}`));
       } else env.textContent = '—';
       row.append(env, drv);
     }
