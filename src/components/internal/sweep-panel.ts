@@ -49,11 +49,10 @@ export function attachSweep(host: VaryHost): void {
   controls.append(labelled('Input', input), labelled('from', lo), labelled('to', hi), unit, labelled('Result', output), draw);
   const msg = make('p', 'sweep-msg');
   msg.setAttribute('role', 'status');
+  // the figure is made on the first Draw: a sheet printed before waits for every chart canvas to be drawn
   const fig = make('figure', 'chart');
   fig.dataset.chart = 'sweep';
-  fig.append(make('figcaption', ''), make('div', 'chart-canvas'), make('p', 'chart-summary'));
-  fig.hidden = true;
-  box.append(controls, msg, fig);
+  box.append(controls, msg);
   host.querySelector('details.calc-records')?.before(box);
   // these controls change only the sweep: the element need not recompute
   for (const t of ['input', 'change']) controls.addEventListener(t, (e) => e.stopPropagation());
@@ -110,7 +109,7 @@ export function attachSweep(host: VaryHost): void {
       return;
     }
     msg.textContent = `${SWEEP_POINTS} points and the nominal value; the other inputs as entered above.`;
-    fig.hidden = false;
+    if (!fig.isConnected) { fig.append(make('figcaption', ''), make('div', 'chart-canvas'), make('p', 'chart-summary')); box.append(fig); }
     fig.querySelector('figcaption')!.textContent = spec.title;
     if (!group) {
       const { ChartGroup } = await import('./chart-view.ts');
