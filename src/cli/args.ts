@@ -3,6 +3,8 @@ export interface ParsedArgs {
   readonly positionals: string[];
   readonly flags: Map<string, string | true>;
   readonly inputs: [string, string][];
+  /** `--vary key=tolerance` pairs (calc only: tolerance envelopes). */
+  readonly vary: [string, string][];
 }
 
 export class UsageError extends Error {
@@ -23,12 +25,14 @@ export function requireKnownOptions(command: string, args: ParsedArgs, options: 
     throw new UsageError(`${command} does not take --${k}; its options: ${list}${takesInputs ? ', --in key=value' : ''}`);
   }
   if (!takesInputs && args.inputs.length) throw new UsageError(`${command} does not take --in`);
+  if (args.vary.length && !options.includes('vary')) throw new UsageError(`${command} does not take --vary`);
 }
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const positionals: string[] = [];
   const flags = new Map<string, string | true>();
   const inputs: [string, string][] = [];
+  const vary: [string, string][] = [];
   for (let i = 0; i < argv.length; i++) {
     const a = argv[i]!;
     if (a === '--in' || a === '-i') {
@@ -37,6 +41,12 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
       const eq = kv.indexOf('=');
       if (eq <= 0) throw new UsageError(`--in ${kv}: expected key=value`);
       inputs.push([kv.slice(0, eq), kv.slice(eq + 1)]);
+    } else if (a === '--vary' || a.startsWith('--vary=')) {
+      const kv = a === '--vary' ? argv[++i] : a.slice('--vary='.length);
+      if (kv === undefined) throw new UsageError('--vary needs key=±15% or key=lo..hi');
+      const eq = kv.indexOf('=');
+      if (eq <= 0) throw new UsageError(`--vary ${kv}: expected key=±15% or key=lo..hi`);
+      vary.push([kv.slice(0, eq), kv.slice(eq + 1)]);
     } else if (a.startsWith('--')) {
       const eq = a.indexOf('=');
       if (eq > 0) flags.set(a.slice(2, eq), a.slice(eq + 1));
@@ -48,5 +58,5 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
       }
     } else positionals.push(a);
   }
-  return { positionals, flags, inputs };
+  return { positionals, flags, inputs, vary };
 }

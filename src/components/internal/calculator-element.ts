@@ -56,6 +56,8 @@ export class CalculatorElement extends HTMLElement {
       if (study) void study.then((s) => { s.attach(this); this.dataset.study = ''; });
     }
     this.dataset.ready = '';
+    // tolerances, result ranges and the sweep chart (generic, from the definition): src/calculators/envelope/
+    void import('./calc-tools.ts').then((m) => m.attachTools(this));
   }
 
   private field(key: string): HTMLElement | null {
