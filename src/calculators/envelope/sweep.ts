@@ -4,6 +4,7 @@
  * Points whose evaluation fails, or where the output is absent, are left out and counted.
  */
 import { ComputationError, DampbookError, InputRangeError } from '../../core/errors.ts';
+import { maxOf, minOf } from '../../core/numeric/index.ts';
 import { q } from '../quantityText.ts';
 import { evaluate } from '../evaluate.ts';
 import type { CalculatorDefinition, ChartSpec, Values } from '../types.ts';
@@ -54,8 +55,8 @@ export function sweepChart(calc: CalculatorDefinition, s: Sweep): ChartSpec {
   const inDef = calc.inputs.find((d) => d.key === s.input)!;
   const outDef = calc.outputs.find((o) => o.key === s.output)!;
   if (inDef.kind === 'choice' || inDef.kind === 'text' || outDef.kind === 'text') throw new TypeError('sweepChart: number input and numeric output only');
-  const lo = Math.min(...s.y);
-  const hi = Math.max(...s.y);
+  const lo = minOf(s.y);
+  const hi = maxOf(s.y);
   const gap = s.missing ? ` ${s.missing} of ${s.x.length + s.missing} points had no value and are left out.` : '';
   return {
     id: 'sweep',
