@@ -4,5 +4,8 @@ import { impact } from './impact.ts';
 import { recordedMotionCalc } from './recordedMotionCalc.ts';
 import { roadPower } from './roadPower.ts';
 import { structuralDampers } from './structuralDampersCalc.ts';
+import { propertyBoundsCalc } from './propertyBoundsCalc.ts';
+import { testProtocolCalc } from './testProtocolCalc.ts';
+import { randomDutyCalc } from './randomDutyCalc.ts';
 
-export const dutyCalculators: readonly CalculatorDefinition[] = [harmonicDutyCalc, roadPower, impact, structuralDampers, recordedMotionCalc];
+export const dutyCalculators: readonly CalculatorDefinition[] = [harmonicDutyCalc, roadPower, impact, structuralDampers, recordedMotionCalc, propertyBoundsCalc, testProtocolCalc, randomDutyCalc];

@@ -19,3 +19,7 @@ export { blockPower, MAX_POWER_BLOCKS, type BlockPower } from './blockPower.ts';
 export { recordedMotion, type RecordedMotionResult } from './recordedMotion.ts';
 export { roadDamperPower } from './roadDamperPower.ts';
 export { loopMetrics, loopDisplacement, BETA_MIN_END_FORCE, type LoopMetrics, type CycleLoop } from './loopMetrics.ts';
+export { propertyBounds, type PropertyFactors, type PropertyBounds } from './propertyBounds.ts';
+export { narrowBandStroke, spectralStroke, type RandomStroke } from './randomStroke.ts';
+export { protocolHeating, MAX_PROTOCOL_CYCLES, PROTOCOL_T_MAX, type ProtocolBlock, type ProtocolBody, type ProtocolRun } from './protocolHeating.ts';
+export { parseProtocol, MAX_PROTOCOL_ROWS } from './protocolText.ts';
