@@ -8,7 +8,7 @@ import { describeLaw, lawFromValues, lawInputs, lawStudy } from '../damperLaw/in
 import { q } from '../quantityText.ts';
 
 /** TW-402 Hall C: a storm's stroke spectrum, a narrow band about the 2 Hz sway mode (invented demo data, σ_x ≈ 0.5 mm). */
-const DEMO_PSD = 'f [Hz], S [m²/Hz]\n1.6, 0\n1.8, 3.0e-7\n1.9, 1.0e-6\n2.0, 2.2e-6\n2.1, 1.0e-6\n2.2, 3.0e-7\n2.4, 0';
+const DEMO_PSD = 'f [Hz], S [m²/Hz]\n1.6, 0\n1.8, 1.5e-7\n1.9, 5.0e-7\n2.0, 1.1e-6\n2.1, 5.0e-7\n2.2, 1.5e-7\n2.4, 0';
 const MAX_PSD_ROWS = 2000;
 
 // the hysteretic law is defined for harmonic motion only; no series spring in a Gaussian power model
