@@ -1,4 +1,5 @@
 import { parseProtocol, protocolHeating, type ProtocolRun } from '../../core/duty/index.ts';
+import { ZERO_CELSIUS } from '../../core/constants.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { describeLaw, lawFromValues, lawInputs, lawStudy } from '../damperLaw/inputs.ts';
 import { FLUID_SOURCES, spanWarning } from '../thermal/fluidInputs.ts';
@@ -59,7 +60,7 @@ export const testProtocolCalc = defineCalculator({
     if (temp) {
       for (const w of [spanWarning(temp.fluid, run.Tpeak, 'peak temperature'), spanWarning(temp.fluid, num(values, 'Tamb'), 'start temperature')]) if (w) warnings.push(w);
     } else warnings.push('No temperature law: the energy per cycle does not change; choose the fade law to see the heating effect.');
-    if (run.Tpeak > 343.15) warnings.push(`The damper reaches ${(run.Tpeak - 273.15).toFixed(0)} °C: check the seals and fluid rating with the maker, and rests in the protocol.`);
+    if (run.Tpeak > ZERO_CELSIUS + 70) warnings.push(`The damper reaches ${(run.Tpeak - ZERO_CELSIUS).toFixed(0)} °C: check the seals and fluid rating with the maker, and rests in the protocol.`);
     return {
       outputs: {
         verdict: run.maxChange <= limit ? 'within the limit' : 'exceeds the limit',
