@@ -42,6 +42,14 @@ describe('random-duty', () => {
     expect(() => evaluate(randomDutyCalc, { ...CHECK, spectrum: 'psd', psd: '0.2, 1e-6\n0.1, 1e-6' })).toThrow(InputRangeError);
     expect(() => evaluate(randomDutyCalc, { ...CHECK, spectrum: 'psd', psd: '0.2, 0\n0.3, 0' })).toThrow(/variance/);
   });
+  it('bilinear law: equal slopes give cσ_v² (closed form); zero slopes below a knee far above σ_v give 0, and a denormal stroke does not stall the quadrature', () => {
+    const r = evaluate(randomDutyCalc, { ...CHECK, law: 'bilinear', c1: 1e6, c2: 1e6, c1c: 1e6, c2c: 1e6, vknee: 0.001 });
+    expectClose({ label: 'P', computed: r.outputs.P as number, expected: 1e6 * (2 * Math.PI * 0.2 * 0.002) ** 2, tol: 1e-9, why: 'quadrature to 1e-12 of the largest |F·v|' });
+    const z = evaluate(randomDutyCalc, { ...CHECK, law: 'bilinear', c1: 0, c2: 1e6, c1c: 0, c2c: 1e6, vknee: 1 });
+    expect(z.outputs.P).toBe(0);
+    const tiny = evaluate(randomDutyCalc, { ...CHECK, sx: 5e-324, law: 'bilinear', c1: 0, c2: 1200, c1c: 1200, c2c: 1e-90, vknee: 5e-324 });
+    expect(Number.isFinite(tiny.outputs.P)).toBe(true);
+  });
   it('the hysteretic law is not offered (it has no meaning for random motion)', () => {
     const law = randomDutyCalc.inputs.find((i) => i.key === 'law');
     expect(law && 'options' in law ? law.options.map((o) => o.value) : []).not.toContain('hysteretic');
