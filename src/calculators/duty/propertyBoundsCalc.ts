@@ -28,7 +28,7 @@ function temperatureFactors(values: Values) {
 
 const factor = (key: string, label: string, def: number, upper: boolean, help: string) => ({
   key, label, kind: 'dimensionless' as const, default: def,
-  min: upper ? 1 : 0, max: upper ? 5 : 1, minExclusive: !upper, help,
+  min: upper ? 1 : 0.2, max: upper ? 5 : 1, help,
 });
 
 /** Upper- and lower-bound damper properties from property modification factors (and optionally temperature). */
@@ -69,7 +69,7 @@ export const propertyBoundsCalc = defineCalculator({
       for (const w of [spanWarning(temp.fluid, temp.Tmin, 'lowest temperature'), spanWarning(temp.fluid, temp.Thot, 'hottest temperature')]) if (w) warnings.push(w);
       if (temp.lamTmax < 1 || temp.lamTmin > 1) warnings.push('T_ref lies outside the service range: a temperature factor crosses 1. Check that the nominal properties hold at T_ref.');
     }
-    if (lamMax / lamMin > 2) warnings.push(`Upper bound ${(lamMax / lamMin).toFixed(2)} times the lower: check the factors with the damper maker before designing to so wide a band.`);
+    if (lamMax / lamMin > 2) warnings.push(`Upper bound ${(lamMax / lamMin).toPrecision(3)} times the lower: check the factors with the damper maker before designing to so wide a band.`);
     const C = num(values, 'C');
     return { outputs: { lamMax, lamMin, Cupper: C * lamMax, Clower: C * lamMin, lamTmax: temp?.lamTmax, lamTmin: temp?.lamTmin }, warnings };
   },

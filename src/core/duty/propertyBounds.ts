@@ -6,13 +6,13 @@
 import { requireInRange } from '../errors.ts';
 
 export interface PropertyFactors {
-  /** Aging and environmental factors, λ_ae,max ≥ 1 and λ_ae,min ∈ (0, 1]. */
+  /** Aging and environmental factors, λ_ae,max ≥ 1 and λ_ae,min ∈ [0.2, 1]. */
   readonly lamAeMax: number;
   readonly lamAeMin: number;
-  /** Test factors (heating, rate, scragging in the prototype tests), max ≥ 1, min ∈ (0, 1]. */
+  /** Test factors (heating, rate, scragging in the prototype tests), max ≥ 1, min ∈ [0.2, 1]. */
   readonly lamTestMax: number;
   readonly lamTestMin: number;
-  /** Specification (manufacturing) tolerance, max ≥ 1, min ∈ (0, 1]; ±15 % is usual for fluid viscous dampers. */
+  /** Specification (manufacturing) tolerance, max ≥ 1, min ∈ [0.2, 1]; ±15 % is usual for fluid viscous dampers. */
   readonly lamSpecMax: number;
   readonly lamSpecMin: number;
   /** System property adjustment factor a, [0.5, 1]; 0.75 for all but essential facilities (1.0 there). */
@@ -25,7 +25,8 @@ export interface PropertyBounds {
 }
 
 const UPPER = { min: 1, max: 5 };
-const LOWER = { min: 0, max: 1, minExclusive: true };
+// a minimum factor below 0.2 describes a damper that has all but failed, not a property bound
+const LOWER = { min: 0.2, max: 1 };
 
 /**
  * Maximum and minimum property modification factors.
@@ -36,7 +37,7 @@ const LOWER = { min: 0, max: 1, minExclusive: true };
  * The adjustment a reduces only the aging and environmental part: all those effects seldom reach
  * their extremes at once.
  *
- * @param p factors: the max factors in [1, 5], the min factors in (0, 1], a in [0.5, 1]
+ * @param p factors: the max factors in [1, 5], the min factors in [0.2, 1], a in [0.5, 1]
  * @throws InputRangeError naming the factor out of range
  * @example propertyBounds({ lamAeMax: 1.1, lamTestMax: 1.05, lamSpecMax: 1.15, lamAeMin: 1, lamTestMin: 0.95, lamSpecMin: 0.85, adjust: 0.75 }) // { lamMax: 1.2981, lamMin: 0.8075 }
  * @source asce7_16 §17.2.8.4, eqs. 17.2-1 and 17.2-2, and §18.2.4.5 (section and equation numbers from memory)
