@@ -33,6 +33,8 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('movingMass', 'mass', 'Mass that moves onto an end stop, payload included.'),
   q('impactSpeed', 'velocity', 'Speed at which the moving mass meets the end stop.'),
   q('stopStroke', 'length', 'Working stroke of the end-stop damper.'),
+  q('propertyFactorMax', 'dimensionless', 'Maximum property modification factor λ_max of the damper: upper-bound properties = λ_max × nominal.'),
+  q('propertyFactorMin', 'dimensionless', 'Minimum property modification factor λ_min of the damper: lower-bound properties = λ_min × nominal.'),
   // damper law
   q('damperLaw', 'choice', 'How the damper force depends on its velocity (linear, power, …).'),
   q('dampingCoefficient', 'damping', 'Linear damping coefficient of the damper, at the reference (dyno) temperature.'),

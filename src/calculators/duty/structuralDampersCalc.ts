@@ -35,6 +35,8 @@ export const structuralDampers = defineCalculator({
     { key: 'cSteel', label: 'Specific heat of steel', kind: 'specificHeat', default: 460, min: 100, max: 2000, help: 'Carbon steels 430–480 J/(kg·K) near room temperature.' },
     { key: 'mFluid', label: 'Fluid mass of one damper', kind: 'mass', default: 3, min: 0, max: 1e4, help: 'Silicone or other working fluid.' },
     { key: 'cFluid', label: 'Specific heat of fluid', kind: 'specificHeat', default: 1500, min: 100, max: 5000, help: 'Silicone fluids about 1500 J/(kg·K).' },
+    { key: 'lamMax', label: 'Maximum property modification factor λ_max', kind: 'dimensionless', default: 1, min: 1, max: 5, help: 'From the property-bounds page; 1 = nominal. The upper-bound force is λ_max times the nominal.' },
+    { key: 'lamMin', label: 'Minimum property modification factor λ_min', kind: 'dimensionless', default: 1, min: 0, max: 1, minExclusive: true, help: 'From the property-bounds page; 1 = nominal. The lower-bound damping is λ_min times the nominal.' },
   ],
   outputs: [
     { key: 'stroke', label: 'Damper stroke amplitude δ', kind: 'length' },
@@ -55,6 +57,10 @@ export const structuralDampers = defineCalculator({
     { key: 'dT', label: 'Adiabatic temperature rise per event', kind: 'temperatureDifference' },
     { key: 'shear', label: 'Storey shear from the dampers at peak velocity', kind: 'force' },
     { key: 'Cdamper', label: 'Heat capacity of one damper', kind: 'heatCapacity', help: 'm_steel·c_steel + m_fluid·c_fluid (handed to the warm-up page).' },
+    { key: 'FpeakUpper', label: 'Peak damper force, upper-bound properties', kind: 'force', help: 'λ_max·F_peak at the same drift: for damper, brace and connection design.' },
+    { key: 'shearUpper', label: 'Storey shear from the dampers, upper bound', kind: 'force' },
+    { key: 'betaSupLower', label: 'Supplemental damping ratio, lower-bound properties', kind: 'dimensionless', digits: 3, help: 'λ_min·β_sup at the same drift: the damping that may be credited.' },
+    { key: 'betaEffLower', label: 'Effective damping ratio, lower bound', kind: 'dimensionless', digits: 3 },
   ],
   handoffs: [{ key: 'profile', help: 'The event as a power profile for the warm-up page: P for the duration, then off.', maxLength: 200 }],
   compute(values) {
@@ -64,6 +70,8 @@ export const structuralDampers = defineCalculator({
     const Eevent = r.Wj * cycles;
     const heat = num(values, 'mSteel') * num(values, 'cSteel') + num(values, 'mFluid') * num(values, 'cFluid');
     const dT = adiabaticRise(Eevent, heat);
+    const lamMax = num(values, 'lamMax');
+    const lamMin = num(values, 'lamMin');
     const warnings: string[] = [];
     if (r.betaSup > 0.3) warnings.push('Supplemental damping above 30 %: the codes limit how much of it the linear procedures may credit; use a nonlinear analysis.');
     if (dT > 50) warnings.push(`Adiabatic rise ${dT.toFixed(0)} K per event: check the fluid, seals and the damper's rated temperature with its maker.`);
@@ -72,6 +80,9 @@ export const structuralDampers = defineCalculator({
         stroke: r.stroke, vPeak: r.vPeak, Fpeak: r.Fpeak, Wj: r.Wj, Wtotal: s.n * r.Wj, Wk: r.Wk,
         betaSup: r.betaSup, betaEff: num(values, 'beta0') + r.betaSup, P: r.Pdamper, cycles, Eevent, dT,
         shear: s.n * r.Fpeak * Math.cos(s.theta), Cdamper: heat,
+        // C enters F and W_j linearly: the bounds scale the nominal results (same drift and period)
+        FpeakUpper: lamMax * r.Fpeak, shearUpper: lamMax * s.n * r.Fpeak * Math.cos(s.theta),
+        betaSupLower: lamMin * r.betaSup, betaEffLower: num(values, 'beta0') + lamMin * r.betaSup,
       },
       warnings,
       handoff: { profile: formatPowerProfile({ t: [0, num(values, 'duration')], P: [r.Pdamper] }) },
@@ -122,11 +133,23 @@ export const structuralDampers = defineCalculator({
       source: { key: 'fema274', locator: '§9.3 fluid viscous devices, λ(α) (from memory)' },
       provenance: 'from memory',
     },
+    {
+      name: 'Bounds λ_max = 1.2981, λ_min = 0.8075 on the linear case: F = 1.2981·C·ωδ, β = 0.8075·π/100',
+      inputs: { Fref: 1e5, vref: 1, alpha: 1, n: 1, theta: 0, drift: 0.02, T: 1, k: 1e7, lamMax: 1.2980625, lamMin: 0.8075 },
+      expected: { FpeakUpper: 1.2980625 * 1e5 * 2 * Math.PI * 0.02, betaSupLower: (0.8075 * Math.PI) / 100, Fpeak: 1e5 * 2 * Math.PI * 0.02 },
+      tolerance: 1e-9, why: 'closed form: the force and W_j are linear in C, so the bounds scale them',
+      source: { key: 'asce7_16', locator: '§18.2.4.5 upper- and lower-bound properties; §17.2.8.4 factors (from memory)' },
+      provenance: 'from memory',
+    },
   ],
   sources: [
     { key: 'fema356', locator: '§9.3 energy method, eqs. 9-36/9-37 (from memory)' },
     { key: 'asce41_17', locator: '§14.3 energy dissipation systems (from memory)' },
     { key: 'fema274', locator: '§9.3 (from memory)' },
     { key: 'soong1997', locator: 'fluid viscous dampers in braces (from memory)' },
+    { key: 'asce7_16', locator: '§18.2.4.5 upper- and lower-bound damper properties (from memory)' },
   ],
+  study: {
+    inputs: { lamMax: 'propertyFactorMax', lamMin: 'propertyFactorMin' },
+  },
 });

@@ -45,13 +45,15 @@ export function gaussianMeanPower(law: DamperLaw, sigmaV: number): number {
     case 'hysteretic':
       throw new ComputationError('a hysteretic (loss-factor) law is defined for harmonic motion only');
     case 'bilinear': {
-      const pdf = (v: number) => Math.exp((-0.5 * v * v) / (sigmaV * sigmaV)) / (sigmaV * Math.sqrt(2 * Math.PI));
-      const f = (v: number) => damperForce(law, v) * v * pdf(v);
-      const cuts = [-9 * sigmaV, ...lawBreakpoints(law).filter((b) => Math.abs(b) < 9 * sigmaV), 9 * sigmaV].sort((a, b) => a - b);
+      // in u = v/σ_v and scaled by the largest |F·v| at ±σ, ±3σ, ±9σ, so the tolerance can neither
+      // underflow (a tiny σ_v or slope) nor be zero (zero low-speed slopes): the integrand is O(1)
+      const scale = Math.max(...[1, 3, 9].flatMap((k) => [k, -k]).map((u) => Math.abs(damperForce(law, u * sigmaV) * u * sigmaV)));
+      if (!(scale > 0)) return 0;
+      const g = (u: number) => ((damperForce(law, u * sigmaV) * u * sigmaV) / scale) * Math.exp(-0.5 * u * u) / Math.sqrt(2 * Math.PI);
+      const cuts = [-9, ...lawBreakpoints(law).map((b) => b / sigmaV).filter((u) => Math.abs(u) < 9), 9].sort((a, b) => a - b);
       let sum = 0;
-      const scale = Math.abs(damperForce(law, sigmaV) * sigmaV) + Math.abs(damperForce(law, -sigmaV) * sigmaV);
-      for (let i = 0; i + 1 < cuts.length; i++) sum += adaptiveSimpson(f, cuts[i]!, cuts[i + 1]!, scale * 1e-12, 40);
-      return sum;
+      for (let i = 0; i + 1 < cuts.length; i++) sum += adaptiveSimpson(g, cuts[i]!, cuts[i + 1]!, 1e-12, 40);
+      return sum * scale;
     }
   }
 }

@@ -29,3 +29,7 @@ export { loopMetrics, loopDisplacement, BETA_MIN_END_FORCE, type LoopMetrics, ty
 export { dampingCorrection, ETA_FLOOR } from './dampingModification.ts';
 export { storeyDamping, type DamperStorey, type StoreyDampingInput, type StoreyDamping, type StoreyDuty } from './storeyDamping.ts';
 export { dampedDemand, type DampedDemand } from './storeyDemand.ts';
+export { propertyBounds, type PropertyFactors, type PropertyBounds } from './propertyBounds.ts';
+export { narrowBandStroke, spectralStroke, type RandomStroke } from './randomStroke.ts';
+export { protocolHeating, MAX_PROTOCOL_CYCLES, PROTOCOL_T_MAX, type ProtocolBlock, type ProtocolBody, type ProtocolRun } from './protocolHeating.ts';
+export { parseProtocol, MAX_PROTOCOL_ROWS } from './protocolText.ts';

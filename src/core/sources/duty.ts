@@ -18,5 +18,6 @@ export const duty = {
   meriam2012: { kind: 'book', citation: 'J. L. Meriam and L. G. Kraige, Engineering Mechanics: Dynamics, 7th ed., Wiley, 2012.' },
   asce7_16: { kind: 'standard', citation: 'ASCE/SEI 7-16, Minimum Design Loads and Associated Criteria for Buildings and Other Structures, American Society of Civil Engineers, 2017.' },
   en1998_1: { kind: 'standard', citation: 'EN 1998-1:2004, Eurocode 8: Design of structures for earthquake resistance — Part 1: General rules, seismic actions and rules for buildings, CEN, 2004.' },
+  rice1944: { kind: 'paper', citation: 'S. O. Rice, Mathematical analysis of random noise, Bell System Technical Journal 23(3), 282–332, 1944, and 24(1), 46–156, 1945.' },
   fornberg1988: { kind: 'paper', citation: 'B. Fornberg, Generation of finite difference formulas on arbitrarily spaced grids, Math. Comp. 51(184), 699–706, 1988.' },
 } as const satisfies Record<string, Source>;
