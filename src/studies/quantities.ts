@@ -86,7 +86,7 @@ export const STUDY_QUANTITIES: readonly StudyQuantity[] = [
   q('timeInService', 'time', 'Time the damper has already served under the duty of the study.'),
   q('sealLife', 'time', 'Life of the seal (or oil) under the temperature history of the duty, repeated.'),
   q('equivalentAgeingTemperature', 'temperature', 'Constant temperature that ages the seal as much as the duty\'s temperature history in the same time.'),
-  q('solarAbsorptivity', 'dimensionless', 'Share of the sunlight falling on the body that it absorbs (α_s of its finish).'),
+  q('solarAbsorptivity', 'fraction', 'Share of the sunlight falling on the body that it absorbs (α_s of its finish).'),
   q('solarIrradiance', 'heatFlux', 'Sunlight on a plane square to the beam at the damper (about 1000 W/m² at a clear noon).'),
   q('thermalModel', 'choice', 'One node (oil at the body temperature) or two nodes (oil and body joined by G_ob).'),
   q('oilBodyConductance', 'thermalConductance', 'Conductance G_ob from the oil to the body (inner film × wetted wall, + piston and rod).'),

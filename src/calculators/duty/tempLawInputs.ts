@@ -17,7 +17,7 @@ export function tempLawInputs(help: string): InputDef[] {
     ], help },
     ...onlyWhen(ON, [
       { key: 'Tref', label: 'Reference temperature T_ref', kind: 'temperature', default: 293.15, min: 233.15, max: 423.15, help: 'Temperature at which the nominal damper properties hold (prototype tests are often at 20 °C).' },
-      { key: 'share', label: 'Viscous share s at T_ref', kind: 'dimensionless', default: 0.3, min: 0, max: 1, help: 'Part of the damper force that follows the fluid viscosity; the rest (orifices) does not. Fit it on the fade-fit page; 0.3 is a guess.' },
+      { key: 'share', label: 'Viscous share s at T_ref', kind: 'fraction', default: 0.3, min: 0, max: 1, help: 'Part of the damper force that follows the fluid viscosity; the rest (orifices) does not. Fit it on the fade-fit page; 0.3 is a guess.' },
       ...fadeLawInputs(),
       ...fluidInputs(),
     ]),

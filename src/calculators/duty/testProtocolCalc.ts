@@ -38,7 +38,7 @@ export const testProtocolCalc = defineCalculator({
     { key: 'Cth', label: 'Heat capacity of the damper C', kind: 'heatCapacity', default: 22.9e3, min: 0, max: 1e9, minExclusive: true, required: true, help: 'Σ m·c of cylinder, rod, fittings and fluid (the structural-dampers page reports it).' },
     { key: 'UA', label: 'Heat-loss conductance UA', kind: 'thermalConductance', default: 5, min: 0, max: 1e5, help: '(h_conv + h_r)·A of the body in the test rig (body-cooling page); 0 = adiabatic, the upper bound.' },
     { key: 'Tamb', label: 'Air and start temperature T_amb', kind: 'temperature', default: 293.15, min: 223.15, max: 333.15, help: 'The damper starts at the air temperature.' },
-    { key: 'limit', label: 'Allowed change of energy per cycle', kind: 'dimensionless', default: 0.15, min: 0, max: 1, minExclusive: true, help: 'Largest change of a cycle\'s energy from its value at the start temperature the test allows (±15 % is a common acceptance limit; take the governing one from the test specification).' },
+    { key: 'limit', label: 'Allowed change of energy per cycle', kind: 'fraction', default: 0.15, min: 0, max: 1, minExclusive: true, help: 'Largest change of a cycle\'s energy from its value at the start temperature the test allows (±15 % is a common acceptance limit; take the governing one from the test specification).' },
   ],
   outputs: [
     { key: 'verdict', label: 'Change of energy per cycle against the limit', kind: 'text' },

@@ -19,7 +19,7 @@ export function heatPathInputs(when?: Condition): InputDef[] {
     { key: 'kMount', label: 'Stub conductivity k_m', kind: 'thermalConductivity', default: 50, min: 0.1, max: 500, when: MOUNTS, help: 'Carbon steel ≈ 50, stainless ≈ 15, aluminium ≈ 200 W/(m·K).' },
     { key: 'hMount', label: 'Coefficient on the stub h_m', kind: 'heatTransferCoefficient', default: 10, min: 0, max: 1000, when: MOUNTS, help: 'Convection plus radiation on the stub surface; about the body’s h_conv + h_r (5–15 W/(m²·K) in still air).' },
     { key: 'sun', label: 'Sun or a hot beam on the body', kind: 'choice', default: 'none', options: [{ value: 'none', label: 'none (shaded or indoors)' }, { value: 'sun', label: 'in sunlight (absorbed gain)' }], help: 'Sunlight absorbed on the projected area D·L adds heat the body must also shed.' },
-    { key: 'alphaSun', label: 'Solar absorptivity α_s', kind: 'dimensionless', default: 0.6, min: 0, max: 1, when: SUN, help: 'Share of sunlight absorbed: white paint ≈ 0.2–0.3, grey ≈ 0.6–0.75, black ≈ 0.95, bright zinc ≈ 0.6 (values vary with the finish; from memory).' },
+    { key: 'alphaSun', label: 'Solar absorptivity α_s', kind: 'fraction', default: 0.6, min: 0, max: 1, when: SUN, help: 'Share of sunlight absorbed: white paint ≈ 0.2–0.3, grey ≈ 0.6–0.75, black ≈ 0.95, bright zinc ≈ 0.6 (values vary with the finish; from memory).' },
     { key: 'irradiance', label: 'Irradiance G_s square to the axis', kind: 'heatFlux', default: 1000, min: 0, max: 1400, when: SUN, help: 'Sunlight on a plane square to the beam: about 1000 W/m² at noon on a clear day, less through haze or at a low sun. The projected area is D·L (beam square to the axis).' },
   ];
   return when ? onlyWhen(when, all) : all;

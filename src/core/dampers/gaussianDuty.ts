@@ -1,6 +1,7 @@
 import { ComputationError, POSITIVE, requireInRange } from '../errors.ts';
 import { adaptiveSimpson } from '../numeric/adaptiveSimpson.ts';
 import { gamma } from '../numeric/gamma.ts';
+import { maxOf } from '../numeric/index.ts';
 import { damperForce, lawBreakpoints } from './damperForce.ts';
 import type { DamperLaw } from './laws.ts';
 import { validateLaw } from './validateLaw.ts';
@@ -47,7 +48,7 @@ export function gaussianMeanPower(law: DamperLaw, sigmaV: number): number {
     case 'bilinear': {
       // in u = v/σ_v and scaled by the largest |F·v| at ±σ, ±3σ, ±9σ, so the tolerance can neither
       // underflow (a tiny σ_v or slope) nor be zero (zero low-speed slopes): the integrand is O(1)
-      const scale = Math.max(...[1, 3, 9].flatMap((k) => [k, -k]).map((u) => Math.abs(damperForce(law, u * sigmaV) * u * sigmaV)));
+      const scale = maxOf([1, 3, 9].flatMap((k) => [k, -k]).map((u) => Math.abs(damperForce(law, u * sigmaV) * u * sigmaV)));
       if (!(scale > 0)) return 0;
       const g = (u: number) => ((damperForce(law, u * sigmaV) * u * sigmaV) / scale) * Math.exp(-0.5 * u * u) / Math.sqrt(2 * Math.PI);
       const cuts = [-9, ...lawBreakpoints(law).map((b) => b / sigmaV).filter((u) => Math.abs(u) < 9), 9].sort((a, b) => a - b);
