@@ -3,6 +3,7 @@
  * `dampbook check` reads it) and every verification case reproduced by the core. Each case
  * names its own source and provenance in the page's frontmatter, repeated in the test name.
  */
+import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { readPages } from '../../src/cli/pages.ts';
 import { describeRow, verifyPage } from '../../src/content/verify.ts';
@@ -17,6 +18,10 @@ describe('demo handbook pages', () => {
   });
 
   describe.each(pages.map((p) => [p.file, p] as const))('%s', (_file, page) => {
+    it('has no control characters in its source (a "\\frac" or "\\tanh" written through a string escape became a form feed or a tab)', () => {
+      const bad = [...readFileSync(page.file, 'utf8').matchAll(/[\u0000-\u0009\u000b-\u001f\u007f]/g)].map((m) => `U+${m[0].charCodeAt(0).toString(16).padStart(4, '0')} at ${m.index}`);
+      expect(bad).toEqual([]);
+    });
     it('has valid frontmatter', () => {
       expect(page.errors).toEqual([]);
     });
