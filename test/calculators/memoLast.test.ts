@@ -19,8 +19,8 @@ describe('memoLast', () => {
     expect(f(big, 2)).toBe(a);
     expect(f(`${big}`, 2)).toBe(a); // an equal copy of the text is the same text
     expect(calls).toBe(1);
-    expect(f(big, 3)).toEqual({ len: 3_000_000 });
-    expect(f('y', 3)).toEqual({ len: 3 });
+    expect(f(big, 3)).toEqual({ len: 3_000_000 }); // the length of the 3-million-character text built above (common practice, no source)
+    expect(f('y', 3)).toEqual({ len: 3 }); // counts of calls: behaviour, no reference value (common practice, no source)
     expect(calls).toBe(3);
   });
 
@@ -30,7 +30,7 @@ describe('memoLast', () => {
     expect(() => f('bad')).toThrow('bad row');
     expect(() => f('bad')).toThrow('bad row');
     expect(calls).toBe(1);
-    expect(f('good')).toBe(4);
+    expect(f('good')).toBe(4); // 'good'.length (common practice, no source)
     expect(calls).toBe(2);
   });
 });
@@ -41,7 +41,7 @@ describe('calculators reading a record once', () => {
     const csv = sineRecord({ X: 0.02, f: 2, cycles: 20, rate: 400, columns: 'tx' });
     const first = evaluate(calc, { csv, layout: 'tx', law: 'linear', c: 1500 });
     const changed = evaluate(calc, { csv, layout: 'tx', law: 'linear', c: 3000 });
-    expect(changed.outputs.P as number).toBeCloseTo(2 * (first.outputs.P as number), 9); // P = c·v̄² (closed form: linear in c)
+    expect(changed.outputs.P as number).toBeCloseTo(2 * (first.outputs.P as number), 9); // P = c·v̄² (closed form, linear in c: Chopra, Dynamics of Structures, 5th ed., eq. 3.8.1, from memory)
     const other = evaluate(calc, { csv: `${csv}\n`, layout: 'tx', law: 'linear', c: 3000 });
     expect(other.outputs).toEqual(changed.outputs);
   });
@@ -50,8 +50,8 @@ describe('calculators reading a record once', () => {
     const calc = getCalculator('ring-down')!;
     const a = evaluate(calc, { m: 10 });
     const b = evaluate(calc, { m: 20 });
-    expect(b.outputs.zeta).toBe(a.outputs.zeta);
-    expect(b.outputs.c as number).toBeCloseTo(2 * (a.outputs.c as number), 9); // c = 2ζmω_n (closed form)
+    expect(b.outputs.zeta).toBe(a.outputs.zeta); // ζ comes from the record alone (Rao, Mechanical Vibrations, 6th ed., §2.6, log decrement; from memory)
+    expect(b.outputs.c as number).toBeCloseTo(2 * (a.outputs.c as number), 9); // c = 2ζmω_n (closed form; Rao, Mechanical Vibrations, 6th ed., §2.6, from memory)
     const bad = 't,x\n0,1\n';
     expect(() => evaluate(calc, { record: bad })).toThrow(/record/);
     expect(() => evaluate(calc, { record: bad, m: 30 })).toThrow(/record/);

@@ -4,6 +4,8 @@ import { adaptiveSimpson, adaptiveSimpsonVector } from '../../../src/core/numeri
 import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('adaptive Simpson on several integrands at once', () => {
+  // closed forms of elementary integrals (any calculus table, e.g. Abramowitz & Stegun, Handbook of
+  // Mathematical Functions, 1964, §4.3 and §4.2; from memory)
   it('∫₀^π sin = 2, ∫₀^π x² = π³/3, ∫₀^π e^{−x} = 1 − e^{−π} [closed form]', () => {
     const r = adaptiveSimpsonVector((x) => [Math.sin(x), x * x, Math.exp(-x)], 0, Math.PI, [1e-12, 1e-12, 1e-12]);
     expectClose({ label: 'sin', computed: r[0]!, expected: 2, tol: 1e-11 });
@@ -14,6 +16,8 @@ describe('adaptive Simpson on several integrands at once', () => {
     fc.assert(fc.property(fc.double({ min: 0.5, max: 20, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }), (k, w) => {
       const f1 = (x: number) => Math.cos(k * x) ** 2;
       const f2 = (x: number) => 1 / (w * w + (x - 1) ** 2); // a peak of width w at x = 1
+      // closed forms: ∫₀² cos²(kx) dx = 1 + sin(4k)/(4k); ∫₀² dx/(w² + (x−1)²) = 2·atan(1/w)/w
+      // (Gradshteyn & Ryzhik, Table of Integrals, 7th ed., 2.513 and 2.172; from memory)
       const exact1 = 1 + Math.sin(4 * k) / (4 * k);
       const exact2 = (Math.atan(1 / w) + Math.atan(1 / w)) / w;
       const [v1, v2] = adaptiveSimpsonVector((x) => [f1(x), f2(x)], 0, 2, [1e-9, 1e-9]);
