@@ -25,3 +25,18 @@ export function memoLast<A extends readonly unknown[], R>(fn: (...args: A) => R)
     }
   };
 }
+
+/**
+ * Once per values object: `charts(values, result)` receives the very object `compute` saw, so an
+ * expensive analysis (a record, a fit, an integration) shared by both runs once. Keyed weakly:
+ * a superseded values object and its analysis are collected together.
+ */
+export function oncePerValues<V extends object, R>(fn: (values: V) => R): (values: V) => R {
+  const seen = new WeakMap<V, R>();
+  return (values: V): R => {
+    if (seen.has(values)) return seen.get(values)!;
+    const r = fn(values);
+    seen.set(values, r);
+    return r;
+  };
+}

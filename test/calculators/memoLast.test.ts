@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/calculators/evaluate.ts';
-import { memoLast } from '../../src/calculators/memoLast.ts';
+import { memoLast, oncePerValues } from '../../src/calculators/memoLast.ts';
 import { getCalculator } from '../../src/calculators/registry.ts';
 import { sineRecord } from '../../src/calculators/duty/demoRecord.ts';
 
@@ -55,5 +55,21 @@ describe('calculators reading a record once', () => {
     const bad = 't,x\n0,1\n';
     expect(() => evaluate(calc, { record: bad })).toThrow(/record/);
     expect(() => evaluate(calc, { record: bad, m: 30 })).toThrow(/record/);
+  });
+});
+
+describe('oncePerValues', () => {
+  it('runs once per values object (compute and charts share it), again for a new object; an error is not kept', () => {
+    let calls = 0;
+    const f = oncePerValues((v: { n: number }) => { calls++; if (v.n < 0) throw new Error('negative'); return { twice: 2 * v.n }; });
+    const v = { n: 4 };
+    expect(f(v)).toBe(f(v)); // the same result object (behaviour; common practice, no source)
+    expect(calls).toBe(1);
+    expect(f({ n: 4 })).toEqual({ twice: 8 }); // a new object is analysed again: 2·4 = 8 (arithmetic)
+    expect(calls).toBe(2);
+    const bad = { n: -1 };
+    expect(() => f(bad)).toThrow('negative');
+    expect(() => f(bad)).toThrow('negative');
+    expect(calls).toBe(4);
   });
 });

@@ -7,19 +7,16 @@ import { demoDynoRecord, kelvinVoigtRecord, sineRecord } from './demoRecord.ts';
 import { LAW_LAYOUTS, loopCharts, loopInputs, loopOf, loopOutputs, loopResults } from './recordedMotionLoop.ts';
 import { lawFromValues, lawInputs } from '../damperLaw/inputs.ts';
 import { q } from '../quantityText.ts';
-import { memoLast } from '../memoLast.ts';
+import { memoLast, oncePerValues } from '../memoLast.ts';
 
 type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion>; law?: DamperLaw; loop: ReturnType<typeof loopOf> };
-// charts(values, result) receives the same values object compute saw: parse a long record once.
-const analysed = new WeakMap<Values, Analysis>();
 
 // the record is parsed once per change of its text or layout, not on every keystroke in another
 // field (a 2 MB record took about 0.3–0.5 s to parse); recordedMotion and loopOf only read it
 const parseRecord = memoLast(parseRecordedMotion);
 
-function analyse(values: Values): Analysis {
-  const hit = analysed.get(values);
-  if (hit) return hit;
+// compute and charts(values, result) see the same values object: analysed once
+const analyse = oncePerValues((values: Values): Analysis => {
   const layout = choice<ColumnLayout | 'autoF'>(values, 'layout');
   const rec = parseRecord(text(values, 'csv'), layout === 'autoF' ? 'auto' : layout);
   if (layout === 'autoF' && !rec.F) throw new InputRangeError('layout', layout, undefined, '', 'the header names no force column: choose "from the header, force from the damper law" (auto), or tx / tv, and a damper law');
@@ -27,9 +24,8 @@ function analyse(values: Values): Analysis {
   const law = (LAW_LAYOUTS as readonly string[]).includes(layout) ? lawFromValues(values) : undefined;
   const r = recordedMotion(rec, rec.F ? undefined : law, num(values, 'gapFactor'));
   const a = { rec, r, law, loop: loopOf(rec, r) };
-  analysed.set(values, a);
   return a;
-}
+});
 
 /** Keeps at most `max` points by striding (for charts only; energies use every sample). */
 function stride(t: Float64Array, y: Float64Array, max = 1200): { x: number[]; y: number[] } {

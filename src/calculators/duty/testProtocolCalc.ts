@@ -1,4 +1,5 @@
 import { parseProtocol, protocolHeating, type ProtocolRun } from '../../core/duty/index.ts';
+import { oncePerValues } from '../memoLast.ts';
 import { ZERO_CELSIUS } from '../../core/constants.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { describeLaw, lawFromValues, lawInputs, lawStudy } from '../damperLaw/inputs.ts';
@@ -12,19 +13,15 @@ const DEMO_PROTOCOL = '# TW-402 Hall C damper, wind prototype test\n# N, X, f, r
 const LAW = lawInputs({ defaults: { law: 'power', Fref: 200e3, vref: 1, alpha: 0.4, c: 1e6 }, series: false });
 
 type Run = { run: ProtocolRun; law: ReturnType<typeof lawFromValues>; temp: ReturnType<typeof tempLawFrom> };
-// charts(values, result) receives the same values object compute saw: integrate once.
-const cache = new WeakMap<Values, Run>();
-function analyse(values: Values): Run {
-  const hit = cache.get(values);
-  if (hit) return hit;
+// compute and charts(values, result) see the same values object: analysed once
+const analyse = oncePerValues((values: Values): Run => {
   const blocks = parseProtocol(text(values, 'protocol'), 'protocol');
   const law = lawFromValues(values);
   const temp = tempLawFrom(values);
   const run = protocolHeating(blocks, law, { Cth: num(values, 'Cth'), UA: num(values, 'UA'), Tamb: num(values, 'Tamb') }, temp ? ratioOf(temp.model) : undefined);
   const out = { run, law, temp };
-  cache.set(values, out);
   return out;
-}
+});
 
 /** Damper temperature and energy per cycle through a cyclic test protocol. */
 export const testProtocolCalc = defineCalculator({

@@ -1,4 +1,5 @@
 import { ComputationError } from '../../core/errors.ts';
+import { oncePerValues } from '../memoLast.ts';
 import { maxAbsOf, maxOf, minOf } from '../../core/numeric/extent.ts';
 import { fadeFit, fadeRatio, readUnitRows } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
@@ -12,20 +13,16 @@ const DEMO_ROWS = 'T [°C], v [m/s], F [N]\n-20, 0.05, 94\n-20, 0.1, 183\n-20, 0
 export const MAX_FADE_ROWS = 2000;
 
 type Fit = { fit: ReturnType<typeof fadeFit>; rows: readonly (readonly number[])[]; fluid: ReturnType<typeof fluidFrom> };
-// charts(values, result) receives the same values object compute saw: fit once.
-const cache = new WeakMap<Values, Fit>();
-function analyse(values: Values): Fit {
-  const hit = cache.get(values);
-  if (hit) return hit;
+// compute and charts(values, result) see the same values object: analysed once
+const analyse = oncePerValues((values: Values): Fit => {
   const rows = readUnitRows(text(values, 'rows'), 'rows', [
     { name: 'temperature', kind: 'temperature' }, { name: 'velocity', kind: 'velocity' }, { name: 'force', kind: 'force' },
   ], MAX_FADE_ROWS).rows;
   const fluid = fluidFrom(values);
   const fit = fadeFit(rows, { oil: fluid.curve, Tref: num(values, 'Tref'), beta: betaFrom(values) });
   const out = { fit, rows, fluid };
-  cache.set(values, out);
   return out;
-}
+});
 
 /** Calibrates the fade law (viscous share and c at T_ref) from dyno rows at two or more temperatures. */
 export const fadeFitCalc = defineCalculator({
