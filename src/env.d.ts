@@ -13,4 +13,6 @@ declare module 'virtual:dampbook/client' {
   export default urls;
   /** Every chunk URL of a lazy module (src/build/client-scripts.ts LAZY_PRELOADS). */
   export const preloads: Readonly<Record<import('./build/client-scripts.ts').LazyPreload, readonly string[]>>;
+  /** Calculator id → every chunk URL of its definition (empty in dev). */
+  export const calculatorPreloads: Readonly<Record<string, readonly string[]>>;
 }

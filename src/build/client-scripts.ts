@@ -9,7 +9,7 @@
  * in `<outDir>/_db/`. Dynamic imports (calculators, chart view, record panel) stay lazy
  * chunks, exactly as before.
  */
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, join, relative, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { AstroIntegration } from 'astro';
@@ -78,36 +78,58 @@ function entryFiles(root: string, meta: { outputs: Record<string, { entryPoint?:
 
 type Meta = { outputs: Record<string, { entryPoint?: string; inputs: Record<string, unknown>; imports: { path: string; kind: string }[] }> };
 
-/** For each lazy module: the output file holding it and every file it statically imports, transitively. */
+/** The output file holding a source module and every file it statically imports, transitively. */
+function chunkGraph(root: string, meta: Meta, src: string): string[] {
+  const start = Object.keys(meta.outputs).find((o) => Object.keys(meta.outputs[o]!.inputs).some((i) => resolve(root, i) === resolve(root, src)));
+  if (!start) throw new Error(`client scripts: no output holds ${src}`);
+  const seen = new Set<string>();
+  const visit = (o: string) => {
+    if (seen.has(o)) return;
+    seen.add(o);
+    for (const imp of meta.outputs[o]?.imports ?? []) if (imp.kind === 'import-statement') visit(imp.path);
+  };
+  visit(start);
+  return [...seen].map((f) => f.split('/').pop()!);
+}
+
 function preloadFiles(root: string, meta: Meta): Record<LazyPreload, string[]> {
   const out = {} as Record<LazyPreload, string[]>;
-  for (const [name, src] of Object.entries(LAZY_PRELOADS) as [LazyPreload, string][]) {
-    const start = Object.keys(meta.outputs).find((o) => Object.keys(meta.outputs[o]!.inputs).some((i) => resolve(root, i) === resolve(root, src)));
-    if (!start) throw new Error(`client scripts: no output holds ${src}`);
-    const seen = new Set<string>();
-    const visit = (o: string) => {
-      if (seen.has(o)) return;
-      seen.add(o);
-      for (const imp of meta.outputs[o]?.imports ?? []) if (imp.kind === 'import-statement') visit(imp.path);
-    };
-    visit(start);
-    out[name] = [...seen].map((f) => f.split('/').pop()!);
-  }
+  for (const [name, src] of Object.entries(LAZY_PRELOADS) as [LazyPreload, string][]) out[name] = chunkGraph(root, meta, src);
   return out;
 }
 
-function moduleSource(base: string, files: Record<ClientEntry, string>, preloads: Record<LazyPreload, string[]>): string {
+const LOADERS = 'src/calculators/loaders.ts';
+
+/** Calculator id → source module, read from the loaders' `id: () => import('./path')` lines. */
+export function loaderSources(text: string): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const m of text.matchAll(/^\s*'?([a-z0-9-]+)'?: \(\) => import\('\.\/([^']+)'\)/gm)) out[m[1]!] = `src/calculators/${m[2]!}`;
+  return out;
+}
+
+/**
+ * Calculator id → every chunk its definition needs. A study page learns its steps' calculators
+ * only when the study is read; announcing all their chunks at once saves the browser discovering
+ * each calculator's imports one level at a time (src/components/internal/study-calculators.ts).
+ */
+function calculatorFiles(root: string, meta: Meta): Record<string, string[]> {
+  const sources = loaderSources(readFileSync(join(root, LOADERS), 'utf8'));
+  return Object.fromEntries(Object.entries(sources).map(([id, src]) => [id, chunkGraph(root, meta, src)]));
+}
+
+function moduleSource(base: string, files: Record<ClientEntry, string>, preloads: Record<LazyPreload, string[]>, calcs: Record<string, string[]>): string {
   const prefix = `${base.endsWith('/') ? base : `${base}/`}${FOLDER}/`;
   const urls = Object.fromEntries(Object.entries(files).map(([k, f]) => [k, prefix + f]));
   const pre = Object.fromEntries(Object.entries(preloads).map(([k, fs]) => [k, fs.map((f) => prefix + f)]));
-  return `export default ${JSON.stringify(urls)};\nexport const preloads = ${JSON.stringify(pre)};\n`;
+  const calcUrls = Object.fromEntries(Object.entries(calcs).map(([k, fs]) => [k, fs.map((f) => prefix + f)]));
+  return `export default ${JSON.stringify(urls)};\nexport const preloads = ${JSON.stringify(pre)};\nexport const calculatorPreloads = ${JSON.stringify(calcUrls)};\n`;
 }
 
 /** The Astro integration: build → bundle once, write at the end; dev → rebuild on request. */
 export function clientScripts(): AstroIntegration {
   let root = '';
   let base = '/';
-  let built: { files: Record<ClientEntry, string>; preloads: Record<LazyPreload, string[]>; outputs: OutputFile[] } | undefined;
+  let built: { files: Record<ClientEntry, string>; preloads: Record<LazyPreload, string[]>; calculators: Record<string, string[]>; outputs: OutputFile[] } | undefined;
   let dev: BuildContext | undefined;
   const devFiles = Object.fromEntries(Object.entries(CLIENT_ENTRIES).map(([k, src]) => [k, `${src.split('/').pop()!.replace(/\.ts$/, '')}.js`])) as Record<ClientEntry, string>;
 
@@ -119,14 +141,14 @@ export function clientScripts(): AstroIntegration {
         base = config.base;
         if (command === 'build') {
           const result = await build(options(root, true));
-          built = { files: entryFiles(root, result.metafile!), preloads: preloadFiles(root, result.metafile as Meta), outputs: result.outputFiles! };
+          built = { files: entryFiles(root, result.metafile!), preloads: preloadFiles(root, result.metafile as Meta), calculators: calculatorFiles(root, result.metafile as Meta), outputs: result.outputFiles! };
         }
         const files = () => built?.files ?? devFiles;
         const plugin: Plugin = {
           name: 'dampbook:client-urls',
           resolveId: (id) => (id === VIRTUAL ? RESOLVED : undefined),
           // dev serves unsplit-by-hash files on request: nothing to preload there
-          load: (id) => (id === RESOLVED ? moduleSource(base, files(), built?.preloads ?? { study: [] }) : undefined),
+          load: (id) => (id === RESOLVED ? moduleSource(base, files(), built?.preloads ?? { study: [] }, built?.calculators ?? {}) : undefined),
           configureServer(server) {
             const prefix = `${base.endsWith('/') ? base : `${base}/`}${FOLDER}/`;
             server.middlewares.use(async (req, res, next) => {

@@ -12,7 +12,7 @@
  *   any other default → typed on this step.
  */
 import { isActive } from '../calculators/evaluate.ts';
-import { getCalculator } from '../calculators/registry.ts';
+import type { CalculatorLookup } from './lookup.ts';
 import type { Values } from '../calculators/types.ts';
 import type { Origin, StudyRun } from './run.ts';
 import { studyQuantity } from './quantities.ts';
@@ -38,12 +38,12 @@ export interface PageEdit {
 const clone = (s: Study): Study => JSON.parse(JSON.stringify(s)) as Study;
 
 /** Writes the values a step's page computes with into the study (see the module comment). */
-export function applyPageValues(study: Study, run: StudyRun, stepId: string, values: Values): PageEdit {
+export function applyPageValues(study: Study, run: StudyRun, stepId: string, values: Values, calcs: CalculatorLookup): PageEdit {
   const stepRun = run.steps.find((s) => s.id === stepId);
   const next = clone(study);
   const step = next.steps.find((s) => s.id === stepId);
   if (!stepRun || !step) return { study, changed: [], refused: [] };
-  const calc = getCalculator(step.calculator);
+  const calc = calcs(step.calculator);
   const bindings = calc?.study?.inputs ?? {};
   const changed: PageEdit['changed'][number][] = [];
   const refused: string[] = [];
@@ -89,13 +89,13 @@ export function clearOverride(study: Study, stepId: string, key: string): Study 
 }
 
 /** Study quantities some step of the study publishes. */
-export function publishedQuantities(study: Study): Set<string> {
-  return new Set(study.steps.flatMap((s) => Object.values(getCalculator(s.calculator)?.study?.publishes ?? {})));
+export function publishedQuantities(study: Study, calcs: CalculatorLookup): Set<string> {
+  return new Set(study.steps.flatMap((s) => Object.values(calcs(s.calculator)?.study?.publishes ?? {})));
 }
 
 /** True when the study gives a quantity: as its own quantity or limit, or published by one of its steps. */
-export function studyKnows(study: Study, q: string): boolean {
-  return q in (study.quantities ?? {}) || q in (study.limits ?? {}) || publishedQuantities(study).has(q);
+export function studyKnows(study: Study, q: string, calcs: CalculatorLookup): boolean {
+  return q in (study.quantities ?? {}) || q in (study.limits ?? {}) || publishedQuantities(study, calcs).has(q);
 }
 
 /**
@@ -103,12 +103,12 @@ export function studyKnows(study: Study, q: string): boolean {
  * bound to a quantity the study already gives follows the study; one bound to a quantity it does
  * not give yet adds that quantity (so later steps share it); any other input is typed on the step.
  */
-export function addStep(study: Study, page: string, calculator: string, values: Values): { study: Study; id: string } {
+export function addStep(study: Study, page: string, calculator: string, values: Values, calcs: CalculatorLookup): { study: Study; id: string } {
   const taken = new Set(study.steps.map((s) => s.id));
   let id = calculator.slice(0, 36);
   for (let n = 2; taken.has(id); n++) id = `${calculator.slice(0, 36)}-${n}`;
   const next = clone(study);
-  const calc = getCalculator(calculator);
+  const calc = calcs(calculator);
   const bindings = calc?.study?.inputs ?? {};
   const inputs: Record<string, number | string> = {};
   for (const def of calc?.inputs ?? []) {
@@ -116,7 +116,7 @@ export function addStep(study: Study, page: string, calculator: string, values: 
     if (v === undefined || !isActive(def, values) || (typeof v === 'string' && v.length > MAX_STUDY_TEXT)) continue;
     const q = bindings[def.key];
     const sq = q === undefined ? undefined : studyQuantity(q);
-    if (q !== undefined && studyKnows(study, q)) continue;
+    if (q !== undefined && studyKnows(study, q, calcs)) continue;
     if (sq) {
       const group = sq.role === 'limit' ? 'limits' : 'quantities';
       next[group] = { ...(next[group] ?? {}), [sq.name]: v };
@@ -130,11 +130,11 @@ export function addStep(study: Study, page: string, calculator: string, values: 
 }
 
 /** A new study with one step, its quantities taken from the values the page computes with now. */
-export function startStudy(page: string, calculator: string, values: Values, today: string): Study {
+export function startStudy(page: string, calculator: string, values: Values, today: string, calcs: CalculatorLookup): Study {
   const empty: Study = {
     format: 'dampbook-study', version: 1, title: 'New study',
     project: { number: 'TW-000', name: 'Project name', damper: 'Damper description', calculationNo: 'TW-000-C-000', date: today },
     steps: [],
   };
-  return addStep(empty, page, calculator, values).study;
+  return addStep(empty, page, calculator, values, calcs).study;
 }

@@ -4,7 +4,7 @@
  * results, warnings). Pure formatting of a StudyRun; numbers shown in SI-family units (°C for
  * temperatures, with kelvin alongside).
  */
-import { getCalculator } from '../calculators/registry.ts';
+import type { CalculatorLookup } from './lookup.ts';
 import type { InputDef, OutputDef } from '../calculators/types.ts';
 import { siSymbol } from '../core/units/index.ts';
 import type { Origin, StudyRun } from './run.ts';
@@ -59,10 +59,10 @@ export function verdictLine(v: Verdict): string {
   return `${v.pass ? 'PASS' : 'FAIL'} — ${v.what}: ${value} against ${showValue(k, v.limit)}${margin}. Rests on: ${v.restsOn.join(', ')}.`;
 }
 
-export function stepSheets(run: StudyRun): StepSheet[] {
+export function stepSheets(run: StudyRun, calcs: CalculatorLookup): StepSheet[] {
   const stepNo = new Map(run.steps.map((s, i) => [s.id, i + 1]));
   return run.steps.map((s, i) => {
-    const calc = getCalculator(s.calculator)!;
+    const calc = calcs(s.calculator)!;
     const inputs = calc.inputs.filter((d) => s.inputs[d.key] !== undefined).map((d) => ({
       key: d.key, label: d.label, value: d.kind === 'text' ? `${String(s.inputs[d.key]).split('\n').length} lines of text` : showValue(d.kind, s.inputs[d.key]), origin: originText(s.origins[d.key]!, stepNo),
     }));

@@ -7,6 +7,7 @@
  * the two can never differ.
  */
 import type { StudyRun } from './run.ts';
+import type { CalculatorLookup } from './lookup.ts';
 import { stepSheets, verdictLine } from './package.ts';
 
 /** An element: tag, attributes, children; `html` is trusted markup made at build time (KaTeX). */
@@ -40,9 +41,9 @@ const e = (t: string, a: Record<string, string> | undefined, ...k: VNode[]): VNo
 const row = (...cells: VNode[]) => e('tr', undefined, ...cells.map((c) => e('td', undefined, c)));
 const headRow = (...cells: string[]) => e('thead', undefined, e('tr', undefined, ...cells.map((c) => e('th', { scope: 'col' }, c))));
 
-export function packageView(run: StudyRun, cat: Catalogue, text: PackageText): VNode {
+export function packageView(run: StudyRun, cat: Catalogue, text: PackageText, calcs: CalculatorLookup): VNode {
   const { study } = run;
-  const sheets = stepSheets(run);
+  const sheets = stepSheets(run, calcs);
   const page = (id: string): PageInfo => cat.pages[id] ?? { url: '', title: id, revision: '—', status: 'draft', verification: 'Not a page of this handbook.' };
   const failed = run.verdicts.filter((v) => !v.pass).length;
   const no = (step: string) => sheets.find((s) => s.id === step)?.no ?? 0;

@@ -3,7 +3,7 @@
  * real and of matching kind, every quantity known and typed, the steps ordered by their explicit
  * `from` bindings (listed order kept otherwise) and cycles refused. Pure; one-line StudyError.
  */
-import { getCalculator } from '../calculators/registry.ts';
+import type { CalculatorLookup } from './lookup.ts';
 import type { CalculatorDefinition } from '../calculators/types.ts';
 import { DampbookError } from '../core/errors.ts';
 import { parseQuantity, UnitError } from '../core/units/index.ts';
@@ -71,7 +71,7 @@ function siValue(name: string, v: number | string, where: string): number | stri
   }
 }
 
-export function planStudy(study: Study): StudyPlan {
+export function planStudy(study: Study, calcs: CalculatorLookup): StudyPlan {
   const quantities = new Map<string, number | string>();
   for (const [group, role] of [['quantities', 'value'], ['limits', 'limit']] as const) {
     for (const [name, v] of Object.entries(study[group] ?? {})) {
@@ -88,7 +88,7 @@ export function planStudy(study: Study): StudyPlan {
   }
   const planned = new Map<string, PlannedStep>();
   for (const s of study.steps) {
-    const calc = getCalculator(s.calculator);
+    const calc = calcs(s.calculator);
     if (!calc) throw new StudyError(`study: step '${s.id}': unknown calculator '${s.calculator}'`);
     for (const key of Object.keys(s.inputs ?? {})) {
       if (!calc.inputs.some((i) => i.key === key)) throw new StudyError(`study: step '${s.id}' input '${key}': ${calc.id} has no such input`);
@@ -101,7 +101,7 @@ export function planStudy(study: Study): StudyPlan {
       const [sid, out] = ref.split('.') as [string, string];
       const src = ids.get(sid);
       if (!src) throw new StudyError(`study: step '${s.id}' input '${key}': bound to ${ref}, but there is no step '${sid}'`);
-      const srcCalc = getCalculator(src.calculator);
+      const srcCalc = calcs(src.calculator);
       const output = srcCalc?.outputs.find((o) => o.key === out);
       if (srcCalc && !output) throw new StudyError(`study: step '${s.id}' input '${key}': bound to ${ref}, but ${srcCalc.id} has no output '${out}'`);
       if (output && output.kind !== input.kind && !(output.kind === 'text' && (input.kind === 'text' || input.kind === 'choice'))) {

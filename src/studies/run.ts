@@ -8,6 +8,7 @@ import { evaluate } from '../calculators/evaluate.ts';
 import type { Outputs, Values } from '../calculators/types.ts';
 import { ComputationError, InputRangeError } from '../core/errors.ts';
 import { planStudy, StudyError, type PlannedStep, type StudyPlan } from './plan.ts';
+import type { CalculatorLookup } from './lookup.ts';
 import type { Study } from './schema.ts';
 import { verdictsOf, type Verdict } from './verdicts.ts';
 
@@ -113,8 +114,8 @@ function runStep(p: PlannedStep, plan: StudyPlan, runs: ReadonlyMap<string, Step
 }
 
 /** Plans and runs a whole study; throws a one-line StudyError naming the step and input. */
-export function runStudy(study: Study): StudyRun {
-  const r = runStudyUntilError(study);
+export function runStudy(study: Study, calcs: CalculatorLookup): StudyRun {
+  const r = runStudyUntilError(study, calcs);
   if (r.error) throw r.error;
   return r.run;
 }
@@ -124,8 +125,8 @@ export function runStudy(study: Study): StudyRun {
  * is on still shows its step when a later step cannot compute. A study that cannot be planned
  * (unknown calculator, dangling binding, cycle) still throws.
  */
-export function runStudyUntilError(study: Study): { run: StudyRun; error?: StudyError; failedStep?: string } {
-  const plan = planStudy(study);
+export function runStudyUntilError(study: Study, calcs: CalculatorLookup): { run: StudyRun; error?: StudyError; failedStep?: string } {
+  const plan = planStudy(study, calcs);
   const runs = new Map<string, StepRun>();
   const published = new Map<string, Published>();
   const steps: StepRun[] = [];

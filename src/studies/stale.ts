@@ -3,7 +3,7 @@
  * through a published quantity) from a stale step or from a changed study quantity or limit.
  * Pure; reads the origins recorded by the last run.
  */
-import { getCalculator } from '../calculators/registry.ts';
+import type { CalculatorLookup } from './lookup.ts';
 import type { Study } from './schema.ts';
 import type { StudyRun } from './run.ts';
 
@@ -30,7 +30,7 @@ export function changeBetween(before: Study, after: Study): StudyChange {
 }
 
 /** Step ids made stale by a change, in run order. */
-export function staleSteps(last: StudyRun, change: StudyChange): string[] {
+export function staleSteps(last: StudyRun, change: StudyChange, calcs: CalculatorLookup): string[] {
   const stale = new Set<string>(change.steps);
   const changedQ = new Set(change.quantities);
   for (const s of last.steps) {
@@ -38,7 +38,7 @@ export function staleSteps(last: StudyRun, change: StudyChange): string[] {
     const hit = Object.values(s.origins).some((o) =>
       (o.kind === 'step' && stale.has(o.step)) || ((o.kind === 'study' || o.kind === 'limit') && changedQ.has(o.quantity)));
     // a quantity that appears may fill an input that took its default last time
-    const bindings = getCalculator(s.calculator)?.study?.inputs ?? {};
+    const bindings = calcs(s.calculator)?.study?.inputs ?? {};
     const appears = Object.entries(bindings).some(([key, q]) => changedQ.has(q) && (s.origins[key] === undefined || s.origins[key]!.kind === 'default'));
     if (hit || appears) stale.add(s.id);
   }

@@ -3,7 +3,6 @@
  * and the inputs it rests on. Values are SI; `value` is what the job does, `limit` what it may do.
  */
 import { evaluate } from '../calculators/evaluate.ts';
-import { getCalculator } from '../calculators/registry.ts';
 import type { PlannedStep, StudyPlan } from './plan.ts';
 import type { StepRun } from './run.ts';
 import type { CheckName } from './schema.ts';
@@ -68,7 +67,7 @@ function one(check: CheckName, p: PlannedStep, run: StepRun, plan: StudyPlan, pu
       // the fade at the actual equilibrium, found even above the temperature limit
       let fade = run.outputs.fade;
       if (run.outputs.Teq === undefined) {
-        const again = evaluate(getCalculator(p.calc.id)!, { ...run.inputs, Tlimit: FADE_SEARCH_MAX }, { fillDefaults: true });
+        const again = evaluate(p.calc, { ...run.inputs, Tlimit: FADE_SEARCH_MAX }, { fillDefaults: true });
         fade = again.outputs.fade;
       }
       const limit = limitOf('allowedFade');

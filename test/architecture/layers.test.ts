@@ -65,3 +65,25 @@ describe('import direction', () => {
     expect(all).toEqual([]);
   });
 });
+
+/**
+ * The registry imports every calculator. Study code takes a lookup instead (src/studies/lookup.ts)
+ * and browser code loads definitions one by one (calculators/loaders.ts), so a page with a study
+ * downloads only its steps' calculators — an import of the registry here would quietly undo that.
+ */
+describe('the calculator registry stays out of study and browser code', () => {
+  const importsRegistry = (file: string, source: string) =>
+    specifiers(source).some((s) => s.startsWith('.') && resolve(dirname(file), s) === join(SRC, 'calculators', 'registry.ts'));
+
+  it('is detected (the check can fail)', () => {
+    expect(importsRegistry(join(SRC, 'studies', 'x.ts'), "import { getCalculator } from '../calculators/registry.ts';")).toBe(true);
+    expect(importsRegistry(join(SRC, 'studies', 'x.ts'), "import type { CalculatorLookup } from './lookup.ts';")).toBe(false);
+  });
+
+  it('holds for src/studies and src/components', () => {
+    const found = ['studies', 'components'].flatMap((d) => files(join(SRC, d)))
+      .filter((f) => f.endsWith('.ts') && importsRegistry(f, readFileSync(f, 'utf8')))
+      .map((f) => relative(SRC, f));
+    expect(found).toEqual([]);
+  });
+});

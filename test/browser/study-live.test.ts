@@ -66,7 +66,7 @@ describe('a study open in the handbook pages', () => {
     await page.waitForFunction(() => JSON.parse(localStorage.getItem('dampbook:study') ?? '{}').quantities?.vehicleSpeed === 22);
     const changed: Study = JSON.parse(JSON.stringify(file.study));
     changed.quantities!.vehicleSpeed = 22;
-    const expected = runStudy(changed); // [runner] the reference for every number below
+    const expected = runStudy(changed, getCalculator); // [runner] the reference for every number below
     expect(await stored(page)).toEqual(changed);
     const road = expected.steps.find((s) => s.id === 'road')!;
     expect(close((await live(page, 'road-power')).outputs!.P, road.outputs.P)).toBe(true);
@@ -87,7 +87,7 @@ describe('a study open in the handbook pages', () => {
       const bindings = calc.study?.inputs ?? {};
       for (const key of Object.keys(step.inputs)) {
         // [rule] an input bound to a quantity the study knows (its own, a limit, or published by a step) is never the page default
-        if (!(key in bindings) || !active(key) || !studyKnows(changed, bindings[key]!)) continue;
+        if (!(key in bindings) || !active(key) || !studyKnows(changed, bindings[key]!, getCalculator)) continue;
         expect(step.origins[key]!.kind, `${id}.${key}`).not.toBe('default');
         expect(await page.locator(`db-calculator[data-calc="${step.calculator}"] .field[data-key="${key}"]`).getAttribute('data-origin'), `${id}.${key}`).not.toBe('default');
       }
@@ -102,7 +102,7 @@ describe('a study open in the handbook pages', () => {
     expect(await w.page.locator('.study-sheet').count()).toBe(5);
     expect(await w.page.locator('.study-sheet[data-step="steady"] tr[data-in="V"] td').nth(1).textContent()).toBe('22 m/s');
     // [runner] the speed change moved the answers (a test that the change travelled, not only that nothing broke)
-    const before = runStudy(file.study);
+    const before = runStudy(file.study, getCalculator);
     expect(expected.steps.find((s) => s.id === 'steady')!.outputs.Ts).not.toBeCloseTo(before.steps.find((s) => s.id === 'steady')!.outputs.Ts as number, 3);
     expect(w.pageErrors).toEqual([]);
     expect(w.consoleErrors).toEqual([]);
@@ -123,7 +123,7 @@ describe('a study open in the handbook pages', () => {
     await page.waitForSelector('.field[data-key="P"][data-origin="step"]');
     const s = (await stored(page))!;
     expect(s.steps[1]!.inputs?.P).toBeUndefined();
-    const road = runStudy(s).steps[0]!;
+    const road = runStudy(s, getCalculator).steps[0]!;
     expect(close((await live(page, 'steady-temperature')).values!.P, road.outputs.P)).toBe(true);
     page = await visit(w, PAGE_URL['road-power']!, 'road-power');
     expect(w.pageErrors).toEqual([]);
@@ -142,7 +142,7 @@ describe('a study open in the handbook pages', () => {
     page = await visit(w, PAGE_URL['steady-temperature']!, 'steady-temperature');
     await page.locator('[data-study-bar] button', { hasText: 'as step 2' }).click();
     await page.waitForSelector('.field[data-key="P"][data-origin="step"]');
-    const impact = runStudy((await stored(page))!).steps[0]!;
+    const impact = runStudy((await stored(page))!, getCalculator).steps[0]!;
     expect(close((await live(page, 'steady-temperature')).values!.P, impact.outputs.P)).toBe(true);
     expect(w.pageErrors).toEqual([]);
     await page.context().close();

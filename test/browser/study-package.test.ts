@@ -13,6 +13,7 @@ import { main } from '../../src/cli/main.ts';
 import { runStudy } from '../../src/studies/run.ts';
 import { readStudies } from '../../src/studies/files.ts';
 import { ROOT_BUILD } from '../helpers/site.ts';
+import { getCalculator } from '../../src/calculators/registry.ts';
 
 const tmp = mkdtempSync(join(tmpdir(), 'dampbook-study-'));
 afterAll(() => rmSync(tmp, { recursive: true, force: true }));
@@ -31,7 +32,7 @@ async function print(id: string, paper: 'a4' | 'letter', file = `content/studies
 describe('study calculation package', () => {
   it('TW-210 class D on A4: cover with every verdict, one sheet per step, page x of y over the package', async () => {
     const file = readStudies().find((f) => f.id === 'tw-210-rear-damper-class-d')!;
-    const run = runStudy(file.study);
+    const run = runStudy(file.study, getCalculator);
     const { info, pages, count } = await print(file.id, 'a4');
     expect(info).toMatch(/\(A4\)/);
     expect(pages).toHaveLength(count);
@@ -74,7 +75,7 @@ describe('study calculation package', () => {
     study.project.calculationNo = 'TW-210-C-099';
     const file = join(tmp, 'faster.json');
     writeFileSync(file, JSON.stringify(study));
-    const run = runStudy(study);
+    const run = runStudy(study, getCalculator);
     const { pages, count } = await print('faster', 'a4', file);
     pages.forEach((p, i) => { expect(p).toContain(`page ${i + 1} of ${count}`); expect(p).toContain('TW-210-C-099'); });
     const all = pages.join('\n').replace(/\s+/g, ' ');

@@ -25,7 +25,7 @@ const clone = (s: Study): Study => JSON.parse(JSON.stringify(s)) as Study;
 const fail = (s: unknown): string => {
   const v = validateStudy(s);
   if (!v.ok) return v.message;
-  try { runStudy(v.study); } catch (e) { return (e as Error).message; }
+  try { runStudy(v.study, getCalculator); } catch (e) { return (e as Error).message; }
   return 'ran';
 };
 const fellrunner = () => load('tw-210-rear-damper-class-d.json');
@@ -36,7 +36,7 @@ describe('demo studies', () => {
   });
 
   it.each(files)('%s runs, and every from binding holds exactly (input value = source output)', (f) => {
-    const run = runStudy(load(f));
+    const run = runStudy(load(f), getCalculator);
     const byId = new Map(run.steps.map((s) => [s.id, s]));
     let bindings = 0;
     for (const s of run.steps) {
@@ -54,7 +54,7 @@ describe('demo studies', () => {
   });
 
   it('Fellrunner class D: mean power flows road → steady → warm-up → fade → rating, and the body fails its limits', () => {
-    const run = runStudy(fellrunner());
+    const run = runStudy(fellrunner(), getCalculator);
     const [road, steady, warm, fade, rating] = run.steps;
     expect(steady!.from).toMatchObject({ P: 'road.P' });
     expect(warm!.from).toMatchObject({ P: 'road.P', UA: 'steady.UA' });
@@ -87,14 +87,14 @@ describe('demo studies', () => {
   it('a warm-up step that cycles the power refuses the study\'s mean power as its power while on', () => {
     const u = fellrunner();
     u.steps[2]!.inputs = { ...(u.steps[2]!.inputs ?? {}), duty: 0.5 };
-    expect(() => runStudy(u)).toThrow(/step 'warm-up' \(warm-up\): P \(the power while on\) came from the study's mean power, but the power is on for only 0.5/);
+    expect(() => runStudy(u, getCalculator)).toThrow(/step 'warm-up' \(warm-up\): P \(the power while on\) came from the study's mean power, but the power is on for only 0.5/);
     u.steps[2]!.inputs = { ...u.steps[2]!.inputs, P: 485 };
-    expect(() => runStudy(u)).not.toThrow();
+    expect(() => runStudy(u, getCalculator)).not.toThrow();
   });
 
   it('TW-118 end stop: energy per stroke ½mv² + F_p·s and per hour against the buffer ratings', () => {
     const file = readStudies().find((f) => f.id === 'tw-118-end-stop')!;
-    const run = runStudy(file.study);
+    const run = runStudy(file.study, getCalculator);
     const v = Object.fromEntries(run.verdicts.map((x) => [x.check, x]));
     // closed form (Meriam & Kraige, Engineering Mechanics: Dynamics, work–energy, §3/6): ½·12·1.5² + 60·0.025 = 15 J
     expect(v['stroke-energy']).toMatchObject({ value: 15, limit: 25, pass: true, margin: 10 });
@@ -104,7 +104,7 @@ describe('demo studies', () => {
 
   it('Fellrunner class C and the Packline end stop pass every verdict', () => {
     for (const f of ['tw-210-rear-damper-class-c.json', 'tw-118-end-stop.json']) {
-      for (const v of runStudy(load(f)).verdicts) expect(v.pass, `${f}: ${v.step} ${v.check}`).toBe(true);
+      for (const v of runStudy(load(f), getCalculator).verdicts) expect(v.pass, `${f}: ${v.step} ${v.check}`).toBe(true);
     }
   });
 });
@@ -114,7 +114,7 @@ describe('resolving inputs', () => {
     const s = clone(fellrunner());
     s.steps[1]!.inputs = { P: 100 };
     s.steps[4]!.from = { V: 'road.vRms' }; // same kind (velocity): allowed, if odd
-    const run = runStudy(s);
+    const run = runStudy(s, getCalculator);
     expect(run.steps[4]!.inputs.V).toBe(run.steps[0]!.outputs.vRms);
     expect(run.steps[4]!.origins.V).toEqual({ kind: 'step', step: 'road', output: 'vRms', explicit: true });
     expect(run.steps[1]!.inputs.P).toBe(100);
@@ -123,7 +123,7 @@ describe('resolving inputs', () => {
   });
 
   it('an inactive input is neither used nor recorded (no input of an unused law)', () => {
-    const run = runStudy(fellrunner());
+    const run = runStudy(fellrunner(), getCalculator);
     expect(run.steps[0]!.inputs).not.toHaveProperty('Fref');
     expect(run.steps[0]!.origins).not.toHaveProperty('alpha');
     expect(run.steps[3]!.inputs).not.toHaveProperty('X');
@@ -140,7 +140,7 @@ describe('resolving inputs', () => {
     s.steps.reverse();
     s.steps.find((x) => x.id === 'steady')!.from = { P: 'road.P' };
     s.steps.find((x) => x.id === 'warm-up')!.from = { UA: 'steady.UA', P: 'road.P' };
-    const ids = runStudy(s).steps.map((x) => x.id);
+    const ids = runStudy(s, getCalculator).steps.map((x) => x.id);
     expect(ids.indexOf('road')).toBeLessThan(ids.indexOf('steady'));
     expect(ids.indexOf('steady')).toBeLessThan(ids.indexOf('warm-up'));
   });
@@ -216,24 +216,24 @@ describe('refused studies: one line each', () => {
 describe('stale steps', () => {
   it('a changed vehicle speed makes every step stale; a changed road class makes the road and its consumers stale', () => {
     const before = fellrunner();
-    const run = runStudy(before);
+    const run = runStudy(before, getCalculator);
     const faster = clone(before);
     faster.quantities!.vehicleSpeed = '20 m/s';
-    expect(staleSteps(run, changeBetween(before, faster))).toEqual(['road', 'steady', 'warm-up', 'fade', 'rating']);
+    expect(staleSteps(run, changeBetween(before, faster), getCalculator)).toEqual(['road', 'steady', 'warm-up', 'fade', 'rating']);
     const rougher = clone(before);
     rougher.steps[0]!.inputs = { roadClass: 'E' };
-    expect(staleSteps(run, changeBetween(before, rougher))).toEqual(['road', 'steady', 'warm-up', 'fade']);
+    expect(staleSteps(run, changeBetween(before, rougher), getCalculator)).toEqual(['road', 'steady', 'warm-up', 'fade']);
     const oil = clone(before);
     oil.quantities!.oilViscosity40 = '30 mm²/s';
-    expect(staleSteps(run, changeBetween(before, oil))).toEqual(['fade']);
-    expect(staleSteps(run, changeBetween(before, clone(before)))).toEqual([]);
+    expect(staleSteps(run, changeBetween(before, oil), getCalculator)).toEqual(['fade']);
+    expect(staleSteps(run, changeBetween(before, clone(before)), getCalculator)).toEqual([]);
   });
 
   it('the recomputed study after a speed change differs in every stale step (numbers, not only a flag)', () => {
-    const before = runStudy(fellrunner());
+    const before = runStudy(fellrunner(), getCalculator);
     const s = fellrunner();
     s.quantities!.vehicleSpeed = '20 m/s';
-    const after = runStudy(s);
+    const after = runStudy(s, getCalculator);
     // on a w = 2 road the mean power is proportional to speed (closed form π²·k_t·G_d(n0)·n0²·V)
     expect(after.steps[0]!.outputs.P as number).toBeCloseTo((before.steps[0]!.outputs.P as number) * 20 / 15, 6);
     expect(after.steps[1]!.inputs.P).toBe(after.steps[0]!.outputs.P);

@@ -33,7 +33,7 @@ const fmt = (v: number | string | null | undefined) => (typeof v === 'number' ? 
 
 function run(args: ParsedArgs, out: (s: string) => void): number {
   const { study } = readStudy(args);
-  const r = runStudy(study);
+  const r = runStudy(study, getCalculator);
   if (args.flags.has('json')) {
     out(JSON.stringify({
       study: study.title,
@@ -60,8 +60,8 @@ function run(args: ParsedArgs, out: (s: string) => void): number {
 
 function check(args: ParsedArgs): number {
   const { study } = readStudy(args);
-  planStudy(study);
-  runStudy(study);
+  planStudy(study, getCalculator);
+  runStudy(study, getCalculator);
   return 0;
 }
 

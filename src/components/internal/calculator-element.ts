@@ -15,7 +15,7 @@ import { clip, parseTyped, readField, splitTyped, textSum } from './fieldState.t
 import { describeHeld, holdText, LARGE_TEXT, type HeldText } from './heldText.ts';
 
 import { calculatorLoaders } from '../../calculators/loaders.ts';
-import { fetchNamedStudy, storedStudy } from './study-fetch.ts';
+import { openingStudy } from './study-fetch.ts';
 
 export class CalculatorElement extends HTMLElement {
   calc: CalculatorDefinition | undefined;
@@ -35,7 +35,7 @@ export class CalculatorElement extends HTMLElement {
     // the study code (runner, every calculator, zod) loads beside this calculator, not after it;
     // with a study open it fills this calculator's step, and `data-study` says when that is done
     const bar = document.querySelector('[data-study-bar]') !== null;
-    const opened = bar && (fetchNamedStudy() !== undefined || storedStudy());
+    const opened = bar && openingStudy();
     const study = bar ? import('./study-link.ts').then((m) => m.studySession()) : undefined;
     this.calc = Object.hasOwn(calculatorLoaders, id) ? await calculatorLoaders[id]!() : undefined;
     if (!this.calc) return;

@@ -15,6 +15,10 @@ import type { CalculatorElement } from './calculator-element.ts';
 import { closeOpenStudy, readOpenStudy, saveOpenStudy } from './study-store.ts';
 import { renderStudyBar } from './study-bar.ts';
 import { fetchNamedStudy } from './study-fetch.ts';
+import { LoadedCalculators } from './study-calculators.ts';
+
+// `npm run bench` reads these marks: when the study code ran, read the study, loaded its calculators
+performance.mark('db-study-code');
 
 interface Attached { readonly el: CalculatorElement; readonly stepId: string | undefined }
 
@@ -26,6 +30,8 @@ class StudySession {
   run: StudyRun | undefined;
   error: { step?: string; message: string } | undefined;
   private attached: Attached[] = [];
+  /** Only the definitions this study and page use (the registry would load every calculator). */
+  private calcs = new LoadedCalculators();
   private pageId = document.querySelector<HTMLElement>('article[data-page-id]')?.dataset.pageId ?? '';
   private bar = document.querySelector<HTMLElement>('[data-study-bar]');
 
@@ -38,12 +44,12 @@ class StudySession {
       history.replaceState(history.state, '', `${location.pathname}${params.size ? `?${params}` : ''}${location.hash}`);
       // the study just fetched and checked is the one now kept: no second parse of the stored copy
       const fetched = await this.fetchBuiltIn(named);
-      if (fetched) { this.study = fetched; this.rerun(); return; }
+      if (fetched) { this.study = fetched; if (await this.loadCalculators(fetched)) this.rerun(); return; }
     }
     const stored = readOpenStudy();
     if (stored && !stored.ok) this.error = { message: `The study kept in this browser is not valid and was not opened (${stored.message}).` };
     this.study = stored?.ok ? stored.study : undefined;
-    this.rerun();
+    if (await this.loadCalculators(this.study)) this.rerun();
   }
 
   private async fetchBuiltIn(id: string): Promise<Study | undefined> {
@@ -55,12 +61,25 @@ class StudySession {
     return undefined;
   }
 
+  /** Loads the study's calculators; false (and a message) when the browser could not fetch them. */
+  private async loadCalculators(study: Study | undefined): Promise<boolean> {
+    performance.mark('db-study-read');
+    try {
+      await this.calcs.forStudy(study);
+      performance.mark('db-study-calculators');
+      return true;
+    } catch {
+      this.error = { message: 'The calculators of this study could not be loaded; reload the page.' };
+      return false;
+    }
+  }
+
   private rerun(): void {
     this.run = undefined;
     if (!this.study) return;
     const t0 = performance.now();
     try {
-      const r = runStudyUntilError(this.study);
+      const r = runStudyUntilError(this.study, this.calcs.lookup);
       // `npm run bench` reads these marks (open and recompute time in a real browser)
       performance.measure('db-study-run', { start: t0 });
       this.run = r.run;
@@ -72,6 +91,7 @@ class StudySession {
 
   /** Joins a calculator element: fills its step's inputs from the study (true: filled and recomputed) and follows its changes. */
   attach(el: CalculatorElement): boolean {
+    if (el.calc) this.calcs.add(el.calc);
     const step = this.study?.steps.find((s) => s.page === this.pageId && s.calculator === el.calc?.id);
     const a = { el, stepId: step?.id };
     this.attached.push(a);
@@ -95,7 +115,7 @@ class StudySession {
 
   private onComputed(a: Attached, values: Values): void {
     if (!this.study || !this.run || !a.stepId || !this.stepRun(a)) return;
-    const edit = applyPageValues(this.study, this.run, a.stepId, values);
+    const edit = applyPageValues(this.study, this.run, a.stepId, values, this.calcs.lookup);
     if (edit.refused.length) this.say(`Not kept in the study: ${edit.refused.join(', ')} (longer than a study value may be; save the data as a file and paste it on this page).`);
     if (edit.study === this.study) return;
     this.study = edit.study;
@@ -122,7 +142,7 @@ class StudySession {
       const origin: Origin | undefined = s?.origins[def.key];
       if (!s || !origin) { delete f.dataset.origin; continue; }
       const q = bindings[def.key];
-      const overriding = origin.kind === 'typed' && q !== undefined && this.study !== undefined && studyKnows(this.study, q);
+      const overriding = origin.kind === 'typed' && q !== undefined && this.study !== undefined && studyKnows(this.study, q, this.calcs.lookup);
       const kind = overriding ? 'override' : origin.kind;
       if (kind === 'default' && q === undefined) { delete f.dataset.origin; continue; }
       f.dataset.origin = kind;
@@ -175,7 +195,7 @@ class StudySession {
         start: (calcId) => this.start(calcId),
         add: (calcId) => this.add(calcId),
         close: () => { closeOpenStudy(); location.reload(); },
-        load: (text) => this.load(text),
+        load: (text) => void this.load(text),
       },
     });
   }
@@ -183,7 +203,7 @@ class StudySession {
   private start(calcId: string): void {
     const a = this.attached.find((x) => x.el.calc?.id === calcId);
     if (!a?.el.values) { this.say('Fix the highlighted fields first: a study starts from the values the page computes with.'); return; }
-    this.study = startStudy(this.pageId, calcId, a.el.values, new Date().toISOString().slice(0, 10));
+    this.study = startStudy(this.pageId, calcId, a.el.values, new Date().toISOString().slice(0, 10), this.calcs.lookup);
     this.commit();
   }
 
@@ -191,15 +211,16 @@ class StudySession {
     if (!this.study) return;
     const a = this.attached.find((x) => x.el.calc?.id === calcId);
     if (!a?.el.values) { this.say('Fix the highlighted fields first: the step starts from the values the page computes with.'); return; }
-    const r = addStep(this.study, this.pageId, calcId, a.el.values);
+    const r = addStep(this.study, this.pageId, calcId, a.el.values, this.calcs.lookup);
     this.study = r.study;
     if (a) (a as { stepId: string | undefined }).stepId = r.id;
     this.commit();
   }
 
-  private load(text: string): void {
+  private async load(text: string): Promise<void> {
     const p = parseStudy(text);
     if (!p.ok) { this.say(p.message); return; }
+    if (!(await this.loadCalculators(p.study))) { this.renderBar(); return; }
     this.study = p.study;
     this.commit();
   }

@@ -86,7 +86,7 @@ describe('storey-dampers', () => {
       ],
     });
     if (!parsed.ok) throw new Error(parsed.message);
-    const [a, b] = runStudy(parsed.study).steps;
+    const [a, b] = runStudy(parsed.study, getCalculator).steps;
     expectClose({ label: 'E per cycle', computed: b!.outputs.E as number, expected: a!.outputs.hotW as number, tol: 1e-9, why: 'closed form λ(α) against the harmonic-duty path' });
     expectClose({ label: 'mean power', computed: b!.outputs.P as number, expected: a!.outputs.hotP as number, tol: 1e-9 });
     expect(b!.origins.X).toMatchObject({ kind: 'step' });

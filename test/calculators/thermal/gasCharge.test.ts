@@ -66,7 +66,7 @@ describe('gas-charge', () => {
   it('in the TW-210 monotube study, takes the steady step\'s body temperature for the gas and the seals', () => {
     const parsed = parseStudy(readFileSync('content/studies/tw-210-monotube-gas-charge.json', 'utf8'));
     if (!parsed.ok) throw new Error(parsed.message);
-    const run = runStudy(parsed.study);
+    const run = runStudy(parsed.study, getCalculator);
     const step = (id: string) => run.steps.find((s) => s.id === id)!;
     expect(step('gas').from).toMatchObject({ T: 'steady.Ts' });
     expect(step('seals').from).toMatchObject({ T: 'steady.Ts' });
