@@ -114,7 +114,9 @@ export function loaderSources(text: string): Record<string, string> {
  */
 function calculatorFiles(root: string, meta: Meta): Record<string, string[]> {
   const sources = loaderSources(readFileSync(join(root, LOADERS), 'utf8'));
-  return Object.fromEntries(Object.entries(sources).map(([id, src]) => [id, chunkGraph(root, meta, src)]));
+  // the calculator element's own chunks are loaded on every calculator page already
+  const loaded = new Set(chunkGraph(root, meta, CLIENT_ENTRIES.calculator));
+  return Object.fromEntries(Object.entries(sources).map(([id, src]) => [id, chunkGraph(root, meta, src).filter((f) => !loaded.has(f))]));
 }
 
 function moduleSource(base: string, files: Record<ClientEntry, string>, preloads: Record<LazyPreload, string[]>, calcs: Record<string, string[]>): string {
