@@ -31,6 +31,19 @@ function broken(edit: (s: Record<string, any>) => void): string {
 }
 
 describe('dampbook study', () => {
+  it('run --json summarises a step\'s text input (rows, characters, checksum) instead of echoing it', async () => {
+    const profile = '# time [s], power [W]\n0, 120\n600, 0\n1200';
+    const f = broken((s) => {
+      const step = s.steps.find((x: { id: string }) => x.id === 'warm-up');
+      step.inputs = { ...(step.inputs ?? {}), power: 'profile', profile };
+    });
+    const r = await cli('study', 'run', f, '--json');
+    expect(r.code).toBe(0);
+    const shown = JSON.parse(r.out).steps.find((x: { id: string }) => x.id === 'warm-up').inputs.profile;
+    expect(shown).toMatch(/^text, 4 rows, \d+ characters, sha256 [0-9a-f]{12}$/);
+    expect(r.out).not.toContain('600, 0');
+  });
+
   it('run --json prints exactly the contract', async () => {
     const r = await cli('study', 'run', FILE, '--json');
     expect(r.code).toBe(0);

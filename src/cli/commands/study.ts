@@ -12,7 +12,7 @@ import { planStudy, StudyError } from '../../studies/plan.ts';
 import { runStudy } from '../../studies/run.ts';
 import { MAX_STUDY_CHARS, parseStudy, STUDY_STORE, type Study } from '../../studies/schema.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
-import { fileLimit } from '../inputs.ts';
+import { fileLimit, summariseText, textLabel } from '../inputs.ts';
 import { FileReadError, readBoundedFile } from '../readFile.ts';
 
 function readStudy(args: ParsedArgs): { study: Study; file: string } {
@@ -31,13 +31,20 @@ function readStudy(args: ParsedArgs): { study: Study; file: string } {
 
 const fmt = (v: number | string | null | undefined) => (typeof v === 'number' ? String(Number(v.toPrecision(6))) : String(v));
 
+/** A step's inputs for `--json`: text inputs summarised (characters, rows, checksum) like `calc`, never echoed back. */
+function shownInputs(calculator: string, inputs: Readonly<Record<string, number | string | undefined>>): Record<string, unknown> {
+  const defs = getCalculator(calculator)?.inputs ?? [];
+  return Object.fromEntries(Object.entries(inputs).map(([k, v]) =>
+    [k, typeof v === 'string' && defs.find((d) => d.key === k)?.kind === 'text' ? textLabel(summariseText(k, v)) : v]));
+}
+
 function run(args: ParsedArgs, out: (s: string) => void): number {
   const { study } = readStudy(args);
   const r = runStudy(study, getCalculator);
   if (args.flags.has('json')) {
     out(JSON.stringify({
       study: study.title,
-      steps: r.steps.map((s) => ({ id: s.id, calculator: s.calculator, inputs: s.inputs, outputs: Object.fromEntries(Object.entries(s.outputs).filter(([, v]) => v !== undefined)), from: s.from })),
+      steps: r.steps.map((s) => ({ id: s.id, calculator: s.calculator, inputs: shownInputs(s.calculator, s.inputs), outputs: Object.fromEntries(Object.entries(s.outputs).filter(([, v]) => v !== undefined)), from: s.from })),
       verdicts: r.verdicts.map((v) => ({ step: v.step, check: v.check, value: v.value, limit: v.limit, pass: v.pass })),
     }));
     return 0;
