@@ -51,13 +51,13 @@ export function violations(file: string, source: string): string[] {
 
 describe('import direction', () => {
   it('finds static, re-exported and dynamic imports (the checker itself can fail)', () => {
-    const bad = "import { x } from '../../components/internal/format.ts';\nexport * from '../../cli/args.ts';\nconst m = await import('node:fs');\nimport 'chart.js';";
+    const bad = "import { x } from '../../components/render/format.ts';\nexport * from '../../cli/args.ts';\nconst m = await import('node:fs');\nimport 'chart.js';";
     const found = violations(join(SRC, 'core', 'thermal', 'fake.ts'), bad);
     expect(found).toHaveLength(4);
-    expect(found[0]).toContain("imports '../../components/internal/format.ts' (components)");
+    expect(found[0]).toContain("imports '../../components/render/format.ts' (components)");
     expect(violations(join(SRC, 'core', 'thermal', 'fake.ts'), "import { air } from './air.ts';\nimport type { Q } from '../units/index.ts';")).toEqual([]);
-    expect(violations(join(SRC, 'calculators', 'x.ts'), "import { h } from '../components/internal/format.ts';")).toHaveLength(1);
-    expect(violations(join(SRC, 'cli', 'x.ts'), "import { h } from '../components/internal/format.ts';")).toHaveLength(1);
+    expect(violations(join(SRC, 'calculators', 'x.ts'), "import { h } from '../components/render/format.ts';")).toHaveLength(1);
+    expect(violations(join(SRC, 'cli', 'x.ts'), "import { h } from '../components/render/format.ts';")).toHaveLength(1);
   });
 
   it('holds for every file under src/', () => {
