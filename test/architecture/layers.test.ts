@@ -64,4 +64,25 @@ describe('import direction', () => {
     const all = files(SRC).flatMap((f) => violations(f, readFileSync(f, 'utf8')));
     expect(all).toEqual([]);
   });
+
+  it('components/render/ is pure: no DOM globals and no client/ import (the server render uses it)', () => {
+    expect(domUse('render/fake.ts', "const d = document.createElement('div');\nimport { a } from '../client/finder.ts';\nwindow.x = 1;")).toEqual([
+      'render/fake.ts uses document', 'render/fake.ts uses window', "render/fake.ts imports '../client/finder.ts'",
+    ]);
+    expect(domUse('render/fake.ts', '// the document title\nconst s = `window`;\nconst documentLength = 2;')).toEqual([]);
+    const dir = join(SRC, 'components', 'render');
+    const all = files(dir).flatMap((f) => domUse(relative(SRC, f), readFileSync(f, 'utf8')));
+    expect(all).toEqual([]);
+  });
 });
+
+const DOM_GLOBALS = ['document', 'window', 'customElements', 'localStorage', 'sessionStorage', 'navigator', 'location', 'HTMLElement', 'requestAnimationFrame'];
+
+/** DOM globals a render helper touches (comments and string literals ignored) and client/ imports. */
+export function domUse(name: string, source: string): string[] {
+  const code = source.replace(/\/\*[\s\S]*?\*\/|\/\/[^\n]*/g, '').replace(/(['"`])(?:\\.|(?!\1)[^\\\n])*\1/g, "''");
+  const used = DOM_GLOBALS.filter((g) => new RegExp(`(?<![\\w.$])${g}(?![\\w$])`).test(code)).map((g) => `${name} uses ${g}`);
+  const client = specifiers(source).filter((s) => s.includes('/client/')).map((s) => `${name} imports '${s}'`);
+  return [...used, ...client];
+}
+
