@@ -9,7 +9,7 @@
 import { existsSync } from 'node:fs';
 import { envelope } from '../src/calculators/envelope/index.ts';
 import { defaults } from '../src/calculators/evaluate.ts';
-import { impact } from '../src/calculators/duty/impact.ts';
+import { impactCalculator } from '../src/calculators/duty/impact.ts';
 import { serveStatic } from '../src/server/staticServer.ts';
 import { launch } from '../test/helpers/browser.ts';
 import { median, medianMs } from './lib/timing.ts';
@@ -17,10 +17,10 @@ import { median, medianMs } from './lib/timing.ts';
 const KEYS = ['m', 'v', 'Fp', 's', 'cph', 'vEndRatio'] as const;
 const TARGET_MS = 20;
 
-const d = defaults(impact);
+const d = defaults(impactCalculator);
 const vary = Object.fromEntries(KEYS.map((k) => [k, { lo: (d[k] as number) * 0.9, hi: (d[k] as number) * 1.1 }]));
-const e = envelope(impact, d, vary);
-const node = medianMs(() => envelope(impact, d, vary), 21, 5);
+const e = envelope(impactCalculator, d, vary);
+const node = medianMs(() => envelope(impactCalculator, d, vary), 21, 5);
 console.log(`impact envelope, 6 inputs ±10 % (${e.method}), node: median ${node.toFixed(1)} ms`);
 
 const SITE = process.env.DAMPBOOK_SITE ?? (existsSync('dist/index.html') ? 'dist' : '.test-out/root');

@@ -9,7 +9,7 @@
  * 200-point target is missed.
  */
 import { evaluate } from '../src/calculators/evaluate.ts';
-import { fvFit } from '../src/calculators/vibration/fvFit.ts';
+import { fvFitCalculator } from '../src/calculators/vibration/fv-fit.ts';
 import { damperForce, type DamperLaw } from '../src/core/dampers/index.ts';
 import { medianMs } from './lib/timing.ts';
 
@@ -39,8 +39,8 @@ for (const n of [200, 2000, 8000]) {
     // a new force offset on every call defeats the calculator's one-entry cache (charts reuse it, as on the page)
     let k = 0;
     const values = () => ({ points, law, F0: ++k * 1e-6 });
-    const compute = time(() => { evaluate(fvFit, values()); }, n > 2000 ? 3 : 15);
-    const withCharts = time(() => { const r = evaluate(fvFit, values()); fvFit.charts(r.values, r); }, n > 2000 ? 3 : 15);
+    const compute = time(() => { evaluate(fvFitCalculator, values()); }, n > 2000 ? 3 : 15);
+    const withCharts = time(() => { const r = evaluate(fvFitCalculator, values()); fvFitCalculator.charts(r.values, r); }, n > 2000 ? 3 : 15);
     const mark = n === 200 && withCharts > TARGET_MS ? `  > ${TARGET_MS} ms target` : '';
     if (mark) failed = true;
     console.log(`${String(n).padStart(6)}  ${law.padEnd(8)}  ${compute.toFixed(2).padStart(12)}  ${withCharts.toFixed(2).padStart(12)}${mark}`);

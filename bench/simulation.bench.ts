@@ -9,7 +9,7 @@
  */
 import type { DamperLaw } from '../src/core/dampers/index.ts';
 import { simulateSdof, type Excitation } from '../src/core/simulation/index.ts';
-import { damperSimulation } from '../src/calculators/vibration/damperSimulation.ts';
+import { damperSimulationCalculator } from '../src/calculators/vibration/damper-simulation.ts';
 import { evaluate } from '../src/calculators/evaluate.ts';
 
 const m = 10;
@@ -66,6 +66,6 @@ for (const [ln, law] of laws) {
 const page = { law: 'linear', c, m, k, x0: X, v0: 0, excitation: 'base', Y: X / 2, fExc: 6, duration: 10, rtol: 1e-9 };
 let n = 0;
 // vary an input each call so the calculator's one-entry cache does not hide the work
-const ms = time(() => { evaluate(damperSimulation, { ...page, x0: X * (1 + 1e-9 * n++) }); });
+const ms = time(() => { evaluate(damperSimulationCalculator, { ...page, x0: X * (1 + 1e-9 * n++) }); });
 console.log(`calculator evaluate() incl. 801 chart samples, linear law on base motion: ${ms.wall.toFixed(2)} ms wall, ${ms.cpu.toFixed(2)} ms CPU`);
 console.log(`load average ${(await import('node:os')).loadavg().map((x) => x.toFixed(1)).join(' ')} (timings inflate when the machine is busy)`);

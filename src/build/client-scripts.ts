@@ -18,10 +18,10 @@ import type { Plugin } from 'vite';
 
 /** Entry name → source module. The names are the keys of `virtual:dampbook/client`. */
 export const CLIENT_ENTRIES = {
-  calculator: 'src/components/internal/calculator-element.ts',
-  finder: 'src/components/internal/finder.ts',
-  sheetDetails: 'src/components/internal/sheet-details.ts',
-  studyPackage: 'src/components/internal/study-package.ts',
+  calculator: 'src/components/client/calculator-element.ts',
+  finder: 'src/components/client/finder.ts',
+  sheetDetails: 'src/components/client/sheet-details.ts',
+  studyPackage: 'src/components/client/study-package.ts',
 } as const;
 
 export type ClientEntry = keyof typeof CLIENT_ENTRIES;
@@ -32,7 +32,7 @@ export type ClientEntry = keyof typeof CLIENT_ENTRIES;
  * (the study code is five levels deep, ~0.4 s on a loaded machine; fetched at once it is one).
  */
 export const LAZY_PRELOADS = {
-  study: 'src/components/internal/study-link.ts',
+  study: 'src/components/client/study-link.ts',
 } as const;
 
 export type LazyPreload = keyof typeof LAZY_PRELOADS;
@@ -110,7 +110,7 @@ export function loaderSources(text: string): Record<string, string> {
 /**
  * Calculator id → every chunk its definition needs. A study page learns its steps' calculators
  * only when the study is read; announcing all their chunks at once saves the browser discovering
- * each calculator's imports one level at a time (src/components/internal/study-calculators.ts).
+ * each calculator's imports one level at a time (src/components/client/study-calculators.ts).
  */
 function calculatorFiles(root: string, meta: Meta): Record<string, string[]> {
   const sources = loaderSources(readFileSync(join(root, LOADERS), 'utf8'));

@@ -6,8 +6,8 @@
  */
 import { createHash } from 'node:crypto';
 import { basename } from 'node:path';
-import { isLegacyLawKey, migrateLawKeys } from '../calculators/damperLaw/migrate.ts';
-import { migrateYesNoNumbers } from '../calculators/yesNoNumbers.ts';
+import { isLegacyLawKey, migrateLawKeys } from '../calculators/shared/damperLawMigrate.ts';
+import { migrateYesNoNumbers } from '../calculators/shared/yesNoNumbers.ts';
 import { evaluate } from '../calculators/evaluate.ts';
 import type { CalculatorDefinition, Result, Values } from '../calculators/types.ts';
 import { InputRangeError } from '../core/errors.ts';

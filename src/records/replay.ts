@@ -3,9 +3,9 @@
  * SI, recomputes through the same evaluate() as the page and the CLI, and compares every
  * recorded output. Differences in page revision or core version become warnings.
  */
-import { LEGACY_LAW_KEYS, migrateLawKeys } from '../calculators/damperLaw/migrate.ts';
+import { LEGACY_LAW_KEYS, migrateLawKeys } from '../calculators/shared/damperLawMigrate.ts';
 import { evaluate } from '../calculators/evaluate.ts';
-import { isNumeralChoice, migrateYesNoNumbers } from '../calculators/yesNoNumbers.ts';
+import { isNumeralChoice, migrateYesNoNumbers } from '../calculators/shared/yesNoNumbers.ts';
 import type { CalculatorDefinition, InputDef, Outputs, Values } from '../calculators/types.ts';
 import { DampbookError } from '../core/errors.ts';
 import { relativeDifference, withinTolerance } from '../core/numeric/index.ts';

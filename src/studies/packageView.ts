@@ -3,7 +3,7 @@
  * with page revision and status, every verdict, sign-off) and one compact sheet per step (inputs
  * actually used with their origin, key formulas, results, warnings, verification summary, method
  * reference). Pure. The built package pages serialise it to HTML (`toHtml`), the page that prints
- * the study open in a browser builds it into the DOM (components/internal/study-package.ts), so
+ * the study open in a browser builds it into the DOM (components/client/study-package.ts), so
  * the two can never differ.
  */
 import type { StudyRun } from './run.ts';

@@ -51,17 +51,27 @@ export function violations(file: string, source: string): string[] {
 
 describe('import direction', () => {
   it('finds static, re-exported and dynamic imports (the checker itself can fail)', () => {
-    const bad = "import { x } from '../../components/internal/format.ts';\nexport * from '../../cli/args.ts';\nconst m = await import('node:fs');\nimport 'chart.js';";
+    const bad = "import { x } from '../../components/render/format.ts';\nexport * from '../../cli/args.ts';\nconst m = await import('node:fs');\nimport 'chart.js';";
     const found = violations(join(SRC, 'core', 'thermal', 'fake.ts'), bad);
     expect(found).toHaveLength(4);
-    expect(found[0]).toContain("imports '../../components/internal/format.ts' (components)");
+    expect(found[0]).toContain("imports '../../components/render/format.ts' (components)");
     expect(violations(join(SRC, 'core', 'thermal', 'fake.ts'), "import { air } from './air.ts';\nimport type { Q } from '../units/index.ts';")).toEqual([]);
-    expect(violations(join(SRC, 'calculators', 'x.ts'), "import { h } from '../components/internal/format.ts';")).toHaveLength(1);
-    expect(violations(join(SRC, 'cli', 'x.ts'), "import { h } from '../components/internal/format.ts';")).toHaveLength(1);
+    expect(violations(join(SRC, 'calculators', 'x.ts'), "import { h } from '../components/render/format.ts';")).toHaveLength(1);
+    expect(violations(join(SRC, 'cli', 'x.ts'), "import { h } from '../components/render/format.ts';")).toHaveLength(1);
   });
 
   it('holds for every file under src/', () => {
     const all = files(SRC).flatMap((f) => violations(f, readFileSync(f, 'utf8')));
+    expect(all).toEqual([]);
+  });
+
+  it('components/render/ is pure: no DOM globals and no client/ import (the server render uses it)', () => {
+    expect(domUse('render/fake.ts', "const d = document.createElement('div');\nimport { a } from '../client/finder.ts';\nwindow.x = 1;")).toEqual([
+      'render/fake.ts uses document', 'render/fake.ts uses window', "render/fake.ts imports '../client/finder.ts'",
+    ]);
+    expect(domUse('render/fake.ts', '// the document title\nconst s = `window`;\nconst documentLength = 2;')).toEqual([]);
+    const dir = join(SRC, 'components', 'render');
+    const all = files(dir).flatMap((f) => domUse(relative(SRC, f), readFileSync(f, 'utf8')));
     expect(all).toEqual([]);
   });
 });
@@ -87,3 +97,13 @@ describe('the calculator registry stays out of study and browser code', () => {
     expect(found).toEqual([]);
   });
 });
+const DOM_GLOBALS = ['document', 'window', 'customElements', 'localStorage', 'sessionStorage', 'navigator', 'location', 'HTMLElement', 'requestAnimationFrame'];
+
+/** DOM globals a render helper touches (comments and string literals ignored) and client/ imports. */
+export function domUse(name: string, source: string): string[] {
+  const code = source.replace(/\/\*[\s\S]*?\*\/|\/\/[^\n]*/g, '').replace(/(['"`])(?:\\.|(?!\1)[^\\\n])*\1/g, "''");
+  const used = DOM_GLOBALS.filter((g) => new RegExp(`(?<![\\w.$])${g}(?![\\w$])`).test(code)).map((g) => `${name} uses ${g}`);
+  const client = specifiers(source).filter((s) => s.includes('/client/')).map((s) => `${name} imports '${s}'`);
+  return [...used, ...client];
+}
+

@@ -13,7 +13,7 @@ import { createHash } from 'node:crypto';
 import { defaults, isActive } from '../../src/calculators/evaluate.ts';
 import { getCalculator } from '../../src/calculators/registry.ts';
 import { main } from '../../src/cli/main.ts';
-import { formatNumber } from '../../src/components/internal/format.ts';
+import { formatNumber } from '../../src/components/render/format.ts';
 import { serveStatic, type Served } from '../../src/server/staticServer.ts';
 import { printSheet } from '../../src/sheets/print.ts';
 import { launch, watchedPage } from '../helpers/browser.ts';

@@ -8,7 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/calculators/evaluate.ts';
 import { memoLast, oncePerValues } from '../../src/calculators/memoLast.ts';
 import { getCalculator } from '../../src/calculators/registry.ts';
-import { sineRecord } from '../../src/calculators/duty/demoRecord.ts';
+import { sineRecord } from '../../src/calculators/duty/recorded-motion.demo.ts';
 
 describe('memoLast', () => {
   it('calls the function once while the arguments stay the same, again when one changes', () => {

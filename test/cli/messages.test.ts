@@ -82,7 +82,7 @@ describe('CLI messages', () => {
 
 describe('one decimal-comma rule for the page and the CLI', () => {
   it.each(['1,5', '1,5 kg', '1,500', '-0,25e3'])('calc refuses m=%s with the message the page shows at the field', async (m) => {
-    const { DECIMAL_COMMA, readField } = await import('../../src/components/internal/fieldState.ts');
+    const { DECIMAL_COMMA, readField } = await import('../../src/components/render/fieldState.ts');
     const def = getCalculator('sdof')!.inputs.find((i) => i.key === 'm')!;
     expect(readField(def, m, 'kg', {})).toEqual({ ok: false, message: DECIMAL_COMMA });
     const r = await run('calc', 'sdof', '--in', `m=${m}`, '--in', 'k=4000', '--in', 'c=40');

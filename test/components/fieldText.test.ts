@@ -9,8 +9,8 @@ import { describe, expect, it } from 'vitest';
 import { calculators } from '../../src/calculators/registry.ts';
 import { evaluate } from '../../src/calculators/evaluate.ts';
 import { hasQuantityToken, q } from '../../src/calculators/quantityText.ts';
-import { DECIMAL_COMMA, parseTyped, readField, splitTyped, textSum } from '../../src/components/internal/fieldState.ts';
-import { quantityText } from '../../src/components/internal/format.ts';
+import { DECIMAL_COMMA, parseTyped, readField, splitTyped, textSum } from '../../src/components/render/fieldState.ts';
+import { quantityText } from '../../src/components/render/format.ts';
 
 describe('typed numbers', () => {
   it('takes a decimal point and refuses a decimal comma with the rule', () => {

@@ -7,7 +7,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { countRows as cliRows } from '../../src/cli/inputs.ts';
-import { countRows, describeHeld, holdText, LARGE_TEXT } from '../../src/components/internal/heldText.ts';
+import { countRows, describeHeld, holdText, LARGE_TEXT } from '../../src/components/render/heldText.ts';
 
 describe('held long text', () => {
   it('counts non-empty lines exactly as the CLI summary does, for any mix of line ends and blanks', () => {

@@ -5,7 +5,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { simplifyPolyline } from '../../src/components/internal/polyline.ts';
+import { simplifyPolyline } from '../../src/components/render/polyline.ts';
 
 /** Distance from (px, py) to the segment a–b. */
 function segDist(px: number, py: number, ax: number, ay: number, bx: number, by: number): number {

@@ -4,11 +4,11 @@
  * Conversion factor: 1 lb = 0.45359237 kg (NIST SP 811 (2008), Appendix B.8; published, exact).
  */
 import { describe, expect, it } from 'vitest';
-import { sdof } from '../../src/calculators/vibration/sdof.ts';
+import { sdofCalculator } from '../../src/calculators/vibration/sdof.ts';
 import type { NumberInput } from '../../src/calculators/types.ts';
-import { convertTolerance, readTolerance } from '../../src/components/internal/toleranceField.ts';
+import { convertTolerance, readTolerance } from '../../src/components/render/toleranceField.ts';
 
-const m = sdof.inputs.find((d) => d.key === 'm') as NumberInput;
+const m = sdofCalculator.inputs.find((d) => d.key === 'm') as NumberInput;
 const LB = 0.45359237;
 
 describe('tolerance boxes', () => {

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../src/calculators/evaluate.ts';
 import { getCalculator } from '../../src/calculators/registry.ts';
-import { migrateYesNoNumbers } from '../../src/calculators/yesNoNumbers.ts';
+import { migrateYesNoNumbers } from '../../src/calculators/shared/yesNoNumbers.ts';
 import { readInputs } from '../../src/cli/inputs.ts';
 import { parseRecord } from '../../src/records/record.ts';
 import { makeRecord, replayRecord } from '../../src/records/replay.ts';

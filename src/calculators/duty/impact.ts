@@ -2,7 +2,7 @@ import { InputRangeError } from '../../core/errors.ts';
 import { deratedEnergyPerHour, equivalentImpact, linearStop, resetShare, stopEnergy, STANDARD_GRAVITY, type ImpactLoad } from '../../core/duty/index.ts';
 import { choice, defineCalculator, num, optNum, type ChartSpec, type Values } from '../types.ts';
 import { q } from '../quantityText.ts';
-import { IMPACT_CASES } from './impactCases.ts';
+import { IMPACT_CASES } from './impact.cases.ts';
 
 const CASES = ['linear', 'rotary', 'freefall', 'incline', 'conveyor'] as const;
 type LoadCase = (typeof CASES)[number];
@@ -34,7 +34,7 @@ function setup(values: Values) {
 const onCase = (...is: LoadCase[]) => ({ when: { key: 'loadCase', is } });
 
 /** End-stop impacts: energy per stroke and per hour, mean power, ideal and linear-dashpot stop forces. */
-export const impact = defineCalculator({
+export const impactCalculator = defineCalculator({
   id: 'impact',
   title: 'End-stop impacts: energy, mean power and stop force',
   summary: 'Energy an end-stop damper absorbs per stroke for a carriage, a swinging arm or turntable, a free fall, a slope or a conveyor, shared by one or more stops: effective mass, mean power, energy per hour against the body rating derated for the ambient, reset time, and the force of an ideal stop and of a linear dashpot.',

@@ -1,12 +1,12 @@
 import type { CalculatorDefinition } from '../types.ts';
-import { harmonicDutyCalc } from './harmonicDutyCalc.ts';
-import { impact } from './impact.ts';
-import { recordedMotionCalc } from './recordedMotionCalc.ts';
-import { roadPower } from './roadPower.ts';
-import { storeyDampers } from './storeyDampersCalc.ts';
-import { structuralDampers } from './structuralDampersCalc.ts';
-import { propertyBoundsCalc } from './propertyBoundsCalc.ts';
-import { testProtocolCalc } from './testProtocolCalc.ts';
-import { randomDutyCalc } from './randomDutyCalc.ts';
+import { harmonicDutyCalculator } from './harmonic-duty.ts';
+import { impactCalculator } from './impact.ts';
+import { recordedMotionCalculator } from './recorded-motion.ts';
+import { roadPowerCalculator } from './road-power.ts';
+import { storeyDampersCalculator } from './storey-dampers.ts';
+import { structuralDampersCalculator } from './structural-dampers.ts';
+import { propertyBoundsCalculator } from './property-bounds.ts';
+import { testProtocolCalculator } from './test-protocol.ts';
+import { randomDutyCalculator } from './random-duty.ts';
 
-export const dutyCalculators: readonly CalculatorDefinition[] = [harmonicDutyCalc, roadPower, impact, structuralDampers, storeyDampers, recordedMotionCalc, propertyBoundsCalc, testProtocolCalc, randomDutyCalc];
+export const dutyCalculators: readonly CalculatorDefinition[] = [harmonicDutyCalculator, roadPowerCalculator, impactCalculator, structuralDampersCalculator, storeyDampersCalculator, recordedMotionCalculator, propertyBoundsCalculator, testProtocolCalculator, randomDutyCalculator];

@@ -1,14 +1,14 @@
 import type { CalculatorDefinition } from '../types.ts';
-import { bodyCoolingCalc } from './bodyCooling.ts';
-import { steadyTemperatureCalc } from './steadyTemperature.ts';
-import { powerRatingCalc } from './powerRating.ts';
-import { warmUpCalc } from './warmUp.ts';
-import { oilViscosityCalc } from './oilViscosity.ts';
-import { dampingFadeCalc } from './dampingFade.ts';
-import { fadeFitCalc } from './fadeFit.ts';
-import { gasChargeCalc } from './gasCharge.ts';
-import { thermalLifeCalc } from './thermalLife.ts';
+import { bodyCoolingCalculator } from './body-cooling.ts';
+import { steadyTemperatureCalculator } from './steady-temperature.ts';
+import { powerRatingCalculator } from './power-rating.ts';
+import { warmUpCalculator } from './warm-up.ts';
+import { oilViscosityCalculator } from './oil-viscosity.ts';
+import { dampingFadeCalculator } from './damping-fade.ts';
+import { fadeFitCalculator } from './fade-fit.ts';
+import { gasChargeCalculator } from './gas-charge.ts';
+import { thermalLifeCalculator } from './thermal-life.ts';
 
 export const thermalCalculators: readonly CalculatorDefinition[] = [
-  bodyCoolingCalc, steadyTemperatureCalc, powerRatingCalc, warmUpCalc, oilViscosityCalc, dampingFadeCalc, fadeFitCalc, gasChargeCalc, thermalLifeCalc,
+  bodyCoolingCalculator, steadyTemperatureCalculator, powerRatingCalculator, warmUpCalculator, oilViscosityCalculator, dampingFadeCalculator, fadeFitCalculator, gasChargeCalculator, thermalLifeCalculator,
 ];

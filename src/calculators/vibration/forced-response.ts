@@ -20,7 +20,7 @@ function ratios(rOp: number): number[] {
 }
 
 /** Steady response to a harmonic force or base motion: amplitudes, phase, transmissibility, damper duty. */
-export const forcedResponseCalc = defineCalculator({
+export const forcedResponseCalculator = defineCalculator({
   id: 'forced-response',
   title: 'Forced harmonic response and isolation',
   summary: 'Steady amplitude, phase, transmissibility, damper stroke, damper velocity and mean damper power of a mass on a spring and viscous damper driven by a harmonic force or base motion.',

@@ -2,7 +2,7 @@ import { halfPowerDamping, halfPowerPeakFrequency, type HalfPowerResponse } from
 import { choice, defineCalculator, num } from '../types.ts';
 
 /** Damping ratio from the half-power bandwidth of a measured resonance. */
-export const halfPowerCalc = defineCalculator({
+export const halfPowerCalculator = defineCalculator({
   id: 'half-power',
   title: 'Damping from the half-power bandwidth',
   summary: 'Damping ratio and quality factor from the two frequencies where a measured resonance falls to its peak over √2, exact for an SDOF response and with the small-damping estimate beside it.',

@@ -1,14 +1,14 @@
 import type { CalculatorDefinition } from '../types.ts';
-import { sdof } from './sdof.ts';
-import { forcedResponseCalc } from './forced-response.ts';
-import { logDecrementCalc } from './log-decrement.ts';
-import { halfPowerCalc } from './half-power.ts';
-import { ringDownCalc } from './ring-down.ts';
-import { tmdTuningCalc } from './tmd-tuning.ts';
-import { energyPerCycle } from './energyPerCycle.ts';
-import { damperSimulation } from './damperSimulation.ts';
-import { fvFit } from './fvFit.ts';
+import { sdofCalculator } from './sdof.ts';
+import { forcedResponseCalculator } from './forced-response.ts';
+import { logDecrementCalculator } from './log-decrement.ts';
+import { halfPowerCalculator } from './half-power.ts';
+import { ringDownCalculator } from './ring-down.ts';
+import { tmdTuningCalculator } from './tmd-tuning.ts';
+import { energyPerCycleCalculator } from './energy-per-cycle.ts';
+import { damperSimulationCalculator } from './damper-simulation.ts';
+import { fvFitCalculator } from './fv-fit.ts';
 
 export const vibrationCalculators: readonly CalculatorDefinition[] = [
-  sdof, forcedResponseCalc, logDecrementCalc, halfPowerCalc, ringDownCalc, tmdTuningCalc, energyPerCycle, damperSimulation, fvFit,
+  sdofCalculator, forcedResponseCalculator, logDecrementCalculator, halfPowerCalculator, ringDownCalculator, tmdTuningCalculator, energyPerCycleCalculator, damperSimulationCalculator, fvFitCalculator,
 ];

@@ -2,7 +2,7 @@ import { logDecrementFromPeaks, naturalFromDampedPeriod, zetaFromLogDecrement } 
 import { defineCalculator, num, optNum } from '../types.ts';
 
 /** Damping ratio from two peaks of a free decay n cycles apart. */
-export const logDecrementCalc = defineCalculator({
+export const logDecrementCalculator = defineCalculator({
   id: 'log-decrement',
   title: 'Damping from the logarithmic decrement',
   summary: 'Logarithmic decrement and damping ratio (exact and small-damping forms) from two peaks of a free decay; with the damped period and the mass, also the natural frequency, stiffness and damping coefficient.',

@@ -2,7 +2,7 @@ import { ComputationError, InputRangeError } from '../../core/errors.ts';
 import { readTimeSeries } from '../../core/records/index.ts';
 import { ringDown } from '../../core/vibration/index.ts';
 import { choice, defineCalculator, num, optNum, text, type ChartSpec, type Values } from '../types.ts';
-import { DEMO_RECORD, syntheticRingDown } from './ringDownRecords.ts';
+import { DEMO_RECORD, syntheticRingDown } from './ring-down.records.ts';
 import { q } from '../quantityText.ts';
 import { memoLast } from '../memoLast.ts';
 
@@ -34,7 +34,7 @@ const MOUNT = syntheticRingDown({ wn: 20, zeta: 0.05, amplitude: 2.5, offset: -0
 const NOISY = syntheticRingDown({ wn: 20, zeta: 0.02, amplitude: 1, offset: 0.3, phase: 0.2, cycles: 14, samplesPerCycle: 30, noise: 0.005, jitter: 0.5, seed: 2026, header: 't;x', delimiter: ';', digits: 5 });
 
 /** Damping, frequencies and (with m or k) the damper coefficient from a pasted free-decay record. */
-export const ringDownCalc = defineCalculator({
+export const ringDownCalculator = defineCalculator({
   id: 'ring-down',
   title: 'Damping from a ring-down record',
   summary: 'Finds the peaks of a pasted free-decay record, fits the exponential decay and reports the damping ratio, damped and natural frequency, fit quality and, with the mass or stiffness, the damping coefficient.',

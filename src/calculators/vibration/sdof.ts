@@ -13,7 +13,7 @@ function oscillator(values: Values) {
 /** Samples of the energy audit, shared by the results and the chart (one closure value on the page). */
 const AUDIT_SAMPLES = 401;
 /** Free vibration of a mass–spring–viscous-damper system: frequencies, damping, regime, energy. */
-export const sdof = defineCalculator({
+export const sdofCalculator = defineCalculator({
   id: 'sdof',
   title: 'Damped single-degree-of-freedom oscillator',
   summary: 'Natural and damped frequency, damping ratio, regime and free response of a mass on a spring with a viscous damper.',

@@ -20,7 +20,7 @@ function setup(values: Values) {
 }
 
 /** Classical absorber tuning for an undamped primary, then the exact 2-DOF response with those values. */
-export const tmdTuningCalc = defineCalculator({
+export const tmdTuningCalculator = defineCalculator({
   id: 'tmd-tuning',
   title: 'Tuned mass damper: tuning and exact response',
   summary: 'Optimum absorber frequency and damping (Den Hartog for a harmonic force, Warburton for harmonic base acceleration and white noise), absorber mass, spring and damper, then the exact peak response, absorber stroke, damper force and damper power.',

@@ -1,7 +1,7 @@
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { getCalculator } from '../../calculators/registry.ts';
-import { isLegacyLawKey } from '../../calculators/damperLaw/migrate.ts';
+import { isLegacyLawKey } from '../../calculators/shared/damperLawMigrate.ts';
 import { checkBase, findPage, printSheet, SheetError, type SheetFields, type SheetText } from '../../sheets/print.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
 import { evaluateInputs, readInputs, summariseText, textLabel } from '../inputs.ts';

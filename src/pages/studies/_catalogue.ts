@@ -5,8 +5,8 @@
  * browser gets it as JSON.
  */
 import katex from 'katex';
-import { handbookPages } from '../../components/internal/pageIndex.ts';
-import { pageUrl } from '../../components/internal/pageUrl.ts';
+import { handbookPages } from '../../content/pageIndex.ts';
+import { pageUrl } from '../../content/pageUrl.ts';
 import { verifyPage } from '../../content/verify.ts';
 import { KEY_FORMULAS } from '../../studies/formulas.ts';
 import type { Catalogue, PageInfo } from '../../studies/packageView.ts';

@@ -1,16 +1,16 @@
 /**
  * One damper model everywhere: every calculator with a `law` input, as `dampbook list --json`
  * reports it, uses exactly the canonical law keys with their quantity kinds (CLI contract, see
- * src/calculators/damperLaw/inputs.ts). Contract test of the project's own interface: no external
+ * src/calculators/shared/damperLawInputs.ts). Contract test of the project's own interface: no external
  * reference value is involved.
  */
 import { describe, expect, it } from 'vitest';
 import { main } from '../../../src/cli/main.ts';
 import { calculators, getCalculator } from '../../../src/calculators/registry.ts';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
-import { lawChart } from '../../../src/calculators/damperLaw/chart.ts';
-import { LAW_KEYS } from '../../../src/calculators/damperLaw/inputs.ts';
-import { LEGACY_LAW_KEYS } from '../../../src/calculators/damperLaw/migrate.ts';
+import { lawChart } from '../../../src/calculators/shared/damperLawChart.ts';
+import { LAW_KEYS } from '../../../src/calculators/shared/damperLawInputs.ts';
+import { LEGACY_LAW_KEYS } from '../../../src/calculators/shared/damperLawMigrate.ts';
 
 /** The parameters each law needs. */
 const PARAMS: Record<string, readonly string[]> = {

@@ -4,7 +4,7 @@
  * forms named at each case; provenance: closed form.
  */
 import { describe, expect, it } from 'vitest';
-import { migrateLawKeys } from '../../../src/calculators/damperLaw/migrate.ts';
+import { migrateLawKeys } from '../../../src/calculators/shared/damperLawMigrate.ts';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
 import { getCalculator } from '../../../src/calculators/registry.ts';
 import { makeRecord, replayRecord } from '../../../src/records/replay.ts';

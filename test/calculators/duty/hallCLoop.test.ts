@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { hallCLoopRecord } from '../../../src/calculators/duty/demoRecord.ts';
+import { hallCLoopRecord } from '../../../src/calculators/duty/recorded-motion.demo.ts';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
 import { getCalculator } from '../../../src/calculators/registry.ts';
 import { lambdaAlpha } from '../../../src/core/dampers/index.ts';

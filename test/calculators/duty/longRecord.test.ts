@@ -28,7 +28,7 @@ describe('harmonic-duty: hysteretic warning', () => {
 
 describe('recorded-motion: velocity differentiated from a coarsely sampled displacement', () => {
   it('warns below 100 samples per cycle (the 3-point derivative is low by (ωh)²/6: mean power −0.53 % at 50 per cycle, closed form)', async () => {
-    const { sineRecord } = await import('../../../src/calculators/duty/demoRecord.ts');
+    const { sineRecord } = await import('../../../src/calculators/duty/recorded-motion.demo.ts');
     const calc = getCalculator('recorded-motion')!;
     const coarse = evaluate(calc, { csv: sineRecord({ X: 0.02, f: 2, cycles: 20, rate: 100, columns: 'tx' }), layout: 'auto' });
     expect(coarse.warnings.join(' ')).toMatch(/samples per cycle/);

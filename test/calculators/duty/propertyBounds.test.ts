@@ -2,8 +2,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
-import { propertyBoundsCalc } from '../../../src/calculators/duty/propertyBoundsCalc.ts';
-import { structuralDampers } from '../../../src/calculators/duty/structuralDampersCalc.ts';
+import { propertyBoundsCalculator } from '../../../src/calculators/duty/property-bounds.ts';
+import { structuralDampersCalculator } from '../../../src/calculators/duty/structural-dampers.ts';
 import { propertyBounds } from '../../../src/core/duty/index.ts';
 import { fadeRatio, andradeCurve } from '../../../src/core/thermal/index.ts';
 import { InputRangeError } from '../../../src/core/errors.ts';
@@ -23,24 +23,24 @@ const TABLE: readonly { name: string; f: Omit<typeof NOMINAL, 'C'>; lamMax: numb
 
 describe('property-bounds', () => {
   it.each(TABLE)('$name ($provenance)', (row) => {
-    const r = evaluate(propertyBoundsCalc, { ...row.f, C: 1 });
+    const r = evaluate(propertyBoundsCalculator, { ...row.f, C: 1 });
     expectClose({ label: 'lamMax', computed: r.outputs.lamMax as number, expected: row.lamMax, tol: 5e-5, why: 'reference rounded to 5 s.f.' });
     expectClose({ label: 'lamMin', computed: r.outputs.lamMin as number, expected: row.lamMin, tol: 1e-9, why: 'exact decimals' });
   });
   it('Cupper and Clower are C·λ_max and C·λ_min (contract keys)', () => {
-    const r = evaluate(propertyBoundsCalc, NOMINAL, { fillDefaults: false });
+    const r = evaluate(propertyBoundsCalculator, NOMINAL, { fillDefaults: false });
     expectClose({ label: 'Cupper', computed: r.outputs.Cupper as number, expected: 259612.5, tol: 1e-12, why: 'same arithmetic' });
     expectClose({ label: 'Clower', computed: r.outputs.Clower as number, expected: 161500, tol: 1e-12, why: 'same arithmetic' });
   });
   it('refuses a maximum factor below 1 or a minimum above 1, naming it', () => {
     expect(() => propertyBounds({ ...NOMINAL, lamSpecMax: 0.9 })).toThrow(InputRangeError);
-    expect(() => evaluate(propertyBoundsCalc, { ...NOMINAL, lamTestMin: 1.05 })).toThrow(/lamTestMin/);
+    expect(() => evaluate(propertyBoundsCalculator, { ...NOMINAL, lamTestMin: 1.05 })).toThrow(/lamTestMin/);
   });
   it('the temperature factors are c(T_min)/c(T_ref) and c(T_max + rise)/c(T_ref) of the fade law, multiplied into the bounds', () => {
     const nu40 = 3e-4;
     const nu100 = 1.2e-4;
     const inputs = { ...NOMINAL, fade: 'law', fluid: 'silicone', nu40, nu100, share: 0.6, fadeLaw: 'share', Tref: 293.15, Tmin: 263.15, Tmax: 308.15, dTevent: 12 };
-    const r = evaluate(propertyBoundsCalc, inputs);
+    const r = evaluate(propertyBoundsCalculator, inputs);
     // closed form of the share law on the two-point Andrade line (ln ν linear in 1/T)
     const model = { cRef: 1, Tref: 293.15, viscousShare: 0.6, oil: andradeCurve(313.15, nu40, 373.15, nu100) };
     const lamT = fadeRatio(model, 263.15);
@@ -65,15 +65,15 @@ describe('property-bounds', () => {
   });
   it('structural-dampers: factors of 1 leave every output as before; λ scale the peak force and the damping credited', () => {
     const base = { Fref: 2e5, vref: 1, alpha: 0.4, n: 4, theta: (40 * Math.PI) / 180, drift: 0.015, T: 0.5, k: 6e7 };
-    const nominal = evaluate(structuralDampers, base);
+    const nominal = evaluate(structuralDampersCalculator, base);
     expect(nominal.outputs.FpeakUpper).toBe(nominal.outputs.Fpeak);
     expect(nominal.outputs.betaSupLower).toBe(nominal.outputs.betaSup);
-    const b = evaluate(structuralDampers, { ...base, lamMax: 1.2980625, lamMin: 0.8075 });
+    const b = evaluate(structuralDampersCalculator, { ...base, lamMax: 1.2980625, lamMin: 0.8075 });
     for (const k of ['Fpeak', 'Wj', 'betaSup', 'P', 'dT']) expect(b.outputs[k]).toBe(nominal.outputs[k]);
     // closed form: F and W_j are linear in C (FEMA 356 §9.3 energy method, from memory)
     expectClose({ label: 'FpeakUpper', computed: b.outputs.FpeakUpper as number, expected: 1.2980625 * (nominal.outputs.Fpeak as number), tol: 1e-12, why: 'linear in C' });
     expectClose({ label: 'betaSupLower', computed: b.outputs.betaSupLower as number, expected: 0.8075 * (nominal.outputs.betaSup as number), tol: 1e-12, why: 'linear in C' });
-    const upper = evaluate(structuralDampers, { ...base, Fref: 2e5 * 1.2980625 });
+    const upper = evaluate(structuralDampersCalculator, { ...base, Fref: 2e5 * 1.2980625 });
     expectClose({ label: 'upper = nominal run with C·λ_max', computed: b.outputs.FpeakUpper as number, expected: upper.outputs.Fpeak as number, tol: 1e-12, why: 'same arithmetic' });
   });
 });

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
-import { testProtocolCalc } from '../../../src/calculators/duty/testProtocolCalc.ts';
+import { testProtocolCalculator } from '../../../src/calculators/duty/test-protocol.ts';
 import { parseProtocol, protocolHeating } from '../../../src/core/duty/index.ts';
 import { andradeCurve, fadeRatio } from '../../../src/core/thermal/index.ts';
 import { ComputationError, InputRangeError } from '../../../src/core/errors.ts';
@@ -12,7 +12,7 @@ const WIND = { protocol: '2000, 0.01, 0.25, 0', law: 'linear', c: 1e6, Cth: 122e
 
 describe('test-protocol', () => {
   it('2000 cycles of 10 mm at 0.25 Hz on 1 MN·s/m: 493.5 J per cycle (πcωX², Chopra, Dynamics of Structures, 5th ed., eq. 3.8.1, published) and 8.09 K on 122 kJ/K (energy balance, closed form)', () => {
-    const r = evaluate(testProtocolCalc, WIND, { fillDefaults: false });
+    const r = evaluate(testProtocolCalculator, WIND, { fillDefaults: false });
     expectClose({ label: 'Efirst', computed: r.outputs.Efirst as number, expected: 493.5, tol: 1e-4, why: 'reference to 4 s.f.' });
     expectClose({ label: 'Elast', computed: r.outputs.Elast as number, expected: 493.5, tol: 1e-4, why: 'no fade: every cycle alike' });
     expectClose({ label: 'dTpeak', computed: r.outputs.dTpeak as number, expected: 8.09, tol: 5e-4, why: 'reference to 3 s.f.' });
@@ -21,14 +21,14 @@ describe('test-protocol', () => {
     for (const k of ['Efirst', 'Elast', 'Eratio', 'dTpeak', 'Tpeak', 'Tend', 'energy']) expect(typeof r.outputs[k]).toBe('number');
   });
   it('with UA = 5 W/K: 6.90 K after 8000 s (lumped warm-up (P/UA)(1 − e^(−t/τ)), Incropera et al., Fundamentals of Heat and Mass Transfer, 6th ed., §5.3, from memory)', () => {
-    const r = evaluate(testProtocolCalc, { ...WIND, UA: 5 });
+    const r = evaluate(testProtocolCalculator, { ...WIND, UA: 5 });
     expectClose({ label: 'Tend − Tamb', computed: (r.outputs.Tend as number) - 293.15, expected: 6.90, tol: 1e-3, why: 'reference to 3 s.f.' });
   });
   it('a header with units reads mm and a rest; a bad row is named by its line', () => {
     expect(parseProtocol('# test\nN, X [mm], f [Hz], rest [min]\n10, 5, 1, 2', 'protocol')).toEqual([{ N: 10, X: 0.005, f: 1, rest: 120 }]);
-    expect(() => evaluate(testProtocolCalc, { ...WIND, protocol: '2000, 0.01, 0.25' })).toThrow(/protocol/);
-    expect(() => evaluate(testProtocolCalc, { ...WIND, protocol: '10.5, 0.01, 0.25, 0' })).toThrow(InputRangeError);
-    expect(() => evaluate(testProtocolCalc, { ...WIND, protocol: '2000000, 0.01, 0.25, 0' })).toThrow(InputRangeError);
+    expect(() => evaluate(testProtocolCalculator, { ...WIND, protocol: '2000, 0.01, 0.25' })).toThrow(/protocol/);
+    expect(() => evaluate(testProtocolCalculator, { ...WIND, protocol: '10.5, 0.01, 0.25, 0' })).toThrow(InputRangeError);
+    expect(() => evaluate(testProtocolCalculator, { ...WIND, protocol: '2000000, 0.01, 0.25, 0' })).toThrow(InputRangeError);
   });
   it('refuses to integrate past 400 °C with a typed error', () => {
     expect(() => protocolHeating([{ N: 100, X: 0.1, f: 5, rest: 0 }], { kind: 'linear', c: 1e7 }, { Cth: 1000, UA: 0, Tamb: 293.15 })).toThrow(ComputationError);

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { getCalculator } from '../../../src/calculators/registry.ts';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
 import type { CalculatorDefinition } from '../../../src/calculators/types.ts';
-import { HOT_SURROUNDINGS_WARNING } from '../../../src/calculators/thermal/powerRating.ts';
+import { HOT_SURROUNDINGS_WARNING } from '../../../src/calculators/thermal/power-rating.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 function calc(id: string): CalculatorDefinition {

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { damperSimulation } from '../../../src/calculators/vibration/damperSimulation.ts';
+import { damperSimulationCalculator } from '../../../src/calculators/vibration/damper-simulation.ts';
 import { evaluate, defaults } from '../../../src/calculators/evaluate.ts';
 
-const run = (inputs: Record<string, unknown>) => evaluate(damperSimulation, { ...defaults(damperSimulation), ...inputs });
+const run = (inputs: Record<string, unknown>) => evaluate(damperSimulationCalculator, { ...defaults(damperSimulationCalculator), ...inputs });
 
 describe('damper-simulation calculator', () => {
   it('closes the energy audit below 1e-6 at the defaults for every law', () => {
@@ -27,7 +27,7 @@ describe('damper-simulation calculator', () => {
 
   it('draws four charts and the law\'s force–velocity curve, with the energy balance flat at E₀', () => {
     const r = run({ law: 'bilinear', excitation: 'none', x0: 0.05 });
-    const charts = damperSimulation.charts!(r.values);
+    const charts = damperSimulationCalculator.charts!(r.values);
     expect(charts.map((c) => c.id)).toEqual(['displacement', 'force', 'loop', 'energy', 'law']);
     const balance = charts[3]!.series[3]!.y;
     const E0 = r.outputs.E0 as number;

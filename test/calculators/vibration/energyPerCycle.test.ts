@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { energyPerCycle } from '../../../src/calculators/vibration/energyPerCycle.ts';
+import { energyPerCycleCalculator } from '../../../src/calculators/vibration/energy-per-cycle.ts';
 import { evaluate, defaults } from '../../../src/calculators/evaluate.ts';
 import { energyPerCycleQuadrature } from '../../../src/core/dampers/index.ts';
 import { InputRangeError } from '../../../src/core/errors.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
-const run = (inputs: Record<string, unknown>) => evaluate(energyPerCycle, inputs);
+const run = (inputs: Record<string, unknown>) => evaluate(energyPerCycleCalculator, inputs);
 
 /** Shoelace area of the closed force–displacement loop: the work of one cycle. */
 function loopArea(x: readonly number[], y: readonly number[]): number {
@@ -31,7 +31,7 @@ describe('energy-per-cycle calculator', () => {
   it('draws a force–displacement loop whose area is the energy per cycle', () => {
     for (const inputs of [{ law: 'linear', c: 1500, X: 0.025, f: 1.5 }, { law: 'power', Fref: 800, alpha: 0.5, X: 0.025, f: 1.5 }, { law: 'bilinear', c1: 3000, c2: 900, c1c: 1200, c2c: 360, vknee: 0.1, X: 0.05, f: 2 }]) {
       const r = run(inputs);
-      const loop = energyPerCycle.charts!(r.values, r).find((c) => c.id === 'loop')!;
+      const loop = energyPerCycleCalculator.charts!(r.values, r).find((c) => c.id === 'loop')!;
       expectClose({ label: `loop area ${inputs.law}`, computed: loopArea(loop.series[0]!.x, loop.series[0]!.y), expected: r.outputs.E as number, tol: 2e-4, why: 'polygon of 241 points' });
     }
   });
@@ -50,7 +50,7 @@ describe('energy-per-cycle calculator', () => {
   });
 
   it('feeds its mean power to the steady-temperature page', () => {
-    expect(energyPerCycle.outputs.find((o) => o.key === 'P')!.feeds).toEqual([{ page: 'steady-temperature', input: 'P', label: 'Steady damper temperature at this power' }]);
+    expect(energyPerCycleCalculator.outputs.find((o) => o.key === 'P')!.feeds).toEqual([{ page: 'steady-temperature', input: 'P', label: 'Steady damper temperature at this power' }]);
   });
 
   it('reports ζ_eq of a linear damper equal to its own ζ at any amplitude and frequency', () => {
@@ -65,7 +65,7 @@ describe('energy-per-cycle calculator', () => {
   it('never reports negative energy, and energy rises with amplitude, for every law at its defaults', () => {
     for (const law of ['linear', 'power', 'coulomb', 'bilinear', 'hysteretic']) {
       fc.assert(fc.property(fc.double({ min: 1e-4, max: 1, noNaN: true }), (X) => {
-        const base = { ...defaults(energyPerCycle), law };
+        const base = { ...defaults(energyPerCycleCalculator), law };
         const e1 = run({ ...base, X }).outputs.E as number;
         const e2 = run({ ...base, X: X * 1.1 }).outputs.E as number;
         return e1 >= 0 && e2 > e1;

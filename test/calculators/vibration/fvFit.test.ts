@@ -8,7 +8,7 @@ import { describe, expect, it } from 'vitest';
 import { defaults, evaluate } from '../../../src/calculators/evaluate.ts';
 import { feedQuery } from '../../../src/calculators/feeds.ts';
 import { getCalculator } from '../../../src/calculators/registry.ts';
-import { bothWays, sheetOf, speeds } from '../../../src/calculators/vibration/fvFitRecords.ts';
+import { bothWays, sheetOf, speeds } from '../../../src/calculators/vibration/fv-fit.records.ts';
 import { damperForce, energyPerCycle } from '../../../src/core/dampers/index.ts';
 import { InputRangeError } from '../../../src/core/errors.ts';
 import { expectClose } from '../../helpers/expectClose.ts';

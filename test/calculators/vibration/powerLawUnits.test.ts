@@ -8,7 +8,7 @@
 import { describe, expect, it } from 'vitest';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
 import { getCalculator } from '../../../src/calculators/registry.ts';
-import { readField } from '../../../src/components/internal/fieldState.ts';
+import { readField } from '../../../src/components/render/fieldState.ts';
 
 const calc = getCalculator('energy-per-cycle')!;
 const LBF = 4.4482216152605;

@@ -7,7 +7,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { blockPower, findSegments, MAX_POWER_BLOCKS, parseRecordedMotion, recordedMotion } from '../../../src/core/duty/index.ts';
 import { ComputationError } from '../../../src/core/errors.ts';
-import { sineRecord } from '../../../src/calculators/duty/demoRecord.ts';
+import { sineRecord } from '../../../src/calculators/duty/recorded-motion.demo.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('blockPower', () => {
