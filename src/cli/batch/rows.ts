@@ -4,17 +4,17 @@
  * what the same text means after `--in`, and an empty cell is an input not given (the defaults and
  * the "required" rule of `calc`). Used in process and by the worker threads alike.
  */
-import { getCalculator } from '../../calculators/registry.ts';
 import type { CalculatorDefinition } from '../../calculators/types.ts';
 import { DampbookError } from '../../core/errors.ts';
 import { UsageError } from '../args.ts';
 import { escapeControls } from '../escape.ts';
 import { evaluateInputs, readInputs, summariseText, textLabel } from '../inputs.ts';
+import { requireCalculator } from '../lookup.ts';
 
 export type RowValue = number | string | boolean;
 
 export type RowResult =
-  | { readonly row: number; readonly inputs?: Record<string, RowValue>; readonly outputs: Record<string, RowValue> }
+  | { readonly row: number; readonly inputs?: Record<string, RowValue>; readonly outputs: Record<string, RowValue>; readonly warnings: readonly string[] }
   | { readonly row: number; readonly error: string };
 
 /** A chunk of rows sent to a worker: `first` is the 1-based number of its first data row. */
@@ -42,20 +42,20 @@ export function runRow(def: CalculatorDefinition, header: readonly string[], cel
     const r = evaluateInputs(def, read);
     const outputs: Record<string, RowValue> = {};
     for (const o of def.outputs) { const v = r.outputs[o.key]; if (v !== undefined) outputs[o.key] = v as RowValue; }
-    if (!withInputs) return { row, outputs };
+    const warnings = r.warnings.map(escapeControls);
+    if (!withInputs) return { row, outputs, warnings };
     const inputs: Record<string, RowValue> = {};
     for (const [k, v] of Object.entries(r.values)) {
       // text inputs are summarised as `calc --json` does, never echoed back
       inputs[k] = typeof v === 'string' && def.inputs.find((d) => d.key === k)?.kind === 'text' ? textLabel(read.texts.find((x) => x.key === k) ?? summariseText(k, v)) : v as RowValue;
     }
-    return { row, inputs, outputs };
+    return { row, inputs, outputs, warnings };
   } catch (e) {
     return { row, error: messageOf(e) };
   }
 }
 
 export function runChunk(chunk: RowChunk): RowResult[] {
-  const def = getCalculator(chunk.id);
-  if (!def) throw new UsageError(`unknown calculator '${chunk.id}'`);
+  const def = requireCalculator('batch', chunk.id);
   return chunk.rows.map((cells, i) => runRow(def, chunk.header, cells, chunk.first + i, chunk.withInputs));
 }
