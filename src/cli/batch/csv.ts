@@ -11,6 +11,8 @@ export class CsvError extends Error {
 
 /** Parses CSV text into records of fields. Throws CsvError naming the line of an unclosed quote. */
 export function parseCsv(text: string): string[][] {
+  // a byte-order mark (spreadsheet exports) is not part of the first column's name
+  if (text.startsWith('\uFEFF')) text = text.slice(1);
   const rows: string[][] = [];
   let row: string[] = [];
   let field = '';
