@@ -1,4 +1,7 @@
-/** A batch worker thread: evaluates each chunk it is sent and posts the results back in order. */
+/**
+ * A batch worker thread: says it is ready once its sources are loaded (the pool sends chunks only
+ * then), then evaluates each chunk it is sent and posts the results back.
+ */
 import { parentPort } from 'node:worker_threads';
 import { runChunk, type RowChunk } from './rows.ts';
 
@@ -9,3 +12,5 @@ parentPort!.on('message', (chunk: RowChunk & { seq: number }) => {
     parentPort!.postMessage({ seq: chunk.seq, fatal: e instanceof Error ? e.message : String(e) });
   }
 });
+
+parentPort!.postMessage({ ready: true });
