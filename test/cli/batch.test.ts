@@ -139,3 +139,17 @@ describe('the real bin', () => {
     expect(Number(row![header!.indexOf('zeta')])).toBeCloseTo(0.1, 15);
   });
 });
+
+describe('threads', () => {
+  it('worker threads and --jobs 1 write the same file (3,000 rows)', { timeout: 120_000 }, async () => {
+    const lines = ['m,k,c,x0,v0'];
+    for (let i = 0; i < 3_000; i++) lines.push(caseOf(i * 7).join(','));
+    lines.push('-1,1,1,0,0'); // one refused row among them
+    const csv = write('mid.csv', `${lines.join('\n')}\n`);
+    const a = join(dir, 'mid.2.csv');
+    const b = join(dir, 'mid.1.csv');
+    expect((await run('batch', 'sdof', '--csv', csv, '--out', a, '--jobs', '2')).code).toBe(1);
+    expect((await run('batch', 'sdof', '--csv', csv, '--out', b, '--jobs', '1')).code).toBe(1);
+    expect(readFileSync(a, 'utf8')).toBe(readFileSync(b, 'utf8'));
+  });
+});

@@ -38,15 +38,17 @@ export async function runRows(base: Base, rows: readonly (readonly string[])[], 
   const workers = Array.from({ length: Math.min(threads - 1, Math.max(chunks.length - 1, 0)) }, () => new Worker(new URL('./worker.mjs', import.meta.url)));
   let stopping = false;
   for (const w of workers) {
-    const send = () => { if (next < chunks.length) { const seq = next++; w.postMessage({ ...chunks[seq], seq }); } };
+    // a worker that fails before it holds a chunk is dropped (this thread does its share)
+    let holding = false;
+    const send = () => { holding = next < chunks.length; if (holding) { const seq = next++; w.postMessage({ ...chunks[seq], seq }); } };
     w.on('message', (m: Reply) => {
       if (m.ready) { send(); return; }
       if (m.fatal !== undefined || !m.results) { settle.reject(new Error(`batch worker: ${m.fatal ?? 'no results'}`)); return; }
       finished(m.seq, m.results);
       send();
     });
-    w.on('error', (e) => settle.reject(e));
-    w.on('exit', (code) => { if (!stopping) settle.reject(new Error(`batch worker stopped (exit ${code})`)); });
+    w.on('error', (e) => { if (holding) settle.reject(e); });
+    w.on('exit', (code) => { if (!stopping && holding) settle.reject(new Error(`batch worker stopped (exit ${code})`)); });
   }
   try {
     while (next < chunks.length) {
