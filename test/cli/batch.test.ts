@@ -116,6 +116,8 @@ describe('refused with one line before any row runs', () => {
     ['a directory', ['batch', 'sdof', '--csv', dir], /not a regular file$/],
     ['a device', ['batch', 'sdof', '--csv', '/dev/zero'], /^dampbook: cannot read \/dev\/zero: a device, not a regular file$/],
     ['no --csv', ['batch', 'sdof'], /batch needs --csv/],
+    ['unclosed quote', ['batch', 'sdof', '--csv', write('quote.csv', 'm,k,c\n1,2,3\n"4,5,6\n')], /quote\.csv: the quoted field opened on line 3 is never closed$/],
+    ['empty file', ['batch', 'sdof', '--csv', write('empty.csv', '')], /empty\.csv is empty: the first line must name the inputs/],
     ['bad --jobs', ['batch', 'sdof', '--csv', write('ok.csv', 'm,k,c\n1,2,3\n'), '--jobs', '0'], /--jobs 0: expected a whole number/],
     ['--in', ['batch', 'sdof', '--csv', 'x.csv', '--in', 'm=1'], /batch does not take --in/],
   ])('%s', async (_case, argv, message) => {

@@ -44,7 +44,7 @@ export function parseCsv(text: string): string[][] {
     if (ch === '\n' || ch === '\r') { endRecord(); line++; i++; continue; }
     field += ch; i++;
   }
-  if (quoted) throw new CsvError(`CSV: the quoted field opened on line ${startLine} is never closed`);
+  if (quoted) throw new CsvError(`the quoted field opened on line ${startLine} is never closed`);
   if (field !== '' || row.length) endRecord();
   return rows;
 }

@@ -44,7 +44,8 @@ export async function batch(args: ParsedArgs, out: (s: string) => void, err: (s:
   try {
     cases = readCases(def, readBoundedFile(csvPath, BATCH_FILE_LIMIT).text, csvPath);
   } catch (e) {
-    if (e instanceof FileReadError || e instanceof CsvError) throw new UsageError(e.message);
+    if (e instanceof FileReadError) throw new UsageError(e.message);
+    if (e instanceof CsvError) throw new UsageError(`${csvPath}: ${e.message}`);
     throw e;
   }
   const json = args.flags.has('json');
