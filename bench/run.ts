@@ -3,7 +3,7 @@
  * over many random valid inputs, with and without chart data), simulation and CSV throughput,
  * and bytes per page (gzip) of HTML, CSS and JS on a calculator page and a prose page, measured
  * in Chromium on the built site (dist/, built first if missing), and a 10,000-row recorded-motion
- * CSV processed by the built page in Chromium. Writes bench/results/latest.json
+ * CSV processed by the built page in Chromium, and `dampbook batch` rows/s (bench/batch.bench.ts). Writes bench/results/latest.json
  * and prints a summary. Never part of `npm test`.
  */
 import { execFileSync } from 'node:child_process';
@@ -21,6 +21,7 @@ import { launch } from '../test/helpers/browser.ts';
 import { calculatorPages, prosePages } from '../test/helpers/calcPages.ts';
 import { fileFor } from '../test/helpers/crawl.ts';
 import { validRecord } from '../test/calculators/hostile.arbitraries.ts';
+import { batchBench } from './batch.bench.ts';
 import { generateCsv } from './lib/csv.ts';
 import { motionRecord } from './lib/motionRecord.ts';
 
@@ -188,6 +189,7 @@ async function bytesPerPage() {
 
 const lat = calculators.map(latency);
 const csv = calculators.flatMap(csvThroughput);
+const batch = await batchBench();
 const bytes = await bytesPerPage();
 const result = {
   date: new Date().toISOString(),
@@ -196,6 +198,7 @@ const result = {
   latency: lat,
   simulationThroughput: lat.filter((l) => l.medianMs > CLOSED_FORM_TARGET_MS).map((l) => ({ id: l.id, evaluationsPerSecond: l.evaluationsPerSecond })),
   csvThroughput: csv.length ? csv : 'no calculator with a text (CSV) input is registered',
+  batch,
   bytes,
 };
 mkdirSync('bench/results', { recursive: true });
@@ -203,6 +206,7 @@ writeFileSync('bench/results/latest.json', `${JSON.stringify(result, null, 2)}\n
 console.log(`machine: ${result.machine}`);
 for (const l of lat) console.log(`${l.id.padEnd(20)} median ${l.medianMs} ms  p99 ${l.p99Ms} ms${l.withChartsMedianMs !== undefined ? `  (with charts ${l.withChartsMedianMs} / ${l.withChartsP99Ms} ms)` : ''}  ${l.class}`);
 console.log('csv:', JSON.stringify(result.csvThroughput));
+console.log('batch:', JSON.stringify(batch));
 const { csvInBrowser: inBrowser, ...pageBytes } = bytes;
 console.log('csv in Chromium:', JSON.stringify(inBrowser));
 console.log('bytes:', JSON.stringify(pageBytes));

@@ -6,6 +6,7 @@ import { DampbookError } from '../core/errors.ts';
 import { SheetError } from '../sheets/print.ts';
 import { escapeControls } from './escape.ts';
 import { parseArgs, requireKnownOptions, UsageError, type ParsedArgs } from './args.ts';
+import { batch } from './commands/batch.ts';
 import { calc } from './commands/calc.ts';
 import { check } from './commands/check.ts';
 import { list } from './commands/list.ts';
@@ -22,6 +23,7 @@ interface CommandSpec { run: Command; help: string; options: readonly string[]; 
 export const commands: Record<string, CommandSpec> = {
   list: { run: list, options: ['json'], inputs: false, help: 'list [--json]                      every calculator with its inputs and outputs (SI units)' },
   calc: { run: calc, options: ['json', 'record', 'content', 'vary'], inputs: true, help: 'calc <id> --in key=value … [--json] evaluate a calculator (SI values, or "25 lb")\n  dampbook calc <id> … --vary key=±15% --vary key=lo..hi [--json]   tolerance envelope: min and max of every output (up to 8 inputs; lo..hi as --in: plain = SI, "0.9 kN·s/m")\n  dampbook calc --record file.json [--json]   recompute a saved record and report differences' },
+  batch: { run: batch, options: ['csv', 'out', 'jobs', 'json'], inputs: false, help: 'batch <id> --csv cases.csv [--out results.csv] [--jobs N] [--json]   one case per row (header = input keys, cells as --in), outputs appended in SI; all cores by default' },
   check: { run: check, options: ['content'], inputs: false, help: 'check [--content dir]               validate every page and run every verification case' },
   new: { run: newPage, options: ['title', 'by', 'calc', 'content'], inputs: false, help: 'new <folder/id> [--title …] [--by …] [--calc id]   scaffold a draft page' },
   sheet: { run: sheet, options: ['pdf', 'paper', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date', 'site', 'base'], inputs: true, help: 'sheet <page> [--in k=v …] [--paper a4|letter] [--project … --project-no … --calc-no … --prepared-by … --checked-by … --date …] [--site dist] --pdf out.pdf' },

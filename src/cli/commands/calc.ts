@@ -1,7 +1,7 @@
-import { calculatorIds, getCalculator } from '../../calculators/registry.ts';
 import { siSymbol } from '../../core/units/index.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
 import { evaluateInputs, readInputs, summariseText, textLabel } from '../inputs.ts';
+import { requireCalculator } from '../lookup.ts';
 import { recordCheck } from './recordCheck.ts';
 import { envelopeJson, envelopeLines, varyEnvelope } from '../vary.ts';
 
@@ -16,10 +16,8 @@ export function calc(args: ParsedArgs, out: (s: string) => void, err: (s: string
     return recordCheck(args, out);
   }
   if (args.flags.has('content')) throw new UsageError('calc reads --content only with --record');
-  const id = args.positionals[1];
-  if (!id) throw new UsageError(`calc needs a calculator id: ${calculatorIds().join(', ')}`);
-  const def = getCalculator(id);
-  if (!def) throw new UsageError(`unknown calculator '${id}'; known: ${calculatorIds().join(', ')}`);
+  const def = requireCalculator('calc', args.positionals[1]);
+  const id = def.id;
   const read = readInputs(def, args.inputs);
   for (const n of read.notes) err(`dampbook: note: ${n}`);
   const r = evaluateInputs(def, read);
