@@ -12,7 +12,7 @@ export class UsageError extends Error {
 }
 
 /** Options that take a value (`--pdf out.pdf` or `--pdf=out.pdf`). */
-export const VALUE_FLAGS: readonly string[] = ['record', 'pdf', 'paper', 'base', 'site', 'content', 'title', 'by', 'calc', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date'];
+export const VALUE_FLAGS: readonly string[] = ['record', 'out', 'pdf', 'paper', 'base', 'site', 'content', 'title', 'by', 'calc', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date'];
 
 /**
  * Refuses any option the command does not read (a typo or an option of another command would

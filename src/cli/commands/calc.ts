@@ -15,7 +15,6 @@ export function calc(args: ParsedArgs, out: (s: string) => void, err: (s: string
     if (args.vary.length) throw new UsageError('--vary is not read with --record');
     return recordCheck(args, out);
   }
-  if (args.flags.has('content')) throw new UsageError('calc reads --content only with --record');
   const id = args.positionals[1];
   if (!id) throw new UsageError(`calc needs a calculator id: ${calculatorIds().join(', ')}`);
   const def = getCalculator(id);

@@ -14,7 +14,7 @@ import { displayUnit, formatInput, formatNumber } from './format.ts';
 import { clip, parseTyped, readField, splitTyped, textSum } from './fieldState.ts';
 import { describeHeld, holdText, LARGE_TEXT, type HeldText } from './heldText.ts';
 
-import { calculatorLoaders } from '../../calculators/loaders.ts';
+import { loadCalculator } from '../../calculators/loaders.ts';
 import { fetchNamedStudy, storedStudy } from './study-fetch.ts';
 
 export class CalculatorElement extends HTMLElement {
@@ -37,7 +37,7 @@ export class CalculatorElement extends HTMLElement {
     const bar = document.querySelector('[data-study-bar]') !== null;
     const opened = bar && (fetchNamedStudy() !== undefined || storedStudy());
     const study = bar ? import('./study-link.ts').then((m) => m.studySession()) : undefined;
-    this.calc = Object.hasOwn(calculatorLoaders, id) ? await calculatorLoaders[id]!() : undefined;
+    this.calc = await loadCalculator(id);
     if (!this.calc) return;
     this.applyUrl();
     this.addEventListener('submit', (e) => e.preventDefault());
