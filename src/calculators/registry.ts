@@ -3,7 +3,7 @@
  * this file only joins them. Add a calculator to its domain's list, not here.
  *
  * A team handbook adds its own calculators (`<content>/calculators/*.ts`) with
- * `addTeamCalculators`: the CLI after loading them (src/team/loadRegistry.ts), the site build
+ * `setTeamCalculators`: the CLI after loading them (src/team/loadRegistry.ts), the site build
  * through teamSlot.ts. An id that a built-in (or another team file) already has is refused.
  */
 import { vibrationCalculators } from './vibration/index.ts';
@@ -28,21 +28,24 @@ if (byId.size !== all.length) throw new Error('registry: duplicate calculator id
 const teamFiles = new Map<string, string>();
 
 /**
- * Registers a team's calculators. Each entry is a file and its default export; a value that is
- * not a calculator definition, or an id already taken, throws a TeamCalculatorError naming the file.
- * Adding the same file's definition twice (a CLI command run twice in one process) is a no-op.
+ * Makes `entries` the team's calculators, replacing any earlier handbook's (one handbook folder
+ * at a time: a process that loads two folders in turn sees only the second's). Each entry is a
+ * file and its default export; a value that is not a calculator definition, or an id already
+ * taken (a built-in, another file of the same handbook), throws a TeamCalculatorError naming the
+ * file, and the registry is left as it was.
  */
-export function addTeamCalculators(entries: readonly { readonly file: string; readonly definition: unknown }[]): CalculatorDefinition[] {
-  const added: CalculatorDefinition[] = [];
-  for (const { file, definition } of entries) {
-    const def = checkTeamDefinition(file, definition, (id) => (builtIn.has(id) ? 'a built-in calculator' : teamFiles.has(id) && teamFiles.get(id) !== file ? `the team calculator in ${teamFiles.get(id)}` : undefined));
-    if (byId.get(def.id) === def) continue;
-    byId.set(def.id, def);
-    teamFiles.set(def.id, file);
-    if (!all.some((c) => c.id === def.id)) all.push(def); else all[all.findIndex((c) => c.id === def.id)] = def;
-    added.push(def);
-  }
-  return added;
+export function setTeamCalculators(entries: readonly { readonly file: string; readonly definition: unknown }[]): CalculatorDefinition[] {
+  const mine = new Map<string, string>();
+  const defs = entries.map(({ file, definition }) => {
+    const def = checkTeamDefinition(file, definition, (id) => (builtIn.has(id) ? 'a built-in calculator' : mine.has(id) ? `the team calculator in ${mine.get(id)}` : undefined));
+    mine.set(def.id, file);
+    return def;
+  });
+  for (const id of teamFiles.keys()) byId.delete(id);
+  all.splice(builtIn.size);
+  teamFiles.clear();
+  for (const def of defs) { byId.set(def.id, def); teamFiles.set(def.id, mine.get(def.id)!); all.push(def); }
+  return defs;
 }
 
 /** The file a team calculator came from, or undefined for a built-in. */
@@ -50,7 +53,7 @@ export function teamFileOf(id: string): string | undefined {
   return teamFiles.get(id);
 }
 
-addTeamCalculators(teamDefinitions);
+setTeamCalculators(teamDefinitions);
 
 export function getCalculator(id: string): CalculatorDefinition | undefined {
   return byId.get(id);

@@ -2,6 +2,7 @@
  * A handbook folder's calculators for the CLI (and any command that takes `--content <dir>`):
  * `loadRegistry({ content })` loads `<content>/calculators/*.ts`, registers them beside the
  * built-ins (an id clash is refused with a message naming the file) and returns the registry.
+ * A second call with another folder replaces the first folder's calculators.
  *
  * How a file outside the project is loaded: esbuild bundles it (with its own relative helpers and
  * any packages of the team's folder) and leaves `dampbook/calculator` and `dampbook/core` as
@@ -14,7 +15,7 @@ import { tmpdir } from 'node:os';
 import { basename, join, relative } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { build, type Plugin } from 'esbuild';
-import { addTeamCalculators, calculators, getCalculator } from '../calculators/registry.ts';
+import { calculators, getCalculator, setTeamCalculators } from '../calculators/registry.ts';
 import { TeamCalculatorError } from '../calculators/teamDefinition.ts';
 import type { CalculatorDefinition } from '../calculators/types.ts';
 import { ENTRY_POINTS, teamCalculatorFiles } from './entryPoints.ts';
@@ -73,7 +74,6 @@ export async function loadRegistry(options: { content: string }): Promise<Regist
       rmSync(tmp, { recursive: true, force: true });
     }
   }
-  const team = addTeamCalculators(entries);
-  const ids = new Set(entries.map((e) => (e.definition as { id: string }).id));
-  return { calculators, team: team.length ? team : calculators.filter((c) => ids.has(c.id)), get: getCalculator };
+  const team = setTeamCalculators(entries);
+  return { calculators, team, get: getCalculator };
 }
