@@ -15,7 +15,6 @@ import { sheet } from './commands/sheet.ts';
 import { study } from './commands/study.ts';
 import { build } from './commands/build.ts';
 import { loadRegistry } from '../team/loadRegistry.ts';
-import { readHandbookConfig } from '../content/readHandbookConfig.ts';
 
 /** `err` is stderr (deprecation notes); `out` is the command's output. */
 type Command = (args: ParsedArgs, out: (s: string) => void, err: (s: string) => void) => number | Promise<number>;
@@ -53,7 +52,6 @@ export async function main(argv: readonly string[], rawOut = (s: string) => cons
     if (content !== undefined && typeof content !== 'string') throw new UsageError('--content needs a folder: --content <dir>');
     if (typeof content === 'string') {
       if (!existsSync(content)) throw new UsageError(`no content folder '${content}'`);
-      readHandbookConfig(content); // a bad config is named first, before any calculator loads
       await loadRegistry({ content });
     } else if (name === 'check' || name === 'build') await loadRegistry({ content: 'content' });
     return await cmd.run(args, out, err);
