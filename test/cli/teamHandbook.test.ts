@@ -3,7 +3,7 @@
  * one page under its own topic "Machines" and one team calculator (test/cli/fixtures/
  * team-handbook/calculators/peak-pair.ts, importing only `dampbook/calculator` and
  * `dampbook/core`) checks, computes, lists, refuses a clashing id, builds (one build, about a
- * minute) and prints. Reference values (the calculator's own verification cases and the check
+ * minute), runs live in Chromium and prints. Reference values (the calculator's own verification cases and the check
  * below): δ = ln(x₁/x₂), ζ = δ/√(4π² + δ²), Rao, Mechanical Vibrations, 6th ed., eq. 2.85
  * (from memory); for x₁/x₂ = 2: δ = ln 2 = 0.693147…, ζ = 0.109653 (closed form).
  */
@@ -13,6 +13,8 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { main } from '../../src/cli/main.ts';
+import { serveStatic } from '../../src/server/staticServer.ts';
+import { launch, watchedPage } from '../helpers/browser.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 
 const BIN = resolve('bin/dampbook.mjs');
@@ -104,4 +106,23 @@ describe('a handbook folder outside the project', () => {
     expect(text).toContain('Spindle damping from a peak pair');
     expect(text).toContain('Tarnwick Works — Machine shop');
   }, 240_000);
+
+  it('runs the team calculator live in the built page (its lazy chunk), with no console error', async () => {
+    const served = await serveStatic(out, '/');
+    const browser = await launch();
+    try {
+      const w = await watchedPage(browser, served.origin);
+      await w.page.goto(`${served.origin}/machines/spindle-decay/`);
+      const calc = w.page.locator('db-calculator[data-calc="peak-pair"]');
+      await calc.locator('input[name="x1"]').waitFor();
+      // the page shows x₁ in mm: 40 mm against the default x₂ = 12 µm → δ = ln(40/0.012) = 8.112 (closed form)
+      await calc.locator('input[name="x1"]').fill('40');
+      await calc.locator('input[name="x1"]').dispatchEvent('input');
+      await expect.poll(() => calc.innerText(), { timeout: 10_000 }).toMatch(/Logarithmic decrement δ\s+8\.112/);
+      expect([...w.consoleErrors, ...w.pageErrors, ...w.foreignRequests]).toEqual([]);
+    } finally {
+      await browser.close();
+      await served.close();
+    }
+  }, 60_000);
 });
