@@ -105,6 +105,13 @@ describe('a handbook folder outside the project', () => {
     const text = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
     expect(text).toContain('Spindle damping from a peak pair');
     expect(text).toContain('Tarnwick Works — Machine shop');
+    // without --content: the page's own defaults print; inputs need the folder's calculators
+    const plain = cli('sheet', 'spindle-decay', '--site', out, '--pdf', join(tmp, 'plain.pdf'));
+    expect(plain.status, plain.stderr).toBe(0);
+    expect(execFileSync('pdftotext', ['-layout', join(tmp, 'plain.pdf'), '-'], { encoding: 'utf8' })).toContain('Spindle damping from a peak pair');
+    const refused = cli('sheet', 'spindle-decay', '--site', out, '--pdf', join(tmp, 'no.pdf'), '--in', 'x1=1');
+    expect(refused.status).toBe(1);
+    expect(refused.stderr).toMatch(/uses calculator 'peak-pair', which this tool does not have: give the handbook folder with --content <dir>/);
   }, 240_000);
 
   it('runs the team calculator live in the built page (its lazy chunk), with no console error', async () => {
