@@ -8,7 +8,7 @@
  * (default 3) interleaves R builds of each and reports medians (times) and maxima (memory).
  */
 import { spawn } from 'node:child_process';
-import { mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
+import { copyFileSync, mkdirSync, mkdtempSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { cpus, loadavg, totalmem, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { baselineConfig, baselineLayout, benchPage } from './lib/pages.ts';
@@ -65,6 +65,8 @@ async function main(): Promise<void> {
     const content = join(tmp, 'content', 'bench');
     const plain = join(tmp, 'baseline');
     mkdirSync(content, { recursive: true });
+    // the demo's settings and topics (a handbook folder needs its handbook.config.json)
+    copyFileSync(join(ROOT, 'content', 'handbook.config.json'), join(tmp, 'content', 'handbook.config.json'));
     mkdirSync(join(plain, 'src', 'pages', 'p'), { recursive: true });
     mkdirSync(join(plain, 'src', 'layouts'), { recursive: true });
     symlinkSync(join(ROOT, 'node_modules'), join(plain, 'node_modules'), 'dir');

@@ -15,6 +15,7 @@ import { fileURLToPath } from 'node:url';
 import type { AstroIntegration } from 'astro';
 import { build, context, type BuildContext, type BuildOptions, type OutputFile } from 'esbuild';
 import type { Plugin } from 'vite';
+import { teamCalculatorsEsbuild, teamCalculatorsVite } from './team-calculators.ts';
 
 /** Entry name → source module. The names are the keys of `virtual:dampbook/client`. */
 export const CLIENT_ENTRIES = {
@@ -60,6 +61,8 @@ function options(root: string, hashed: boolean): BuildOptions {
     metafile: true,
     write: false,
     logLevel: 'error',
+    // a handbook folder's own calculators: one lazy chunk (src/build/team-calculators.ts)
+    plugins: [teamCalculatorsEsbuild()],
   };
 }
 
@@ -165,7 +168,7 @@ export function clientScripts(): AstroIntegration {
             });
           },
         };
-        updateConfig({ vite: { plugins: [plugin] } });
+        updateConfig({ vite: { plugins: [plugin, teamCalculatorsVite()] } });
       },
       'astro:build:done': ({ dir }) => {
         if (!built) return;

@@ -3,6 +3,7 @@
  * definitions it shows (a whole domain costs ~25 KB gzip; one calculator a few KB). Must list
  * exactly the registry's calculators: test/calculators/loaders.test.ts checks it.
  */
+import { loadTeamDefinitions } from './teamSlot.ts';
 import type { CalculatorDefinition } from './types.ts';
 
 export const calculatorLoaders: Readonly<Record<string, () => Promise<CalculatorDefinition>>> = {
@@ -34,3 +35,9 @@ export const calculatorLoaders: Readonly<Record<string, () => Promise<Calculator
   'gas-charge': () => import('./thermal/gas-charge.ts').then((m) => m.gasChargeCalculator),
   'thermal-life': () => import('./thermal/thermal-life.ts').then((m) => m.thermalLifeCalculator),
 };
+
+/** A built-in's own chunk, else the handbook's team calculators (one lazy chunk; none in the demo). */
+export async function loadCalculator(id: string): Promise<CalculatorDefinition | undefined> {
+  if (Object.hasOwn(calculatorLoaders, id)) return calculatorLoaders[id]!();
+  return (await loadTeamDefinitions()).find((d) => d.id === id);
+}

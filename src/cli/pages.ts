@@ -6,7 +6,9 @@
 import { lstatSync, readdirSync, realpathSync, statSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 import { parseDocument } from 'yaml';
-import { pageSchema, type PageMeta } from '../content/schema.ts';
+import { topicTitles } from '../content/handbookConfig.ts';
+import { readHandbookConfig } from '../content/readHandbookConfig.ts';
+import { pageSchema, pageSchemaFor, type PageMeta } from '../content/schema.ts';
 import { FileReadError, readBoundedFile } from './readFile.ts';
 
 export interface PageFile {
@@ -58,15 +60,20 @@ const MAX_PAGE_BYTES = 16 * 1024 * 1024;
 
 const FRONTMATTER = /^---\r?\n([\s\S]*?)\r?\n---(?:\r?\n|$)/;
 
-export function readPage(file: string, contentDir: string): PageFile {
+type PageSchema = ReturnType<typeof pageSchemaFor>;
+
+export function readPage(file: string, contentDir: string, schema: PageSchema = pageSchema): PageFile {
   const entry = relative(contentDir, file).split(sep).join('/').replace(/\.mdx$/, '').toLowerCase();
   let text: string;
   try { text = readBoundedFile(file, MAX_PAGE_BYTES).text; } catch (e) { return { file, entry, errors: [e instanceof FileReadError ? e.message : why(e)] }; }
-  return { file, entry, ...parsePage(text) };
+  return { file, entry, ...parsePage(text, schema) };
 }
 
-/** A page's frontmatter checked with the site's schema: the metadata, or problems naming each field. */
-export function parsePage(text: string): { meta?: PageMeta; errors: string[] } {
+/**
+ * A page's frontmatter checked with the site's schema (the demo's topics unless the handbook's
+ * own schema is given): the metadata, or problems naming each field.
+ */
+export function parsePage(text: string, schema: PageSchema = pageSchema): { meta?: PageMeta; errors: string[] } {
   // a byte-order mark is not part of the page (the site build ignores it too)
   const m = FRONTMATTER.exec(text.replace(/^\uFEFF/, ''));
   if (!m) return { errors: ['no frontmatter: the file must start with a --- block'] };
@@ -81,13 +88,15 @@ export function parsePage(text: string): { meta?: PageMeta; errors: string[] } {
   } catch (e) {
     return { errors: [`frontmatter is not valid YAML: ${e instanceof Error ? e.message.split('\n')[0] : String(e)}`] };
   }
-  const r = pageSchema.safeParse(data ?? {});
+  const r = schema.safeParse(data ?? {});
   if (!r.success) return { errors: r.error.issues.map((i) => `${i.path.join('.') || '(frontmatter)'}: ${i.message}`) };
   return { meta: r.data, errors: [] };
 }
 
+/** Every page of a handbook folder, checked against the topics of its handbook.config.json. */
 export function readPages(contentDir: string): PageFile[] {
+  const schema = pageSchemaFor(topicTitles(readHandbookConfig(contentDir)));
   const entries: Entry[] = [];
   walk(contentDir, entries, new Set());
-  return entries.map((e) => (e.reason === undefined ? readPage(e.file, contentDir) : { file: e.file, entry: relative(contentDir, e.file).split(sep).join('/'), errors: [e.reason] }));
+  return entries.map((e) => (e.reason === undefined ? readPage(e.file, contentDir, schema) : { file: e.file, entry: relative(contentDir, e.file).split(sep).join('/'), errors: [e.reason] }));
 }

@@ -14,14 +14,17 @@ export { PROVENANCE, sourceRefSchema };
  */
 export const verificationCaseSchema = caseSchema.extend({ calculator: z.string().min(1) });
 
+/** The demo handbook's topics (content/handbook.config.json); another handbook's come from its own config. */
 export const TOPICS = ['Oscillators', 'Damping from tests', 'Damper laws', 'Duty cycles', 'Thermal rating', 'Handbook'] as const;
 
-export const pageSchema = z
+/** The page schema of a handbook whose `topic:` may be one of `topics` (its config's titles). */
+export function pageSchemaFor(topics: readonly string[]) {
+  return z
   .object({
     id: z.string().regex(/^[a-z0-9-]+$/, 'lower-case letters, digits and hyphens'),
     title: z.string().min(3),
     summary: z.string().min(10),
-    topic: z.enum(TOPICS),
+    topic: z.enum(topics as [string, ...string[]]),
     order: z.number().int().default(100),
     tags: z.array(z.string()).default([]),
     revision: z.string().regex(/^[A-Z0-9][A-Z0-9.]*$/, 'a revision such as A, B or 2.1'),
@@ -45,6 +48,9 @@ export const pageSchema = z
       if (p.verification.length === 0 && p.calculators.length === 0) ctx.addIssue({ code: 'custom', path: ['verification'], message: 'an approved page needs at least one verification case (a calculator or a case of its own)' });
     }
   });
+}
+
+export const pageSchema = pageSchemaFor(TOPICS);
 
 export type PageMeta = z.infer<typeof pageSchema>;
 export type PageVerificationCase = z.infer<typeof verificationCaseSchema>;

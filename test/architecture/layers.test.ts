@@ -39,6 +39,7 @@ const FORBIDDEN: Readonly<Record<string, readonly string[]>> = {
   records: ['components', 'cli', 'layouts', 'pages', 'server', 'build'],
   cli: ['components', 'layouts', 'pages'],
   studies: ['components', 'cli', 'layouts', 'pages', 'server', 'sheets', 'build'],
+  team: ['components', 'cli', 'layouts', 'pages', 'server', 'sheets', 'build'],
 };
 
 export function violations(file: string, source: string): string[] {

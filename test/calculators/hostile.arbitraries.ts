@@ -5,6 +5,9 @@
 import fc from 'fast-check';
 import type { CalculatorDefinition, InputDef, NumberInput } from '../../src/calculators/types.ts';
 
+// the values themselves live in src, shared with `dampbook check --content` (team calculators)
+export { describeValue, HOSTILE_TEXT, HOSTILE_VALUES } from '../../src/calculators/badInput/values.ts';
+
 /** A valid number for an input: uniform on small ranges, log-uniform on wide ones, bounds included when allowed. */
 export function validNumber(def: NumberInput): fc.Arbitrary<number> {
   const lo = def.min;
@@ -34,30 +37,3 @@ export function validValue(def: InputDef): fc.Arbitrary<number | string> {
 export function validRecord(calc: CalculatorDefinition): fc.Arbitrary<Record<string, number | string>> {
   return fc.record(Object.fromEntries(calc.inputs.map((d) => [d.key, validValue(d)])) as Record<string, fc.Arbitrary<number | string>>);
 }
-
-/** Values that must never crash a calculator, whatever the input kind. */
-export const HOSTILE_VALUES: readonly unknown[] = [
-  NaN, Infinity, -Infinity, 0, -0, -1, -1e300, 1e300, 5e-324, -5e-324, Number.MAX_VALUE, -Number.MAX_VALUE,
-  '', ' ', 'abc', 'NaN', 'Infinity', '-Infinity', '1e999', '-1e999', '0x10', '1,5', '12 furlongs', '25 lb lb', '١٢',
-  '<img src=x onerror=alert(1)>', '"><script>alert(1)</script>', '__proto__', 'constructor', 'toString',
-  'x'.repeat(10_000_000), '1'.repeat(100_000) + 'x', `1${' '.repeat(100_000)}a b`,
-  null, undefined, true, false, 12n, Symbol('x'), {}, [], [1], { valueOf: () => 3 }, Object.create(null),
-  { toString() { throw new Error('hostile toString'); } }, () => 1, new Date(0),
-];
-
-/** Labels for failure messages (a 10 MB string is not printed). */
-export function describeValue(v: unknown): string {
-  if (typeof v === 'string') return v.length > 60 ? `string(${v.length})` : JSON.stringify(v);
-  if (typeof v === 'bigint') return `${v}n`;
-  if (typeof v === 'symbol' || typeof v === 'function') return typeof v;
-  if (v === null || v === undefined || typeof v !== 'object') return String(v);
-  return Array.isArray(v) ? 'array' : 'object';
-}
-
-/** Text payloads for text (CSV) inputs: malformed, hostile or degenerate records. */
-export const HOSTILE_TEXT: readonly string[] = [
-  '', '\n\n\n', 'garbage', 'a,b,c\n1,2,3', 't,x\n0,NaN\n1,Infinity', 't,x\n0,1e999\n1,-1e999', 't,x\n1,0\n0,1\n0,1',
-  't,x\n0,0', 't,x\n0,0\n1,0\n2,0\n3,0', '0;1\n1;2\n2;3', '\u0000\u0001\u0002', '<img src=x onerror=alert(1)>,1\n2,3',
-  '__proto__,constructor\n1,2', `t,x\n${Array.from({ length: 5000 }, (_, i) => `${i * 1e-3},${Math.sin(i)}`).join('\n')}`,
-  'x'.repeat(2_000_000), '1,2\n'.repeat(300_000),
-];

@@ -4,7 +4,7 @@
  * checks as it builds; `new` refuses a slug or title that would scaffold a page failing `check`.
  * No reference values (behaviour; the verification cases are the demo pages' own).
  */
-import { cpSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync, existsSync } from 'node:fs';
+import { copyFileSync, cpSync, mkdirSync, mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync, existsSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -70,21 +70,29 @@ describe('check on awkward folders', () => {
   });
 });
 
+/** An empty handbook folder with the demo's settings and topics (a folder needs its handbook.config.json). */
+function handbookFolder(name: string): string {
+  const dir = join(tmp, name);
+  mkdirSync(dir, { recursive: true });
+  copyFileSync('content/handbook.config.json', join(dir, 'handbook.config.json'));
+  return dir;
+}
+
 describe('new refuses what check would fail', () => {
   it.each([
     [['new', 'thermal/sb'], /title/],
     [['new', 'thermal/fin-cooling', '--title', ''], /title/],
     [['new', 'thermal/fin-cooling', '--title', 'ab'], /title/],
   ])('%j exits non-zero and writes nothing', async (argv) => {
-    const dir = join(tmp, `new-${Math.random().toString(36).slice(2)}`);
+    const dir = handbookFolder(`new-${Math.random().toString(36).slice(2)}`);
     const r = await run(...argv, '--content', dir);
     expect(r.code).not.toBe(0);
     expect(r.err).toMatch(/title/);
-    expect(existsSync(dir)).toBe(false);
+    expect(existsSync(join(dir, 'thermal'))).toBe(false);
   });
 
   it('a scaffolded page passes check', async () => {
-    const dir = join(tmp, 'new-ok');
+    const dir = handbookFolder('new-ok');
     expect((await run('new', 'thermal/fin-cooling', '--by', 'Lucia Penhale', '--content', dir)).code).toBe(0);
     const r = await run('check', '--content', dir);
     expect(r.out).toMatch(/ok {3}.*fin-cooling\.mdx/);

@@ -48,6 +48,7 @@ describe('check on hostile YAML frontmatter', () => {
   it('reports each hostile page on its own FAIL line, escaped, and checks the rest', async () => {
     const content = join(tmp, 'yaml');
     cpSync('content/oscillators', join(content, 'oscillators'), { recursive: true });
+    cpSync('content/handbook.config.json', join(content, 'handbook.config.json'));
     mkdirSync(join(content, 'hostile'));
     for (const [name, yaml] of cases) writeFileSync(join(content, 'hostile', `${name}.mdx`), `---\n${yaml}\n---\n\nBody.\n`);
     const r = await run('check', '--content', content);
@@ -65,6 +66,7 @@ describe('check on hostile YAML frontmatter', () => {
     const { spawnSync } = await import('node:child_process');
     const content = join(tmp, 'tag');
     mkdirSync(content);
+    cpSync('content/handbook.config.json', join(content, 'handbook.config.json'));
     writeFileSync(join(content, 'h.mdx'), '---\nid: x\ntitle: !<tag:\u001b[31mRED> "a"\n---\n');
     const r = spawnSync('node', ['bin/dampbook.mjs', 'check', '--content', content], { encoding: 'utf8', timeout: 30_000 });
     expect(r.status).toBe(1);

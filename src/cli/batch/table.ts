@@ -3,7 +3,7 @@
  * any row runs, since a misspelt column would otherwise leave every row on its default), and the
  * results are written back as the input cells as given, one SI column per output, `warnings` (joined by "; ") and `error`.
  */
-import { isLegacyLawKey } from '../../calculators/damperLaw/migrate.ts';
+import { isLegacyLawKey } from '../../calculators/shared/damperLawMigrate.ts';
 import type { CalculatorDefinition } from '../../calculators/types.ts';
 import { UsageError } from '../args.ts';
 import { escapeControls } from '../escape.ts';

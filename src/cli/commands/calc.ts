@@ -15,7 +15,6 @@ export function calc(args: ParsedArgs, out: (s: string) => void, err: (s: string
     if (args.vary.length) throw new UsageError('--vary is not read with --record');
     return recordCheck(args, out);
   }
-  if (args.flags.has('content')) throw new UsageError('calc reads --content only with --record');
   const def = requireCalculator('calc', args.positionals[1]);
   const id = def.id;
   const read = readInputs(def, args.inputs);

@@ -1,12 +1,15 @@
 import { existsSync } from 'node:fs';
 import { failureReport, verifyPage } from '../../content/verify.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
+import { calculators, teamFileOf } from '../../calculators/registry.ts';
+import { checkTeamCalculators } from '../../team/checkTeam.ts';
 import { readPages } from '../pages.ts';
 
 /**
  * `dampbook check [--content dir]`: validates every page's frontmatter with the site's schema
  * and runs every verification case against the core. Exit 1 on any failure, naming the page,
- * the case, the expected and the computed values.
+ * the case, the expected and the computed values. The folder's own calculators (registered by
+ * main.ts from `<dir>/calculators/`) run their verification cases and the bad-input rules too.
  */
 export function check(args: ParsedArgs, out: (s: string) => void): number {
   const dir = typeof args.flags.get('content') === 'string' ? (args.flags.get('content') as string) : 'content';
@@ -35,8 +38,13 @@ export function check(args: ParsedArgs, out: (s: string) => void): number {
       lines.push(`ok   ${p.file}: ${p.meta.id} rev ${p.meta.revision} ${p.meta.status}; ${cases} case(s), ${v.rows.length} check(s) pass`);
     }
   }
+  const team = checkTeamCalculators(calculators.flatMap((calc) => { const file = teamFileOf(calc.id); return file ? [{ file, calc }] : []; }));
+  lines.push(...team.lines);
+  checks += team.checks;
+  failed += team.failed;
   for (const l of lines) out(l);
-  out(`${pages.length} page(s), ${checks} verification check(s): ${failed === 0 ? 'all pass' : `${failed} page(s) failed`}`);
+  const own = team.lines.length ? ` and ${team.lines.length} team calculator(s)` : '';
+  out(`${pages.length} page(s)${own}, ${checks} verification check(s): ${failed === 0 ? 'all pass' : `${failed} page(s) or calculator(s) failed`}`);
   if (pages.length === 0) { out(`no pages found under ${dir}`); return 1; }
   return failed === 0 ? 0 : 1;
 }

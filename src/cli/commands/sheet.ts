@@ -7,7 +7,7 @@ import { UsageError, type ParsedArgs } from '../args.ts';
 import { evaluateInputs, readInputs, summariseText, textLabel } from '../inputs.ts';
 
 /**
- * `dampbook sheet <page> [--in key=value …] [--paper a4|letter] [--project …] [--project-no …]
+ * `dampbook sheet <page> [--content dir] [--in key=value …] [--paper a4|letter] [--project …] [--project-no …]
  * [--calc-no …] [--prepared-by …] [--checked-by …] [--date …] [--site dist] [--base /] --pdf out.pdf`
  *
  * The inputs are read and checked exactly as `calc` reads them (the same reader, `@file` for
@@ -32,6 +32,10 @@ export async function sheet(args: ParsedArgs, out: (s: string) => void, err: (s:
   const built = findPage(site, page);
 
   // the same reading and checks as calc, for every calculator on the page
+  // a team calculator (a handbook folder's own) is known only with --content: without it the sheet
+  // prints the page's own defaults (computed by the page), but inputs cannot be checked: say so
+  const missing = built.calculators.filter((id) => !getCalculator(id));
+  if (missing.length && (args.inputs.length > 0 || args.flags.has('content'))) throw new SheetError(`the page uses calculator ${missing.map((id) => `'${id}'`).join(', ')}, which this tool does not have${args.flags.has('content') ? '' : ': give the handbook folder with --content <dir>'}`);
   const defs = built.calculators.map((id) => getCalculator(id)).filter((d) => d !== undefined);
   const keys = new Set(defs.flatMap((d) => d.inputs.map((i) => i.key)));
   const unknown = args.inputs.map(([k]) => k).filter((k) => !keys.has(k) && !defs.some((d) => isLegacyLawKey(d, k)));

@@ -14,7 +14,7 @@ import { displayUnit, formatInput, formatNumber } from '../render/format.ts';
 import { clip, parseTyped, readField, splitTyped, textSum } from '../render/fieldState.ts';
 import { describeHeld, holdText, LARGE_TEXT, type HeldText } from '../render/heldText.ts';
 
-import { calculatorLoaders } from '../../calculators/loaders.ts';
+import { loadCalculator } from '../../calculators/loaders.ts';
 import { openingStudy } from './study-fetch.ts';
 
 export class CalculatorElement extends HTMLElement {
@@ -37,7 +37,7 @@ export class CalculatorElement extends HTMLElement {
     const bar = document.querySelector('[data-study-bar]') !== null;
     const opened = bar && openingStudy();
     const study = bar ? import('./study-link.ts').then((m) => m.studySession()) : undefined;
-    this.calc = Object.hasOwn(calculatorLoaders, id) ? await calculatorLoaders[id]!() : undefined;
+    this.calc = await loadCalculator(id);
     if (!this.calc) return;
     this.applyUrl();
     this.addEventListener('submit', (e) => e.preventDefault());
