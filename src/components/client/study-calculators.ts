@@ -1,9 +1,9 @@
 /**
  * The calculator definitions an open study needs in the browser: its steps' calculators and the
- * page's own, each loaded once through `calculatorLoaders` (never the whole registry — see
+ * page's own, each loaded once through `loadCalculator` (never the whole registry — see
  * src/studies/lookup.ts). An id no loader knows stays unknown, and the study planner says so.
  */
-import { calculatorLoaders } from '../../calculators/loaders.ts';
+import { loadCalculator } from '../../calculators/loaders.ts';
 import type { CalculatorDefinition } from '../../calculators/types.ts';
 import type { CalculatorLookup } from '../../studies/lookup.ts';
 import type { Study } from '../../studies/schema.ts';
@@ -20,8 +20,9 @@ export class LoadedCalculators {
   /** Loads every step calculator of the study not loaded yet (in parallel). */
   async forStudy(study: Study | undefined): Promise<void> {
     const ids = new Set((study?.steps ?? []).map((s) => s.calculator));
-    const missing = [...ids].filter((id) => !this.defs.has(id) && Object.hasOwn(calculatorLoaders, id));
+    const missing = [...ids].filter((id) => !this.defs.has(id));
     announceChunks(missing);
-    for (const def of await Promise.all(missing.map((id) => calculatorLoaders[id]!()))) this.add(def);
+    // built-ins one chunk each; a handbook's own calculators come from its one team chunk
+    for (const def of await Promise.all(missing.map((id) => loadCalculator(id)))) if (def) this.add(def);
   }
 }

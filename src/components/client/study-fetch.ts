@@ -4,7 +4,7 @@
  * them: one more round trip before the page could fill). Tiny on purpose: every calculator page
  * loads it. The text is untrusted until the study schema has checked it (study-link.ts).
  */
-import { calculatorLoaders } from '../../calculators/loaders.ts';
+import { loadCalculator } from '../../calculators/loaders.ts';
 import { STUDY_STORE } from '../../studies/storeKey.ts';
 
 /** True when this browser keeps an open study (not yet validated). */
@@ -59,7 +59,7 @@ export function announceChunks(ids: Iterable<string>): void {
 /** Starts loading these calculators now (their chunks announced at once); the study code finds them loaded. */
 function warm(ids: readonly string[]): void {
   announceChunks(ids);
-  for (const id of new Set(ids)) if (Object.hasOwn(calculatorLoaders, id)) void calculatorLoaders[id]!().catch(() => undefined);
+  for (const id of new Set(ids)) void loadCalculator(id).catch(() => undefined);
 }
 
 /** The step calculators a study text names, read without validating it (a loading hint only). */
