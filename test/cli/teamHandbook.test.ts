@@ -57,6 +57,23 @@ describe('a handbook folder outside the project', () => {
     expect((JSON.parse(l.out) as { id: string }[]).map((c) => c.id)).toContain('peak-pair');
   });
 
+  it('runs the team calculator in batch, on worker threads too (each thread loads the folder\'s calculators)', () => {
+    // 2,500 rows: above the one-thread threshold, so --jobs 2 sends chunks to a worker thread
+    const rows = Array.from({ length: 2500 }, (_, i) => (i === 7 ? '1 mm,2 mm' : `${2 + (i % 5)} mm,1 mm`));
+    const csv = join(tmp, 'pairs.csv');
+    writeFileSync(csv, `x1,x2\n${rows.join('\n')}\n`);
+    const r = spawnSync(process.execPath, [BIN, 'batch', 'peak-pair', '--csv', csv, '--jobs', '2', '--json', '--content', content], { encoding: 'utf8' });
+    const results = JSON.parse(r.stdout) as ({ row: number; outputs: { delta: number } } | { row: number; error: string })[];
+    expect(results).toHaveLength(2500);
+    // row 1 has x1/x2 = 2: δ = ln 2 (closed form); every row of the same ratio gives the same δ
+    expectClose({ label: 'batch δ, row 1', computed: (results[0] as { outputs: { delta: number } }).outputs.delta, expected: Math.LN2, tol: 1e-12, why: 'closed form' });
+    expectClose({ label: 'batch δ, row 2496 (ratio 2, on the worker thread)', computed: (results[2495] as { outputs: { delta: number } }).outputs.delta, expected: Math.LN2, tol: 1e-12, why: 'closed form' });
+    // row 8 has x1 < x2: refused with the calculator's own message, and the run went on
+    expect('error' in results[7]!).toBe(true);
+    expect(r.status).toBe(1);
+    expect(r.stderr).toMatch(/1 of 2500 rows refused/);
+  });
+
   it('refuses a team calculator whose id is a built-in\'s, naming the file', async () => {
     const clash = join(tmp, 'clash');
     cpSync(content, clash, { recursive: true });

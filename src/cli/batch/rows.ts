@@ -25,6 +25,8 @@ export interface RowChunk {
   readonly first: number;
   /** Echo the SI inputs used (for --json). */
   readonly withInputs: boolean;
+  /** The handbook folder whose own calculators a worker thread must load first (`--content`). */
+  readonly content?: string;
 }
 
 /** The one-line message of a refused row: the calculator's own message, escaped like every CLI line. */

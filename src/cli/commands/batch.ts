@@ -52,7 +52,8 @@ export async function batch(args: ParsedArgs, out: (s: string) => void, err: (s:
   const bar = progressBar(cases.rows.length);
   let results;
   try {
-    results = await runRows({ id: def.id, header: cases.header, withInputs: json }, cases.rows, jobs, (n) => bar.update(n));
+    const content = stringFlag(args, 'content');
+    results = await runRows({ id: def.id, header: cases.header, withInputs: json, ...(content !== undefined ? { content } : {}) }, cases.rows, jobs, (n) => bar.update(n));
   } finally {
     bar.end();
   }
