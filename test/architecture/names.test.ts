@@ -69,8 +69,8 @@ describe('calculator file names', () => {
     expect(bad).toEqual([]);
   });
 
-  it('calculator folders are the domains plus shared/ and envelope/', () => {
+  it('calculator folders are the domains plus shared/, envelope/ and badInput/ (the bad-input rules)', () => {
     const dirs = readdirSync(CALC, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name).sort();
-    expect(dirs).toEqual([...Object.keys(domains), 'envelope', 'shared'].sort());
+    expect(dirs).toEqual([...Object.keys(domains), 'badInput', 'envelope', 'shared'].sort());
   });
 });
