@@ -24,7 +24,7 @@ export const words = (name: string) => name.replace(/([a-z0-9])([A-Z])/g, '$1 $2
 class StudySession {
   study: Study | undefined;
   run: StudyRun | undefined;
-  error: { step?: string; message: string } | undefined;
+  error: { step?: string | undefined; message: string } | undefined;
   private attached: Attached[] = [];
   private pageId = document.querySelector<HTMLElement>('article[data-page-id]')?.dataset.pageId ?? '';
   private bar = document.querySelector<HTMLElement>('[data-study-bar]');
