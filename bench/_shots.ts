@@ -12,7 +12,7 @@ for (const w of [1280, 390]) {
     await page.waitForSelector('db-calculator[data-ready]');
     await page.waitForTimeout(300);
     const wide = await page.evaluate(() => document.documentElement.scrollWidth);
-    const calc = await page.locator('db-calculator').first();
+    const calc = page.locator('db-calculator').first();
     await calc.screenshot({ path: `/tmp/shot-${w}-${p.replace(/\//g, '_')}.png` });
     console.log(w, p, 'scrollWidth', wide, errs.splice(0).join(' | '));
   }

@@ -11,7 +11,7 @@ export const MAX_URL_PARAM = 200;
 export interface FeedSources {
   readonly values: Values;
   readonly outputs: Outputs;
-  readonly handoff?: Readonly<Record<string, string>>;
+  readonly handoff?: Readonly<Record<string, string>> | undefined;
 }
 
 /** A number as an address carries it: SI, 10 significant digits (enough to round-trip a typed value). */

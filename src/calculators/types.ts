@@ -19,8 +19,8 @@ export interface NumberInput {
   readonly default: number;
   readonly min: number;
   readonly max: number;
-  readonly minExclusive?: boolean;
-  readonly maxExclusive?: boolean;
+  readonly minExclusive?: boolean | undefined;
+  readonly maxExclusive?: boolean | undefined;
   readonly help: string;
   /** When true the CLI and evaluate() refuse to fill the default (it is a design quantity). */
   readonly required?: boolean;

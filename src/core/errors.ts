@@ -14,8 +14,8 @@ export interface Range {
   readonly min: number;
   readonly max: number;
   /** When true the lower bound itself is not allowed (e.g. mass > 0). */
-  readonly minExclusive?: boolean;
-  readonly maxExclusive?: boolean;
+  readonly minExclusive?: boolean | undefined;
+  readonly maxExclusive?: boolean | undefined;
 }
 
 /** Formats a range as "(0, 1e6] kg" style interval notation. */

@@ -6,7 +6,7 @@
 import { LEGACY_LAW_KEYS, migrateLawKeys } from '../calculators/shared/damperLawMigrate.ts';
 import { evaluate } from '../calculators/evaluate.ts';
 import { isNumeralChoice, migrateYesNoNumbers } from '../calculators/shared/yesNoNumbers.ts';
-import type { CalculatorDefinition, InputDef, Outputs, Values } from '../calculators/types.ts';
+import type { CalculatorDefinition, Outputs, Values } from '../calculators/types.ts';
 import { DampbookError } from '../core/errors.ts';
 import { relativeDifference, withinTolerance } from '../core/numeric/index.ts';
 import { findUnit, fromSI, siUnit, toSI } from '../core/units/index.ts';
@@ -21,9 +21,9 @@ export const REPRODUCE_TOLERANCE = 1e-9;
 export const REPRODUCE_FLOOR = 1e-12;
 
 export interface RecordContext {
-  readonly page?: { readonly id: string; readonly revision: string };
+  readonly page?: { readonly id: string; readonly revision: string } | undefined;
   readonly coreVersion: string;
-  readonly contentHash?: string;
+  readonly contentHash?: string | undefined;
 }
 
 /** A number input as the reader typed it: the number in the field and the field's unit id. */

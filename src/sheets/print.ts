@@ -11,7 +11,7 @@ import { serveStatic } from '../server/staticServer.ts';
 import type { Paper } from './pageCss.ts';
 
 export const SHEET_FIELDS = ['project', 'no', 'calc', 'by', 'checker', 'date'] as const;
-export type SheetFields = Partial<Record<(typeof SHEET_FIELDS)[number], string>>;
+export type SheetFields = Partial<Record<(typeof SHEET_FIELDS)[number], string | undefined>>;
 
 export interface PrintOptions {
   /** Built site folder (dist/). */

@@ -35,7 +35,7 @@ export function describeValue(v: unknown): string {
  * the default, log-uniform over a positive range, the closed bounds and the smallest step inside
  * an exclusive lower bound (the "tiny" edge, e.g. a mass of 5e-324 kg). `u`, `w` in [0, 1).
  */
-export function sampleNumber(def: { min: number; max: number; default: number; minExclusive?: boolean; maxExclusive?: boolean }, pick: number, u: number): number {
+export function sampleNumber(def: { min: number; max: number; default: number; minExclusive?: boolean | undefined; maxExclusive?: boolean | undefined }, pick: number, u: number): number {
   const lo = def.min;
   const hi = Number.isFinite(def.max) ? def.max : Math.max(1e12, Math.abs(lo) * 1e6);
   const parts: (() => number)[] = [() => lo + (hi - lo) * u, () => def.default];

@@ -9,7 +9,7 @@ import { lawFromValues, lawInputs } from '../shared/damperLawInputs.ts';
 import { q } from '../quantityText.ts';
 import { memoLast, oncePerValues } from '../memoLast.ts';
 
-type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion>; law?: DamperLaw; loop: ReturnType<typeof loopOf> };
+type Analysis = { rec: ReturnType<typeof parseRecordedMotion>; r: ReturnType<typeof recordedMotion>; law?: DamperLaw | undefined; loop: ReturnType<typeof loopOf> };
 
 // the record is parsed once per change of its text or layout, not on every keystroke in another
 // field (a 2 MB record took about 0.3–0.5 s to parse); recordedMotion and loopOf only read it

@@ -1,7 +1,7 @@
 import { parseProtocol, protocolHeating, type ProtocolRun } from '../../core/duty/index.ts';
 import { oncePerValues } from '../memoLast.ts';
 import { ZERO_CELSIUS } from '../../core/constants.ts';
-import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
+import { defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
 import { describeLaw, lawFromValues, lawInputs, lawStudy } from '../shared/damperLawInputs.ts';
 import { FLUID_SOURCES, spanWarning } from '../shared/fluidInputs.ts';
 import { q } from '../quantityText.ts';

@@ -12,7 +12,7 @@ import { MAX_STUDY_CHARS } from '../../studies/schema.ts';
 export interface BarState {
   readonly study: Study | undefined;
   readonly run: StudyRun | undefined;
-  readonly error: { readonly step?: string; readonly message: string } | undefined;
+  readonly error: { readonly step?: string | undefined; readonly message: string } | undefined;
   readonly pageId: string;
   readonly pageUrls: Readonly<Record<string, string>>;
   readonly stepsHere: readonly string[];

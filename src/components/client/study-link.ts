@@ -28,7 +28,7 @@ export const words = (name: string) => name.replace(/([a-z0-9])([A-Z])/g, '$1 $2
 class StudySession {
   study: Study | undefined;
   run: StudyRun | undefined;
-  error: { step?: string; message: string } | undefined;
+  error: { step?: string | undefined; message: string } | undefined;
   private attached: Attached[] = [];
   /** Only the definitions this study and page use (the registry would load every calculator). */
   private calcs = new LoadedCalculators();

@@ -15,9 +15,9 @@ export interface RejectedRow {
 
 export interface ParsedRecord {
   readonly t: number[];
-  readonly x?: number[];
-  readonly v?: number[];
-  readonly F?: number[];
+  readonly x?: number[] | undefined;
+  readonly v?: number[] | undefined;
+  readonly F?: number[] | undefined;
   readonly columns: ColumnMap;
   readonly rejected: RejectedRow[];
   /** Blank and comment ('#') lines skipped. */

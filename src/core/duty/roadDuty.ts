@@ -33,7 +33,7 @@ export interface RoadDuty {
   /** Largest relative error bound of the five integrals. */
   readonly relError: number;
   /** Closed forms (w = 2 only), same c. */
-  readonly closed?: { readonly vRms: number; readonly P: number; readonly accRms: number; readonly travelRms: number; readonly tyreLoadRms: number };
+  readonly closed?: { readonly vRms: number; readonly P: number; readonly accRms: number; readonly travelRms: number; readonly tyreLoadRms: number } | undefined;
   readonly iterations: number;
   /**
    * Largest relative difference between quadrature and closed form for this car and linear damping c

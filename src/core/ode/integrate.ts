@@ -30,7 +30,7 @@ export interface AdaptiveOptions {
    * the start). The point is located on the continuous extension by bisection to round-off, and
    * the state there is recomputed by one step of the method from the start of the step.
    */
-  readonly event?: (t: number, y: Float64Array) => number;
+  readonly event?: ((t: number, y: Float64Array) => number) | undefined;
   readonly onStep?: (step: AcceptedStep) => void;
 }
 

@@ -30,7 +30,7 @@ export interface ParseOptions {
   /** Fewest columns a data row must have (default 1). */
   readonly minColumns?: number;
   /** Most data rows accepted (default 200 000). */
-  readonly maxRows?: number;
+  readonly maxRows?: number | undefined;
   /** Most header lines before the first data row (default 50). */
   readonly maxHeaderLines?: number;
 }

@@ -14,7 +14,7 @@ export interface TimeSeriesOptions {
   readonly column?: number;
   /** factor from the file's time unit to seconds (0.001 for ms); default 1 */
   readonly timeScale?: number;
-  readonly maxRows?: number;
+  readonly maxRows?: number | undefined;
 }
 
 /**

@@ -22,7 +22,7 @@ export interface SdofModel {
   readonly x0: number; // m
   readonly v0: number; // m/s
   /** Series stiffness between the damper and the mass (Maxwell element), N/m; undefined = rigid. */
-  readonly ks?: number;
+  readonly ks?: number | undefined;
 }
 
 /**

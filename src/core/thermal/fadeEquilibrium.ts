@@ -37,7 +37,7 @@ export interface FadeEquilibrium {
   /** The equilibrium reached when warming from ambient (the lowest crossing), if any below the limit. */
   readonly reached?: { readonly T: number; readonly Toil: number; readonly c: number; readonly P: number };
   /** Time to reach the limit from ambient when no equilibrium stops the rise (needs Cth). */
-  readonly tLimit?: number;
+  readonly tLimit?: number | undefined;
   readonly warnings: readonly string[];
 }
 

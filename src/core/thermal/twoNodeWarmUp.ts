@@ -56,7 +56,7 @@ export interface TwoNodeRun {
  */
 export function twoNodeWarmUp(
   Q: (Tb: number) => number, b: TwoNodeBody, p: PowerProfile, end: ProfileEnd, tEnd: number,
-  opts: { readonly stopAt?: number; readonly heating?: (P: number, Toil: number) => number } = {},
+  opts: { readonly stopAt?: number | undefined; readonly heating?: ((P: number, Toil: number) => number) | undefined } = {},
 ): TwoNodeRun {
   const Co = requireInRange('Coil', b.Coil, POSITIVE, 'J/K');
   const Cb = requireInRange('Cbody', b.Cbody, POSITIVE, 'J/K');

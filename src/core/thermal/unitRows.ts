@@ -42,7 +42,7 @@ export function readUnitRows(text: string, input: string, columns: readonly Unit
   if (header && header.length !== columns.length) {
     throw new InputRangeError(input, header.join(' ').slice(0, 40), undefined, '', `the header has ${header.length} cells for ${columns.length} columns: separate its cells as the rows are separated`);
   }
-  const units = columns.map((c, i) => (header ? splitNameUnit(header[i]!).unit : ''));
+  const units = columns.map((_c, i) => (header ? splitNameUnit(header[i]!).unit : ''));
   const defs = columns.map((c, i) => {
     if (!units[i]) return undefined;
     try {

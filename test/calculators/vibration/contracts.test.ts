@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { getCalculator } from '../../../src/calculators/registry.ts';
 import { evaluate } from '../../../src/calculators/evaluate.ts';
-import { InputRangeError, ComputationError } from '../../../src/core/errors.ts';
+import { InputRangeError } from '../../../src/core/errors.ts';
 
 const keys = (id: string, side: 'inputs' | 'outputs') => getCalculator(id)![side].map((d) => d.key);
 

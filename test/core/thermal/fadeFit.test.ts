@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { fadeCoefficient, fadeFit, mineralOilCurve, readUnitRows, type FadeModel } from '../../../src/core/thermal/index.ts';
-import { ComputationError, InputRangeError } from '../../../src/core/errors.ts';
+import { InputRangeError } from '../../../src/core/errors.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 // Closed form: rows made from the law itself must give the law back; the least-squares problem
