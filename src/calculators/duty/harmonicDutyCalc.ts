@@ -64,7 +64,7 @@ export const harmonicDutyCalc = defineCalculator({
       lawChart(law, result.outputs.vPeak as number, omega),
       {
         id: 'power-frequency', title: 'Mean power against frequency at this stroke',
-        x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
+        x: { label: 'Frequency', kind: 'frequency', scale: 'log', input: 'f' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
         series: [{ label: describeLaw(law), x: fs, y: Pf, tone: 0 }],
         markers: [{ x: f0, label: 'this frequency' }],
         summary: `Mean power from ${q(Pf[0]!, 'power', 3)} at ${q(fs[0]!, 'frequency', 3)} to ${q(Pf[Pf.length - 1]!, 'power', 3)} at ${q(fs[fs.length - 1]!, 'frequency', 3)}; ${q(result.outputs.P as number, 'power')} at ${f0.toPrecision(3)} Hz.`,
