@@ -77,7 +77,14 @@ function markerPlugin(markers: readonly ChartMarker[], unitSymbol: string, toX: 
           ctx.font = '600 12px system-ui, sans-serif';
           ctx.textAlign = left ? 'right' : 'left';
           ctx.textBaseline = 'top';
-          ctx.fillText(`this case ${formatNumber(v, 3)}${unitSymbol ? ` ${unitSymbol}` : ''}`, px + (left ? -4 : 4), area.top + 3);
+          const text = `this case ${formatNumber(v, 3)}${unitSymbol ? ` ${unitSymbol}` : ''}`;
+          const tx = px + (left ? -4 : 4);
+          // a white halo keeps the label legible over the series
+          ctx.lineWidth = 4;
+          ctx.strokeStyle = '#fff';
+          ctx.lineJoin = 'round';
+          ctx.strokeText(text, tx, area.top + 3);
+          ctx.fillText(text, tx, area.top + 3);
         }
         ctx.restore();
       }

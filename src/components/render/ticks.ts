@@ -1,8 +1,8 @@
 /**
  * Axis ticks and their labels, shared by the static SVG (internal/svgChart.ts) and the live
  * chart.js charts (internal/chart-view.ts), so both follow the same rules:
- * - linear axes step 1-2-5 × 10^n; log axes tick at decades, adding 2 and 5 (or 2-4-6-8, or
- *   every integer multiple on a short axis) only where the labels have room, and thin the decades
+ * - linear axes step 1-2-5 × 10^n; log axes tick at decades, adding 2 and 5 (on an axis shorter
+ *   than a decade also 2-4-6-8 or every integer multiple) only where the labels have room, and thin the decades
  *   (every 2nd, 3rd, …) where even those would collide;
  * - labels never overlap: each label's extent along the axis (text width on a horizontal axis,
  *   line height on a vertical one, from a character-width estimate) is measured against the
@@ -130,7 +130,10 @@ function logTicks(lo: number, hi: number, o: TickOptions): AxisTick[] {
     const labels = logLabels(values);
     return values.map((value, i) => ({ value, label: labels[i]! }));
   };
-  const candidates: AxisTick[][] = LOG_SETS.map((s) => pick(s, 1));
+  // the denser sets (3, 4, 6, 7, 8, 9) only on an axis shorter than a decade: across decades the
+  // reader wants decades, with 2 and 5 where there is room
+  const short = Math.log10(hi / lo) < 1;
+  const candidates: AxisTick[][] = LOG_SETS.filter((s) => short || s.length <= 3).map((s) => pick(s, 1));
   for (let every = 2; every <= Math.max(2, d1 - d0); every++) candidates.push(pick([1], every));
   let fallback: AxisTick[] = [];
   for (const ticks of candidates) {

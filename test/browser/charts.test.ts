@@ -1,0 +1,61 @@
+/**
+ * Charts people can read, in real Chromium against the built site (behaviour, no reference values):
+ * on road-power the power-against-speed chart marks the operating point (the speed input) in the
+ * static SVG and in the live chart's description, and no two tick labels of any chart on the page
+ * overlap as rendered, at 1280 px and at 390 px. Label boxes are the rendered SVG text boxes
+ * (getBoundingClientRect), read with scripts off so the server-drawn charts are the ones shown.
+ */
+import { describe, expect, it } from 'vitest';
+import { watchedPage } from '../helpers/browser.ts';
+import { serveBuiltSite } from '../helpers/servedSite.ts';
+
+const site = serveBuiltSite();
+const PAGE = 'duty/road-power/';
+
+type Box = { axis: string; chart: string; text: string; left: number; right: number; top: number; bottom: number };
+
+describe('charts on road-power', () => {
+  for (const width of [1280, 390]) {
+    it(`static charts: operating point marked, tick labels never overlap (${width} px)`, async () => {
+      const ctx = await site.browser.newContext({ javaScriptEnabled: false, viewport: { width, height: 900 } });
+      const page = await ctx.newPage();
+      await page.goto(`${site.server.url}${PAGE}`);
+      const marker = page.locator('figure[data-chart="power-speed"] svg line.svg-marker.operating');
+      expect(await marker.count()).toBe(1);
+      expect(await page.locator('figure[data-chart="power-speed"] svg text.svg-operating').textContent()).toBe('this case 20 m/s');
+      const boxes: Box[] = await page.$$eval('figure[data-chart] svg text.svg-tick[data-axis]', (els) => els.map((e) => {
+        const r = e.getBoundingClientRect();
+        return { axis: e.getAttribute('data-axis')!, chart: e.closest('figure')!.getAttribute('data-chart')!, text: e.textContent ?? '', left: r.left, right: r.right, top: r.top, bottom: r.bottom };
+      }));
+      const charts = new Set(boxes.map((b) => b.chart));
+      expect(charts.size).toBeGreaterThanOrEqual(3);
+      for (const chart of charts) for (const axis of ['x', 'y']) {
+        const on = boxes.filter((b) => b.chart === chart && b.axis === axis);
+        expect(on.length, `${chart} ${axis}: at least two labels`).toBeGreaterThanOrEqual(2);
+        for (let i = 0; i < on.length; i++) for (let j = i + 1; j < on.length; j++) {
+          const a = on[i]!; const b = on[j]!;
+          const overlap = a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom;
+          expect(overlap, `${chart} ${axis}: "${a.text}" and "${b.text}" overlap`).toBe(false);
+        }
+      }
+      // the log speed axis: decades and 1-2-5 values only, written in one format
+      const speed = boxes.filter((b) => b.chart === 'power-speed' && b.axis === 'x').map((b) => b.text);
+      for (const t of speed) expect(t).toMatch(/^(1|2|5)(0*)(\.\d+)?$|^0\.0*[125]$/);
+      await ctx.close();
+    });
+  }
+
+  it('the live chart says where the operating point is and follows the speed input', async () => {
+    const w = await watchedPage(site.browser, site.server.origin);
+    const { page } = w;
+    await page.goto(`${site.server.url}${PAGE}`);
+    await page.waitForSelector('db-calculator[data-ready]');
+    const canvas = page.locator('figure[data-chart="power-speed"] canvas');
+    await canvas.waitFor();
+    await expect.poll(() => canvas.getAttribute('aria-label')).toContain('this case, vehicle speed 20 m/s');
+    await page.fill('#c-road-power-V', '30');
+    await expect.poll(() => canvas.getAttribute('aria-label'), { timeout: 20000 }).toContain('this case, vehicle speed 30 m/s');
+    expect(w.pageErrors).toEqual([]);
+    expect(w.consoleErrors).toEqual([]);
+  });
+});
