@@ -7,7 +7,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { chooseTicks, collides, labelExtent, linearLabels, logLabels, niceRange, tickOffset, type TickOptions } from '../../src/components/render/ticks.ts';
+import { chooseTicks, collides, labelExtent, labelGap, linearLabels, logLabels, niceRange, tickOffset, type TickOptions } from '../../src/components/render/ticks.ts';
 
 const x = (lengthPx: number, log: boolean, charPx = 6): TickOptions => ({ log, lengthPx, charPx, along: 'width' });
 const labels = (lo: number, hi: number, o: TickOptions) => chooseTicks(lo, hi, o).map((t) => t.label);
@@ -44,7 +44,7 @@ describe('chooseTicks: labels never collide', () => {
     fc.assert(fc.property(axis, (a) => {
       const { lo, hi, o } = build(a);
       const e = extents(lo, hi, o);
-      for (let i = 1; i < e.length; i++) expect(e[i]![0] - e[i - 1]![1]).toBeGreaterThanOrEqual(o.charPx - 1e-6);
+      for (let i = 1; i < e.length; i++) expect(e[i]![0] - e[i - 1]![1]).toBeGreaterThanOrEqual(labelGap(o) - 1e-6);
       expect(collides(chooseTicks(lo, hi, o), lo, hi, o)).toBe(false);
     }), { seed: 1, numRuns: 600 });
   });

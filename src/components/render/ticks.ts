@@ -25,7 +25,7 @@ export interface TickOptions {
   readonly along: 'width' | 'height';
   /** Label height on a vertical axis; default 2 × charPx. */
   readonly lineHeightPx?: number;
-  /** Least free space between neighbouring labels; default 1 × charPx. */
+  /** Least free space between neighbouring labels; default 1 × charPx side by side, 0.3 × line height stacked. */
   readonly gapPx?: number;
 }
 
@@ -46,9 +46,14 @@ export function tickOffset(v: number, lo: number, hi: number, o: TickOptions): n
   return span > 0 ? ((f(v) - f(lo)) / span) * o.lengthPx : 0;
 }
 
+/** Least free space kept between neighbouring labels. */
+export function labelGap(o: TickOptions): number {
+  return o.gapPx ?? (o.along === 'width' ? o.charPx : 0.3 * (o.lineHeightPx ?? 2 * o.charPx));
+}
+
 /** True when two neighbouring labels come closer than the gap (or overlap). */
 export function collides(ticks: readonly AxisTick[], lo: number, hi: number, o: TickOptions): boolean {
-  const gap = o.gapPx ?? o.charPx;
+  const gap = labelGap(o);
   for (let i = 1; i < ticks.length; i++) {
     const a = ticks[i - 1]!;
     const b = ticks[i]!;
