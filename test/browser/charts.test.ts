@@ -3,14 +3,42 @@
  * on road-power the power-against-speed chart marks the operating point (the speed input) in the
  * static SVG and in the live chart's description, and no two tick labels of any chart on the page
  * overlap as rendered, at 1280 px and at 390 px. Label boxes are the rendered SVG text boxes
- * (getBoundingClientRect), read with scripts off so the server-drawn charts are the ones shown.
+ * (getBoundingClientRect), read with scripts off so the server-drawn charts are the ones shown;
+ * the live charts are read from their chart.js scales.
  */
+import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { watchedPage } from '../helpers/browser.ts';
 import { serveBuiltSite } from '../helpers/servedSite.ts';
 
 const site = serveBuiltSite();
 const PAGE = 'duty/road-power/';
+
+/** The live chart.js scales: the element keeps its ChartGroup (`charts`), which keeps one chart.js
+ * instance per figure; label boxes come from the scale's own measured label sizes. */
+async function expectLiveLabelsApart(page: Page): Promise<void> {
+  const live = await page.evaluate(() => {
+    type Scale = { ticks: { value: number; label?: unknown }[]; getPixelForTick(i: number): number; isHorizontal(): boolean; _getLabelSizes(): { widths: number[]; heights: number[] } };
+    const el = document.querySelector('db-calculator') as unknown as { charts: { charts: Map<string, { scales: Record<string, Scale> }> } };
+    const out: { chart: string; axis: string; labels: string[]; overlaps: string[] }[] = [];
+    for (const [id, chart] of el.charts.charts) for (const axis of ['x', 'y']) {
+      const sc = chart.scales[axis]!;
+      const sizes = sc._getLabelSizes();
+      const horizontal = sc.isHorizontal();
+      const boxes = sc.ticks.map((t, i) => { const c = sc.getPixelForTick(i); const half = (horizontal ? sizes.widths[i]! : sizes.heights[i]!) / 2; return { label: String(t.label), lo: c - half, hi: c + half }; });
+      boxes.sort((a, b) => a.lo - b.lo);
+      const overlaps: string[] = [];
+      for (let i = 1; i < boxes.length; i++) if (boxes[i]!.lo < boxes[i - 1]!.hi) overlaps.push(`${boxes[i - 1]!.label}|${boxes[i]!.label}`);
+      out.push({ chart: id, axis, labels: boxes.map((b) => b.label), overlaps });
+    }
+    return out;
+  });
+  expect(live.length).toBeGreaterThanOrEqual(6);
+  for (const a of live) {
+    expect(a.overlaps, `${a.chart} ${a.axis}: ${a.labels.join(' ')}`).toEqual([]);
+    expect(a.labels.length, `${a.chart} ${a.axis}`).toBeGreaterThanOrEqual(2);
+  }
+}
 
 type Box = { axis: string; chart: string; text: string; left: number; right: number; top: number; bottom: number };
 
@@ -53,9 +81,18 @@ describe('charts on road-power', () => {
     const canvas = page.locator('figure[data-chart="power-speed"] canvas');
     await canvas.waitFor();
     await expect.poll(() => canvas.getAttribute('aria-label')).toContain('this case, vehicle speed 20 m/s');
+    await expectLiveLabelsApart(page);
     await page.fill('#c-road-power-V', '30');
     await expect.poll(() => canvas.getAttribute('aria-label'), { timeout: 20000 }).toContain('this case, vehicle speed 30 m/s');
     expect(w.pageErrors).toEqual([]);
     expect(w.consoleErrors).toEqual([]);
+  });
+
+  it('live chart labels stay apart at 390 px too', async () => {
+    const w = await watchedPage(site.browser, site.server.origin, { width: 390, height: 900 });
+    await w.page.goto(`${site.server.url}${PAGE}`);
+    await w.page.waitForSelector('db-calculator[data-ready]');
+    await w.page.locator('figure[data-chart="power-speed"] canvas').waitFor();
+    await expectLiveLabelsApart(w.page);
   });
 });
