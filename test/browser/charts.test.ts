@@ -88,6 +88,23 @@ describe('charts on road-power', () => {
     expect(w.consoleErrors).toEqual([]);
   });
 
+  it('at 390 px the tolerance mode keeps one column and the page does not scroll sideways', async () => {
+    const w = await watchedPage(site.browser, site.server.origin, { width: 390, height: 900 });
+    await w.page.goto(`${site.server.url}${PAGE}`);
+    await w.page.waitForSelector('db-calculator[data-ready]');
+    await w.page.locator('.vary-toggle input').first().check();
+    await expect.poll(() => w.page.locator('db-calculator').first().getAttribute('data-vary')).not.toBeNull();
+    expect(await w.page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    // units stay whole: no unit cell wraps onto a second line
+    const split = await w.page.$$eval('.out-table td.unit', (tds) => tds.filter((td) => {
+      if (!td.firstChild || !td.textContent) return false;
+      const r = document.createRange();
+      r.selectNodeContents(td);
+      return r.getClientRects().length > 1 || td.scrollWidth > td.clientWidth; // wrapped onto two lines, or clipped
+    }).map((td) => td.textContent));
+    expect(split).toEqual([]);
+  });
+
   it('live chart labels stay apart at 390 px too', async () => {
     const w = await watchedPage(site.browser, site.server.origin, { width: 390, height: 900 });
     await w.page.goto(`${site.server.url}${PAGE}`);
