@@ -132,14 +132,26 @@ export interface ChartSpec {
   readonly x: ChartAxis;
   readonly y: ChartAxis;
   readonly series: readonly ChartSeries[];
-  /** Vertical reference lines (e.g. r = √2). */
-  readonly markers?: readonly { readonly x: number; readonly label: string }[];
+  /** Vertical reference lines (e.g. r = √2); `operating` marks the current input value (see ChartAxis.input). */
+  readonly markers?: readonly ChartMarker[];
   /** One or two sentences that state what the chart shows, with the key numbers. */
   readonly summary: string;
 }
 
+export interface ChartMarker {
+  readonly x: number;
+  readonly label: string;
+  /** The current operating point: drawn stronger and labelled with its value in the reader's unit. */
+  readonly operating?: boolean;
+}
+
 export interface ChartAxis {
   readonly label: string;
+  /**
+   * Key of the calculator input this (x) axis shows: the chart then marks that input's current
+   * value as the operating point (src/calculators/chartMarks.ts adds the marker for every renderer).
+   */
+  readonly input?: string;
   /** Data are SI; the renderer converts to the reader's unit system. */
   readonly kind: QuantityKind;
   readonly scale?: 'linear' | 'log';
@@ -152,7 +164,7 @@ export interface ChartSeries {
   readonly x: readonly number[];
   readonly y: readonly number[];
   readonly style?: 'line' | 'dash' | 'points' | 'thin';
-  /** Palette slot 0..5 (colours live in CSS, not here). */
+  /** Palette slot 0..7: a colour and a dash pattern (src/components/render/palette.ts). */
   readonly tone?: number;
   /** false: drawn but not listed in the legend (e.g. the mirror half of an envelope). */
   readonly legend?: false;

@@ -1,5 +1,5 @@
 /**
- * The page's tolerance boxes (internal/toleranceField.ts): ± % of the nominal SI value, lo..hi in
+ * The page's tolerance boxes (render/toleranceField.ts): ± % of the nominal SI value, lo..hi in
  * the field's shown unit, and a range converted with its field when the unit changes.
  * Conversion factor: 1 lb = 0.45359237 kg (NIST SP 811 (2008), Appendix B.8; published, exact).
  */

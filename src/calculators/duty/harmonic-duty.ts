@@ -52,7 +52,7 @@ export const harmonicDutyCalculator = defineCalculator({
     const F = ks === undefined ? th.map((t) => damperForce(law, X * omega * Math.cos(t), omega)) : undefined;
     const f0 = omega / (2 * Math.PI);
     // a decade either side; frequencies so small that ω underflows to 0 are left out
-    const fs = Array.from({ length: 41 }, (_, i) => f0 * 10 ** (-1 + i / 20)).filter((f) => 2 * Math.PI * f > 0);
+    const fs = Array.from({ length: 61 }, (_, i) => f0 * 10 ** (-1 + i / 30)).filter((f) => 2 * Math.PI * f > 0);
     const Pf = fs.map((f) => duty(law, ks, X, 2 * Math.PI * f).P);
     return [
       ...(F ? [{
@@ -64,9 +64,8 @@ export const harmonicDutyCalculator = defineCalculator({
       lawChart(law, result.outputs.vPeak as number, omega),
       {
         id: 'power-frequency', title: 'Mean power against frequency at this stroke',
-        x: { label: 'Frequency', kind: 'frequency', scale: 'log' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
+        x: { label: 'Frequency', kind: 'frequency', scale: 'log', input: 'f' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
         series: [{ label: describeLaw(law), x: fs, y: Pf, tone: 0 }],
-        markers: [{ x: f0, label: 'this frequency' }],
         summary: `Mean power from ${q(Pf[0]!, 'power', 3)} at ${q(fs[0]!, 'frequency', 3)} to ${q(Pf[Pf.length - 1]!, 'power', 3)} at ${q(fs[fs.length - 1]!, 'frequency', 3)}; ${q(result.outputs.P as number, 'power')} at ${f0.toPrecision(3)} Hz.`,
       },
     ];

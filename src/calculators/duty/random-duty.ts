@@ -75,7 +75,7 @@ export const randomDutyCalculator = defineCalculator({
   },
   charts(values, result): ChartSpec[] {
     const { stroke, law } = setup(values);
-    const s = Array.from({ length: 41 }, (_, i) => stroke.sigmaV * 10 ** (-1 + i / 20));
+    const s = Array.from({ length: 61 }, (_, i) => stroke.sigmaV * 10 ** (-1 + i / 30)); // log-spaced: straight on log axes
     const P = s.map((v) => gaussianMeanPower(law, v));
     return [
       lawChart(law, 3 * stroke.sigmaV, 2 * Math.PI * stroke.nu0),
@@ -83,7 +83,7 @@ export const randomDutyCalculator = defineCalculator({
         id: 'power-rms', title: 'Mean power against RMS velocity',
         x: { label: 'RMS velocity', kind: 'velocity', scale: 'log' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
         series: [{ label: describeLaw(law), x: s, y: P, tone: 0 }],
-        markers: [{ x: stroke.sigmaV, label: 'this duty' }],
+        markers: [{ x: stroke.sigmaV, label: 'this duty', operating: true }], // σ_v is a result, not an input: marked here
         summary: `Mean power ${q(result.outputs.P as number, 'power')} at σ_v = ${q(stroke.sigmaV, 'velocity')}; from ${q(P[0]!, 'power', 3)} at a tenth of it to ${q(P.at(-1)!, 'power', 3)} at ten times.`,
       },
     ];

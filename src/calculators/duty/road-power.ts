@@ -9,6 +9,7 @@ import { lawInputs, lawStudy } from '../shared/damperLawInputs.ts';
 const LAW = lawInputs({ kinds: ['linear', 'power'], defaults: { c: 980, Fref: 800, vref: 1, alpha: 0.5 }, limits: { cMin: 10, cMax: 1e6, FrefMin: 1 }, series: false });
 import { q as qty } from '../quantityText.ts';
 import { ROAD_POWER_CASES } from './road-power.cases.ts';
+import { powerAgainstSpeed } from './road-power.speed.ts';
 
 function setup(values: Values) {
   const cls = choice<string>(values, 'roadClass');
@@ -101,18 +102,10 @@ export const roadPowerCalculator = defineCalculator({
     const q = { ...s.car, c: (result.outputs.ceq as number) * s.MR * s.MR };
     const f = logGrid(0.1, 100, 241);
     const g = f.map((fi) => ({ fi, h: quarterCarGains(q, fi), gz: roadDisplacementPsd(s.road, fi) }));
-    const speeds = s.damper.kind === 'linear' || s.road.w === 2 ? [2.5, 5, 10, 20, 30, 40] : [5, 10, 20, 40];
-    const cMean = roadRoughness('C', 'mean').Gd0;
-    // a linear damper's power is proportional to G_d(n0): one sweep serves every class
-    const linearC = s.damper.kind === 'linear' ? speeds.map((V) => roadDamperPower(s.car, { Gd0: cMean, w: s.road.w, V }, s.damper, 1e-5)) : undefined;
-    const classes = ISO_8608_CLASSES.map((cls, i) => {
-      const Gd0 = roadRoughness(cls, 'mean').Gd0;
-      return {
-        label: `class ${cls}`, x: speeds, tone: i % 6, style: i < 6 ? ('line' as const) : ('dash' as const),
-        y: linearC ? linearC.map((p) => (p * Gd0) / cMean) : speeds.map((V) => roadDamperPower(s.car, { Gd0, w: s.road.w, V }, s.damper, 1e-4, 24)),
-      };
-    });
-    const pC = roadDamperPower(s.car, { Gd0: cMean, w: s.road.w, V: 20 }, s.damper, 1e-4, 24);
+    // log-spaced speeds around this case's speed, so the marked operating point lies on the chart
+    const ps = powerAgainstSpeed(s.car, s.road.w, s.damper, Math.min(2.5, s.road.V), Math.max(40, s.road.V));
+    const classes = ps.classes.map((c, i) => ({ label: `class ${c.cls}`, x: ps.speeds, y: c.power, tone: i }));
+    const pC = roadDamperPower(s.car, { Gd0: roadRoughness('C', 'mean').Gd0, w: s.road.w, V: 20 }, s.damper, 1e-4, 24);
     return [
       {
         id: 'velocity-psd', title: 'Damper velocity PSD',
@@ -131,9 +124,9 @@ export const roadPowerCalculator = defineCalculator({
       },
       {
         id: 'power-speed', title: 'Mean damper power against speed, ISO 8608 classes (geometric means)',
-        x: { label: 'Speed', kind: 'velocity' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
+        x: { label: 'Speed', kind: 'velocity', scale: 'log', input: 'V' }, y: { label: 'Mean power', kind: 'power', scale: 'log' },
         series: classes,
-        summary: `Mean damper power rises in proportion to speed${s.road.w === 2 ? ' (exactly, for w = 2)' : ''} and by a factor 4 per class; class C at ${qty(20, 'velocity', 3)}: ${qty(pC, 'power', 3)}.`,
+        summary: `Mean damper power rises ${s.road.w === 2 ? 'in proportion to speed (exactly, for w = 2)' : s.damper.kind === 'linear' ? `as speed^${(s.road.w - 1).toPrecision(3)} (linear damper, w = ${s.road.w})` : 'with speed'} and by a factor 4 per class; class C at ${qty(20, 'velocity', 3)}: ${qty(pC, 'power', 3)}.`,
       },
     ];
   },

@@ -94,9 +94,8 @@ export const structuralDampersCalculator = defineCalculator({
     const beta = drifts.map((d) => storeyDampers({ ...s, drift: d }).betaSup);
     return [{
       id: 'beta-drift', title: 'Supplemental damping against drift amplitude',
-      x: { label: 'Storey drift amplitude', kind: 'length' }, y: { label: 'Supplemental damping ratio', kind: 'dimensionless' },
+      x: { label: 'Storey drift amplitude', kind: 'length', input: 'drift' }, y: { label: 'Supplemental damping ratio', kind: 'dimensionless' },
       series: [{ label: `α = ${s.alpha}`, x: drifts, y: beta, tone: 0 }],
-      markers: [{ x: s.drift, label: 'design drift' }],
       summary: `With α = ${s.alpha} the damping added falls as drift^(α−1): ${(result.outputs.betaSup as number).toPrecision(3)} at the design drift of ${q(s.drift, 'length', 3)}.`,
     }];
   },

@@ -101,8 +101,8 @@ export const fadeFitCalculator = defineCalculator({
           const mine = rows.filter((r) => Math.abs(r[0]! - g.T) <= 1);
           const cFit = fit.cRef * unclippedRatio(fit, g.T);
           return [
-            { label: `tests at ${(g.T - ZERO_CELSIUS).toFixed(0)} °C`, x: mine.map((r) => r[1]!), y: mine.map((r) => r[2]!), style: 'points' as const, tone: i % 6 },
-            { label: `law at ${(g.T - ZERO_CELSIUS).toFixed(0)} °C`, x: [0, vmax], y: [0, cFit * vmax], style: 'dash' as const, tone: i % 6, legend: false as const },
+            { label: `tests at ${(g.T - ZERO_CELSIUS).toFixed(0)} °C`, x: mine.map((r) => r[1]!), y: mine.map((r) => r[2]!), style: 'points' as const, tone: i % 8 },
+            { label: `law at ${(g.T - ZERO_CELSIUS).toFixed(0)} °C`, x: [0, vmax], y: [0, cFit * vmax], style: 'dash' as const, tone: i % 8, legend: false as const },
           ];
         }),
         summary: `${rows.length} test points at ${byT.length} temperatures; the fitted law leaves an rms force error of ${q(fit.rmsError, 'force', 3)} (r² = ${fit.r2.toFixed(5)}).`,

@@ -42,7 +42,7 @@ export const oilViscosityCalculator = defineCalculator({
     return [{
       id: 'viscosity',
       title: 'Kinematic viscosity against temperature',
-      x: { label: 'Oil temperature', kind: 'temperature' },
+      x: { label: 'Oil temperature', kind: 'temperature', input: 'T' },
       y: { label: 'Kinematic viscosity', kind: 'kinematicViscosity', scale: 'log' },
       series: [
         { label: 'ASTM D341 line', x: T, y: nu, tone: 0 },

@@ -54,10 +54,9 @@ export const powerRatingCalculator = defineCalculator({
     return [{
       id: 'rating',
       title: 'Power rating against air speed across the body',
-      x: { label: 'Air speed across the body', kind: 'velocity' },
+      x: { label: 'Air speed across the body', kind: 'velocity', input: 'V' },
       y: { label: 'Continuous rating', kind: 'power', min: 0 },
       series: [{ label: `P_max at ${(Tmax - ZERO_CELSIUS).toFixed(0)} °C`, x: V, y: P, tone: 0 }],
-      markers: body.V > 0 ? [{ x: body.V, label: 'this case' }] : [],
       summary: `At ${q(Tmax, 'temperature', 3)} the body sheds ${q(P[0]!, 'power', 3)} in still air and ${q(P.at(-1)!, 'power', 3)} with ${q(Vtop, 'velocity', 2)} across it.`,
     }];
   },

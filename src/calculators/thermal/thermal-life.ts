@@ -106,7 +106,7 @@ export const thermalLifeCalculator = defineCalculator({
       {
         id: 'life-law',
         title: 'Life against constant temperature',
-        x: { label: 'Temperature', kind: 'temperature' },
+        x: { label: 'Temperature', kind: 'temperature', input: 'T' },
         y: { label: 'Life', kind: 'time', scale: 'log' },
         series: [
           { label: law.kind === 'arrhenius' ? 'Arrhenius law' : 'halving law', x: Ts, y: Ts.map((T) => ageingLife(law, T)), tone: 1 },

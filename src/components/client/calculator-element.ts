@@ -7,6 +7,7 @@
  */
 import { evaluate, inputOrder, isActive } from '../../calculators/evaluate.ts';
 import { feedQuery, urlValue } from '../../calculators/feeds.ts';
+import { withOperatingPoint } from '../../calculators/chartMarks.ts';
 import type { CalculatorDefinition, Outputs, Result, Values } from '../../calculators/types.ts';
 import { DampbookError, InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, parseQuantity, toSI, type UnitSystem } from '../../core/units/index.ts';
@@ -398,7 +399,7 @@ export class CalculatorElement extends HTMLElement {
     if (warn) warn.replaceChildren(...result.warnings.map((w) => { const li = document.createElement('li'); li.textContent = w; return li; }));
     this.setState(state, 'ok', '');
     this.writeUrl(values);
-    if (calc.charts && this.querySelector('.chart')) void this.drawCharts(calc.charts(result.values, result));
+    if (calc.charts && this.querySelector('.chart')) void this.drawCharts(withOperatingPoint(calc, calc.charts(result.values, result), result.values));
     this.dispatchEvent(new CustomEvent('db-computed', { bubbles: true, detail: { id: calc.id, values, outputs: result.outputs } }));
   }
 

@@ -7,18 +7,89 @@
  */
 import {
   Chart, LinearScale, LineController, LineElement, LogarithmicScale, PointElement,
-  type ChartConfiguration, type ChartDataset,
+  type ChartConfiguration, type ChartDataset, type Plugin, type Scale,
 } from 'chart.js';
-import type { ChartSpec } from '../../calculators/types.ts';
+import type { ChartMarker, ChartSpec } from '../../calculators/types.ts';
 import type { UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatNumber, quantityText, toDisplay } from '../render/format.ts';
+import { chooseTicks, niceRange, type TickOptions } from '../render/ticks.ts';
+import { seriesDash, seriesStyle } from '../render/palette.ts';
 
 Chart.register(LineController, LineElement, PointElement, LinearScale, LogarithmicScale);
 
 type Pt = { x: number; y: number };
 
-function tone(n: number): string {
-  return getComputedStyle(document.documentElement).getPropertyValue(`--tone-${n % 6}`).trim() || '#333';
+/** chart.js tick labels are 12 px: a digit is about 6.7 px wide; 7.5 leaves a margin for the estimate. */
+const CHAR_PX = 7.5;
+const LINE_PX = 15;
+
+/**
+ * Scale options that hand tick choice and labels to render/ticks.ts (the same rules as the
+ * static SVG): the range is widened to whole steps on a linear axis, the ticks are replaced after
+ * chart.js builds its own, and no label is skipped or rotated (none collide by construction).
+ */
+function axisOptions(log: boolean, fixed: { lo: boolean; hi: boolean }) {
+  const labels = new Map<number, string>();
+  const opts = (scale: Scale): TickOptions => {
+    const horizontal = scale.isHorizontal();
+    return { log, lengthPx: horizontal ? scale.width : scale.height, charPx: CHAR_PX, along: horizontal ? 'width' : 'height', lineHeightPx: LINE_PX };
+  };
+  return {
+    bounds: 'data' as const,
+    afterDataLimits: (scale: Scale) => {
+      if (log) return;
+      const r = niceRange(scale.min, scale.max, opts(scale), fixed);
+      scale.min = r.lo;
+      scale.max = r.hi;
+    },
+    afterBuildTicks: (scale: Scale) => {
+      const ticks = chooseTicks(scale.min, scale.max, opts(scale));
+      labels.clear();
+      for (const t of ticks) labels.set(t.value, t.label);
+      scale.ticks = ticks.map((t) => ({ value: t.value }));
+    },
+    ticks: { autoSkip: false, maxRotation: 0, minRotation: 0, callback: (v: number | string) => labels.get(Number(v)) ?? '' },
+  };
+}
+
+/** Vertical marker lines across the plot area; the operating point is solid and labelled with its value. */
+function markerPlugin(markers: readonly ChartMarker[], unitSymbol: string, toX: (si: number) => number): Plugin<'line'> {
+  return {
+    id: 'dbMarkers',
+    afterDatasetsDraw(chart) {
+      const { ctx, chartArea: area } = chart;
+      const xs = chart.scales.x!;
+      for (const m of markers) {
+        const v = toX(m.x);
+        const px = xs.getPixelForValue(v);
+        if (!Number.isFinite(px) || px < area.left || px > area.right) continue;
+        ctx.save();
+        ctx.strokeStyle = m.operating ? '#203440' : '#8e877a';
+        ctx.lineWidth = m.operating ? 1.5 : 1;
+        ctx.setLineDash(m.operating ? [] : [2, 3]);
+        ctx.beginPath();
+        ctx.moveTo(px, area.top);
+        ctx.lineTo(px, area.bottom);
+        ctx.stroke();
+        if (m.operating) {
+          const left = px > (area.left + area.right) / 2;
+          ctx.fillStyle = '#203440';
+          ctx.font = '600 12px system-ui, sans-serif';
+          ctx.textAlign = left ? 'right' : 'left';
+          ctx.textBaseline = 'top';
+          const text = `this case ${formatNumber(v, 3)}${unitSymbol ? ` ${unitSymbol}` : ''}`;
+          const tx = px + (left ? -4 : 4);
+          // a white halo keeps the label legible over the series
+          ctx.lineWidth = 4;
+          ctx.strokeStyle = '#fff';
+          ctx.lineJoin = 'round';
+          ctx.strokeText(text, tx, area.top + 3);
+          ctx.fillText(text, tx, area.top + 3);
+        }
+        ctx.restore();
+      }
+    },
+  };
 }
 
 function config(spec: ChartSpec, system: UnitSystem): ChartConfiguration<'line', Pt[]> {
@@ -33,26 +104,20 @@ function config(spec: ChartSpec, system: UnitSystem): ChartConfiguration<'line',
       const y = toDisplay(s.y[i]!, uy);
       if (Number.isFinite(x) && Number.isFinite(y) && (!xlog || x > 0) && (!ylog || y > 0)) data.push({ x, y });
     }
-    const c = tone(s.tone ?? 0);
+    const c = seriesStyle(s.tone).colour;
     const points = s.style === 'points';
     return {
       label: s.label, data, borderColor: c, backgroundColor: c,
-      borderWidth: s.style === 'thin' ? 1 : 2, borderDash: s.style === 'dash' ? [6, 4] : [],
+      borderWidth: s.style === 'thin' ? 1 : 2, borderDash: [...seriesDash(s.tone, s.style)],
       pointRadius: points ? 5 : 0, pointStyle: 'circle', showLine: !points, tension: 0,
     };
   });
-  let yLo = Infinity;
-  let yHi = -Infinity;
-  for (const d of datasets) for (const p of d.data) { yLo = Math.min(yLo, p.y); yHi = Math.max(yHi, p.y); }
-  for (const m of spec.markers ?? []) {
-    const x = toDisplay(m.x, ux);
-    if (Number.isFinite(yLo)) datasets.push({ label: m.label, data: [{ x, y: yLo }, { x, y: yHi }], borderColor: '#8e877a', borderWidth: 1, borderDash: [2, 3], pointRadius: 0 });
-  }
   const sortedX = datasets.every((d) => d.data.every((p, i) => i === 0 || p.x >= d.data[i - 1]!.x));
   const axisTitle = (label: string, sym: string) => ({ display: true, text: sym ? `${label} [${sym}]` : label });
   return {
     type: 'line',
     data: { datasets },
+    plugins: [markerPlugin(spec.markers ?? [], ux.symbol, (si) => toDisplay(si, ux))],
     options: {
       animation: false,
       responsive: true,
@@ -64,9 +129,9 @@ function config(spec: ChartSpec, system: UnitSystem): ChartConfiguration<'line',
       events: [],
       scales: {
         x: { type: xlog ? 'logarithmic' : 'linear', title: axisTitle(spec.x.label, ux.symbol), min: spec.x.min !== undefined ? toDisplay(spec.x.min, ux) : undefined, max: spec.x.max !== undefined ? toDisplay(spec.x.max, ux) : undefined,
-          ticks: { callback: (v) => formatNumber(Number(v), 3) } },
+          ...axisOptions(xlog, { lo: spec.x.min !== undefined, hi: spec.x.max !== undefined }) },
         y: { type: ylog ? 'logarithmic' : 'linear', title: axisTitle(spec.y.label, uy.symbol), min: spec.y.min !== undefined ? toDisplay(spec.y.min, uy) : undefined, max: spec.y.max !== undefined ? toDisplay(spec.y.max, uy) : undefined,
-          ticks: { callback: (v) => formatNumber(Number(v), 3) } },
+          ...axisOptions(ylog, { lo: spec.y.min !== undefined, hi: spec.y.max !== undefined }) },
       },
     },
   };
@@ -84,7 +149,10 @@ function legend(fig: HTMLElement, spec: ChartSpec): void {
     const li = document.createElement('li');
     const key = document.createElement('span');
     key.className = `chart-key ${s.style ?? 'line'}`;
-    key.style.setProperty('--key', tone(s.tone ?? 0));
+    key.style.setProperty('--key', seriesStyle(s.tone).colour);
+    // the dash pattern as an image, so the key matches the line in greyscale print too
+    const dash = seriesDash(s.tone, s.style);
+    if (s.style !== 'points' && dash.length) key.style.setProperty('border-image', `repeating-linear-gradient(90deg, var(--key) 0 ${dash[0]}px, transparent ${dash[0]}px ${dash[0]! + dash[1]!}px) 1`);
     key.setAttribute('aria-hidden', 'true');
     li.append(key, s.label);
     return li;
