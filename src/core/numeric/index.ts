@@ -1,6 +1,7 @@
 /** Numerical building blocks shared by every domain. */
 export { adaptiveSimpson } from './adaptiveSimpson.ts';
 export { adaptiveSimpsonVector } from './adaptiveSimpsonVector.ts';
+export { gaussLegendre } from './gaussLegendre.ts';
 export { gamma } from './gamma.ts';
 export { brentRoot, type BrentOptions } from './brent.ts';
 export { bracketRoots, type Crossing } from './bracketRoots.ts';

@@ -56,6 +56,14 @@ describe('energyHistory', () => {
       }), { seed: 1, numRuns: 60 });
   });
 
+  it('closes to 1e-10 for heavily overdamped releases too (ζ = 50, 500: a transient hundreds of times faster than the window)', () => {
+    for (const zeta of [50, 500]) {
+      const m = 1, k = 100;
+      const h = energyHistory({ m, k, c: 2 * zeta * Math.sqrt(k * m), x0: 0.01, v0: 0.3 }, responseWindow(Math.sqrt(k / m), zeta), 401);
+      expect(h.closure, `ζ = ${zeta}`).toBeLessThan(1e-10);
+    }
+  });
+
   it('dissipated energy never decreases and never exceeds the initial energy', () => {
     const h = energyHistory({ m: 1, k: 100, c: 4, x0: 0.01, v0: 0 }, 3, 301);
     for (let i = 1; i < h.t.length; i++) expect(h.dissipated[i]!).toBeGreaterThanOrEqual(h.dissipated[i - 1]!);
