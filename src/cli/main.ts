@@ -8,6 +8,7 @@ import { escapeControls } from './escape.ts';
 import { parseArgs, requireKnownOptions, UsageError, type ParsedArgs } from './args.ts';
 import { calc } from './commands/calc.ts';
 import { check } from './commands/check.ts';
+import { approve, checkOff } from './commands/signOff.ts';
 import { list } from './commands/list.ts';
 import { newPage } from './commands/new.ts';
 import { sheet } from './commands/sheet.ts';
@@ -22,7 +23,9 @@ interface CommandSpec { run: Command; help: string; options: readonly string[]; 
 export const commands: Record<string, CommandSpec> = {
   list: { run: list, options: ['json'], inputs: false, help: 'list [--json]                      every calculator with its inputs and outputs (SI units)' },
   calc: { run: calc, options: ['json', 'record', 'content', 'vary'], inputs: true, help: 'calc <id> --in key=value … [--json] evaluate a calculator (SI values, or "25 lb")\n  dampbook calc <id> … --vary key=±15% --vary key=lo..hi [--json]   tolerance envelope: min and max of every output (up to 8 inputs; lo..hi as --in: plain = SI, "0.9 kN·s/m")\n  dampbook calc --record file.json [--json]   recompute a saved record and report differences' },
-  check: { run: check, options: ['content'], inputs: false, help: 'check [--content dir]               validate every page and run every verification case' },
+  check: { run: check, options: ['content', 'allow-changed'], inputs: false, help: 'check [--content dir] [--allow-changed]   validate every page, run every verification case, compare sign-off hashes' },
+  approve: { run: approve, options: ['by', 'date', 'content'], inputs: false, help: 'approve <page-id> --by "<name>" [--date YYYY-MM-DD] [--content dir]   approve a page: status, name, date and the hash of what is approved' },
+  'check-off': { run: checkOff, options: ['by', 'date', 'content'], inputs: false, help: 'check-off <page-id> --by "<name>" [--date YYYY-MM-DD] [--content dir]   mark a page checked, with the hash of what is checked' },
   new: { run: newPage, options: ['title', 'by', 'calc', 'content'], inputs: false, help: 'new <folder/id> [--title …] [--by …] [--calc id]   scaffold a draft page' },
   sheet: { run: sheet, options: ['pdf', 'paper', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date', 'site', 'base'], inputs: true, help: 'sheet <page> [--in k=v …] [--paper a4|letter] [--project … --project-no … --calc-no … --prepared-by … --checked-by … --date …] [--site dist] --pdf out.pdf' },
   study: { run: study, options: ['json', 'pdf', 'paper', 'site', 'base'], inputs: false, help: 'study run <study.json> [--json] | study check <study.json> | study sheet <study.json> --pdf out.pdf [--paper a4|letter]' },
