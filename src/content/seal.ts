@@ -40,6 +40,11 @@ export function pageBody(fileText: string): string {
   return m ? fileText.slice(m[0].length) : fileText;
 }
 
+/** SHA-256 of a text's UTF-8 bytes, the first SEAL_LENGTH hex digits. */
+export function shortSha256(text: string): string {
+  return createHash('sha256').update(text, 'utf8').digest('hex').slice(0, SEAL_LENGTH);
+}
+
 /**
  * The seal of a page: SHA-256 (first SEAL_LENGTH hex) of the canonical JSON of the method text,
  * the calculator ids in page order, each calculator's definition cases (null for an unknown id)
@@ -53,7 +58,7 @@ export function sealOf(body: string, page: Signed, lookup: (id: string) => Calcu
     definitionCases: page.calculators.map((id) => lookup(id)?.verification ?? null),
     pageCases: page.verification,
   };
-  return createHash('sha256').update(canonicalJson(signed)).digest('hex').slice(0, SEAL_LENGTH);
+  return shortSha256(canonicalJson(signed));
 }
 
 export type SealState =
