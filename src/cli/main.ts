@@ -10,6 +10,7 @@ import { parseArgs, requireKnownOptions, UsageError, type ParsedArgs } from './a
 import { batch } from './commands/batch.ts';
 import { calc } from './commands/calc.ts';
 import { check } from './commands/check.ts';
+import { approve, checkOff } from './commands/signOff.ts';
 import { list } from './commands/list.ts';
 import { newPage } from './commands/new.ts';
 import { sheet } from './commands/sheet.ts';
@@ -27,7 +28,9 @@ export const commands: Record<string, CommandSpec> = {
   list: { run: list, options: ['json', 'content'], inputs: false, help: 'list [--json] [--content dir]      every calculator (with the handbook folder\'s own) with its inputs and outputs (SI units)' },
   calc: { run: calc, options: ['json', 'record', 'content', 'vary'], inputs: true, help: 'calc <id> --in key=value … [--json] [--content dir] evaluate a calculator (SI values, or "25 lb"; --content: also the folder\'s own calculators)\n  dampbook calc <id> … --vary key=±15% --vary key=lo..hi [--json]   tolerance envelope: min and max of every output (up to 8 inputs; lo..hi as --in: plain = SI, "0.9 kN·s/m")\n  dampbook calc --record file.json [--json]   recompute a saved record and report differences' },
   batch: { run: batch, options: ['csv', 'out', 'jobs', 'json', 'content'], inputs: false, help: 'batch <id> --csv cases.csv [--out results.csv] [--jobs N] [--json] [--content dir]   one case per row (header = input keys, cells as --in), outputs appended in SI; all cores by default' },
-  check: { run: check, options: ['content'], inputs: false, help: 'check [--content dir]               validate every page and run every verification case' },
+  check: { run: check, options: ['content', 'allow-changed'], inputs: false, help: 'check [--content dir] [--allow-changed]   validate every page, run every verification case, compare sign-off hashes' },
+  approve: { run: approve, options: ['by', 'date', 'content'], inputs: false, help: 'approve <page-id> --by "<name>" [--date YYYY-MM-DD] [--content dir]   approve a page: status, name, date and the hash of what is approved' },
+  'check-off': { run: checkOff, options: ['by', 'date', 'content'], inputs: false, help: 'check-off <page-id> --by "<name>" [--date YYYY-MM-DD] [--content dir]   mark a page checked, with the hash of what is checked' },
   build: { run: build, options: ['content', 'out', 'base'], inputs: false, help: 'build [--content dir] [--out dir] [--base /path/]   build the handbook of a content folder (default: the demo, into dist)' },
   new: { run: newPage, options: ['title', 'by', 'calc', 'content'], inputs: false, help: 'new <topic/id> [--title …] [--by …] [--calc id] [--content dir]   scaffold a draft page' },
   sheet: { run: sheet, options: ['content', 'pdf', 'paper', 'project', 'project-no', 'calc-no', 'prepared-by', 'checked-by', 'date', 'site', 'base'], inputs: true, help: 'sheet <page> [--in k=v …] [--paper a4|letter] [--project … --project-no … --calc-no … --prepared-by … --checked-by … --date …] [--site dist] --pdf out.pdf' },

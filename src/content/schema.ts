@@ -35,6 +35,9 @@ export function pageSchemaFor(topics: readonly string[]) {
     prepared: z.coerce.date(),
     checked: z.coerce.date().optional(),
     approved: z.coerce.date().optional(),
+    // seals of what was checked / approved (src/content/seal.ts), written by `dampbook check-off` / `approve`
+    checkHash: z.string().regex(/^[0-9a-f]{16}$/, '16 hex digits, written by dampbook check-off').optional(),
+    approvalHash: z.string().regex(/^[0-9a-f]{16}$/, '16 hex digits, written by dampbook approve').optional(),
     project: z.string().optional(),
     calculators: z.array(z.string()).default([]),
     references: z.array(sourceRefSchema).default([]),

@@ -4,6 +4,7 @@
  * recorded output. Differences in page revision or core version become warnings.
  */
 import { LEGACY_LAW_KEYS, migrateLawKeys } from '../calculators/shared/damperLawMigrate.ts';
+import { changeLines } from '../calculators/changes.ts';
 import { evaluate } from '../calculators/evaluate.ts';
 import { isNumeralChoice, migrateYesNoNumbers } from '../calculators/shared/yesNoNumbers.ts';
 import type { CalculatorDefinition, Outputs, Values } from '../calculators/types.ts';
@@ -129,6 +130,10 @@ export function replayRecord(calc: CalculatorDefinition, rec: CalcRecord, ctx: R
   const warnings: string[] = notes.map((n) => `Old input: ${n}`);
   if (rec.page && ctx.page && rec.page.id !== ctx.page.id) warnings.push(`The record was made on page '${rec.page.id}', this is page '${ctx.page.id}'.`);
   else if (rec.page && ctx.page && rec.page.revision !== ctx.page.revision) warnings.push(`The record was made with page revision ${rec.page.revision}; this page is revision ${ctx.page.revision}.`);
-  if (rec.coreVersion !== ctx.coreVersion) warnings.push(`The record was made with core version ${rec.coreVersion}; this handbook runs ${ctx.coreVersion}.`);
+  if (rec.coreVersion !== ctx.coreVersion) {
+    warnings.push(`The record was made with core version ${rec.coreVersion}; this handbook runs ${ctx.coreVersion}.`);
+    // which of the changes since then can move this calculator's results (src/calculators/changes.ts)
+    warnings.push(...changeLines(rec.coreVersion, ctx.coreVersion, [calc.id]));
+  }
   return { ok: true, values: result.values, outputs: result.outputs, shown, diffs, matched, warnings };
 }

@@ -129,10 +129,13 @@ export function addStep(study: Study, page: string, calculator: string, values: 
   return { study: next, id };
 }
 
-/** A new study with one step, its quantities taken from the values the page computes with now. */
-export function startStudy(page: string, calculator: string, values: Values, today: string, calcs: CalculatorLookup): Study {
+/**
+ * A new study with one step, its quantities taken from the values the page computes with now;
+ * `coreVersion` (the page's core) lets a later run list the result changes since (changes.ts).
+ */
+export function startStudy(page: string, calculator: string, values: Values, today: string, calcs: CalculatorLookup, coreVersion?: string): Study {
   const empty: Study = {
-    format: 'dampbook-study', version: 1, title: 'New study',
+    format: 'dampbook-study', version: 1, ...(coreVersion ? { coreVersion } : {}), title: 'New study',
     project: { number: 'TW-000', name: 'Project name', damper: 'Damper description', calculationNo: 'TW-000-C-000', date: today },
     steps: [],
   };

@@ -18,6 +18,7 @@ export interface PageInfo {
   readonly url: string;
   readonly title: string;
   readonly revision: string;
+  /** The status as the page shows it: draft, checked, approved, or "changed since approval/check". */
   readonly status: string;
   /** One line: how many verification checks of the page pass. */
   readonly verification: string;
@@ -41,6 +42,9 @@ const e = (t: string, a: Record<string, string> | undefined, ...k: VNode[]): VNo
 const row = (...cells: VNode[]) => e('tr', undefined, ...cells.map((c) => e('td', undefined, c)));
 const headRow = (...cells: string[]) => e('thead', undefined, e('tr', undefined, ...cells.map((c) => e('th', { scope: 'col' }, c))));
 
+/** The badge class of a catalogue status: a page changed since its sign-off is marked like a draft. */
+export const statusClass = (status: string): string => (status.startsWith('changed since ') ? 'changed' : status);
+
 export function packageView(run: StudyRun, cat: Catalogue, text: PackageText, calcs: CalculatorLookup): VNode {
   const { study } = run;
   const sheets = stepSheets(run, calcs);
@@ -58,7 +62,7 @@ export function packageView(run: StudyRun, cat: Catalogue, text: PackageText, ca
     e('table', { class: 'study-steps' }, headRow('Step', 'Calculation', 'Handbook page', 'Revision', 'Status'),
       e('tbody', undefined, ...sheets.map((s) => {
         const p = page(s.page);
-        return row(`${s.no} (${s.id})`, s.title, p.url ? e('a', { href: p.url }, s.page) : s.page, p.revision, e('span', { class: `status status-${p.status}` }, p.status));
+        return row(`${s.no} (${s.id})`, s.title, p.url ? e('a', { href: p.url }, s.page) : s.page, p.revision, e('span', { class: `status status-${statusClass(p.status)}` }, p.status));
       }))),
     e('h2', undefined, 'Verdicts'),
     e('p', { class: 'study-summary', 'data-verdicts': failed === 0 ? 'pass' : 'fail' }, failed === 0 ? `All ${run.verdicts.length} verdicts pass.` : `${failed} of ${run.verdicts.length} verdicts fail.`),

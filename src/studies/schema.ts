@@ -53,6 +53,8 @@ export const studySchema = z
   .object({
     format: z.literal(STUDY_FORMAT),
     version: z.literal(1),
+    /** The core (package) version the study was made with; `study run` lists the result changes since (src/calculators/changes.ts). */
+    coreVersion: z.string().max(40).regex(/^\d+\.\d+\.\d+[-+.0-9A-Za-z]*$/, 'a version such as 0.4.0').optional(),
     title: text(160),
     project: z
       .object({

@@ -38,6 +38,16 @@ describe('built handbook', () => {
     expect(sdof).toContain('<svg viewBox');
   });
 
+  it('shows every signed-off demo page as signed: the build computes the hash approve wrote (src/content/seal.ts)', () => {
+    // common practice, no source: the build (Astro's frontmatter parse) and the CLI (yaml) must hash alike
+    const pages = files(ROOT_BUILD).filter((f) => f.endsWith('index.html'));
+    const seals = pages.map((f) => /data-status="(\w+)" data-seal="(\w+)"/.exec(readFileSync(f, 'utf8'))).filter((m) => m !== null);
+    expect(seals.filter((m) => m[1] !== 'draft').length).toBeGreaterThanOrEqual(15);
+    expect(seals.filter((m) => m[1] !== 'draft' && m[2] !== 'current').map((m) => m[0])).toEqual([]);
+    expect(sdof).toMatch(/<span class="status status-approved" data-pagefind-meta="status:approved">approved<\/span>/);
+    expect(sdof).not.toContain('changed since');
+  });
+
   it('builds a search index', () => {
     expect(existsSync(join(ROOT_BUILD, 'pagefind/pagefind.js'))).toBe(true);
     expect(existsSync(join(ROOT_BUILD, 'pagefind/pagefind-entry.json'))).toBe(true);

@@ -72,6 +72,9 @@ describe('a study started and extended from pages', () => {
   it('a started study is a valid study file and its step computes with exactly the page values', () => {
     const s = startStudy('impact', 'impact', impactValues, '2026-12-02', getCalculator);
     expect(validateStudy(s).ok).toBe(true);
+    // the page's core version travels with a study started there (src/calculators/changes.ts reads it)
+    const stamped = startStudy('impact', 'impact', impactValues, '2026-12-02', getCalculator, '0.4.0');
+    expect(validateStudy(stamped).ok && stamped.coreVersion).toBe('0.4.0');
     const r = runStudy(s, getCalculator);
     for (const [k, v] of Object.entries(r.steps[0]!.inputs)) expect(sameValue(v, impactValues[k]), k).toBe(true);
   });

@@ -5,6 +5,8 @@
  * invalid input, a dangling binding or a cycle exits 1 with one line naming the step and input.
  */
 import { resolve } from 'node:path';
+import { readFileSync } from 'node:fs';
+import { changeLines } from '../../calculators/changes.ts';
 import { getCalculator } from '../../calculators/registry.ts';
 import { siSymbol } from '../../core/units/index.ts';
 import { printSheet } from '../../sheets/print.ts';
@@ -38,18 +40,32 @@ function shownInputs(calculator: string, inputs: Readonly<Record<string, number 
     [k, typeof v === 'string' && defs.find((d) => d.key === k)?.kind === 'text' ? textLabel(summariseText(k, v)) : v]));
 }
 
+/** The core version this CLI runs: the package version. */
+function coreVersion(): string {
+  return (JSON.parse(readFileSync(new URL('../../../package.json', import.meta.url), 'utf8')) as { version: string }).version;
+}
+
+/** For a study made with another core: the result changes since then that touch its calculators. */
+function versionNotes(study: Study): string[] {
+  if (!study.coreVersion) return [];
+  return changeLines(study.coreVersion, coreVersion(), [...new Set(study.steps.map((s) => s.calculator))]);
+}
+
 function run(args: ParsedArgs, out: (s: string) => void): number {
   const { study } = readStudy(args);
   const r = runStudy(study, getCalculator);
+  const notes = versionNotes(study);
   if (args.flags.has('json')) {
     out(JSON.stringify({
       study: study.title,
+      ...(study.coreVersion ? { coreVersion: study.coreVersion, changes: notes } : {}),
       steps: r.steps.map((s) => ({ id: s.id, calculator: s.calculator, inputs: shownInputs(s.calculator, s.inputs), outputs: Object.fromEntries(Object.entries(s.outputs).filter(([, v]) => v !== undefined)), from: s.from })),
       verdicts: r.verdicts.map((v) => ({ step: v.step, check: v.check, value: v.value, limit: v.limit, pass: v.pass })),
     }));
     return 0;
   }
   out(`${study.title} (${study.project.calculationNo})`);
+  for (const n of notes) out(`note: ${n}`);
   for (const s of r.steps) {
     const calc = getCalculator(s.calculator)!;
     out(`step ${s.id}: ${calc.title} (${s.calculator})`);

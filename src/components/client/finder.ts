@@ -57,10 +57,11 @@ async function run(q: string): Promise<void> {
       a.href = h.url;
       a.textContent = h.meta.title ?? h.url;
       li.append(a);
-      if (h.meta.status === 'draft') {
+      // drafts and pages changed since their sign-off carry their status in the result
+      if (h.meta.status === 'draft' || h.meta.status?.startsWith('changed since ')) {
         const s = document.createElement('span');
-        s.className = 'status status-draft';
-        s.textContent = 'draft';
+        s.className = h.meta.status === 'draft' ? 'status status-draft' : 'status status-changed';
+        s.textContent = h.meta.status;
         li.append(' ', s);
       }
       const p = document.createElement('p');

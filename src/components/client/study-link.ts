@@ -203,7 +203,8 @@ class StudySession {
   private start(calcId: string): void {
     const a = this.attached.find((x) => x.el.calc?.id === calcId);
     if (!a?.el.values) { this.say('Fix the highlighted fields first: a study starts from the values the page computes with.'); return; }
-    this.study = startStudy(this.pageId, calcId, a.el.values, new Date().toISOString().slice(0, 10), this.calcs.lookup);
+    const core = document.querySelector<HTMLElement>('article[data-core-version]')?.dataset.coreVersion;
+    this.study = startStudy(this.pageId, calcId, a.el.values, new Date().toISOString().slice(0, 10), this.calcs.lookup, core);
     this.commit();
   }
 

@@ -7,6 +7,7 @@
 import katex from 'katex';
 import { handbookPages } from '../../content/pageIndex.ts';
 import { pageUrl } from '../../content/pageUrl.ts';
+import { pageStatus } from '../../content/pageStatus.ts';
 import { verifyPage } from '../../content/verify.ts';
 import { KEY_FORMULAS } from '../../studies/formulas.ts';
 import type { Catalogue, PageInfo } from '../../studies/packageView.ts';
@@ -23,7 +24,7 @@ export function packageCatalogue(): Promise<Catalogue> {
   return (cached ??= (async () => {
     const pages: Record<string, PageInfo> = {};
     for (const p of await handbookPages()) {
-      pages[p.data.id] = { url: pageUrl(p.id), title: p.data.title, revision: p.data.revision, status: p.data.status, verification: verificationLine(verifyPage(p.data).rows) };
+      pages[p.data.id] = { url: pageUrl(p.id), title: p.data.title, revision: p.data.revision, status: pageStatus(p.data, p.filePath).label, verification: verificationLine(verifyPage(p.data).rows) };
     }
     const tex = (s: string) => katex.renderToString(s, { displayMode: true, throwOnError: true, output: 'html' });
     const formulas = Object.fromEntries(Object.entries(KEY_FORMULAS).map(([id, fs]) => [id, fs.map(tex)]));
