@@ -58,7 +58,13 @@ export const RESULT_CHANGES: readonly VersionChanges[] = [
       { calculators: ['road-power', 'random-duty'], what: 'Gaussian mean power of the bilinear law with a relative tolerance (below 1e-9 relative)' },
     ],
   },
-  { version: '0.5.0', changes: [] },
+  {
+    version: '0.5.0',
+    changes: [
+      { calculators: ['sdof'], what: 'energy audit by an exact step map and one Gauss–Legendre step integral: closure about 1e-14 (was about 1e-12); chart samples move below 1e-13 relative' },
+      { calculators: ['road-power'], what: 'power-against-speed chart log–log, 60 speeds, power-law points interpolated within 1 % (chart only; outputs unchanged)' },
+    ],
+  },
 ];
 
 /** -1, 0 or 1 as a is older than, the same as or newer than b (x.y.z, numerically; a suffix is ignored). */
