@@ -30,6 +30,10 @@ export class CalculatorElement extends HTMLElement {
   outputs: Outputs | undefined;
   /** Long texts held out of their textarea (heldText.ts), by input key. */
   private held = new Map<string, HeldText>();
+  /** Per text field: the number of the latest file picked, so a slower earlier read cannot land after it. */
+  private fileTurn = new Map<string, number>();
+  /** Per text field: why the last picked file was refused; the field stays in error until it is edited. */
+  private refused = new Map<string, string>();
 
   async connectedCallback(): Promise<void> {
     const id = this.dataset.calc ?? '';
@@ -147,6 +151,7 @@ export class CalculatorElement extends HTMLElement {
     if (t instanceof HTMLInputElement && t.type === 'file') return;
     if (t instanceof HTMLSelectElement && t.name.endsWith('.unit')) return;
     if (t instanceof HTMLInputElement && t.name) this.showUnitNote(t.name);
+    if (t instanceof HTMLTextAreaElement) this.refused.delete(t.name);
     // a long paste leaves the live textarea
     if (t instanceof HTMLTextAreaElement && t.value.length > LARGE_TEXT) this.setText(t.name, t.value, 'pasted text');
     this.schedule();
@@ -167,6 +172,7 @@ export class CalculatorElement extends HTMLElement {
     const area = this.control(key);
     const f = this.field(key);
     if (!(area instanceof HTMLTextAreaElement) || !f) return;
+    this.refused.delete(key); // new text in the field: an earlier refused file no longer speaks for it
     f.querySelector('.text-summary')?.remove();
     if (text.length <= LARGE_TEXT) { this.held.delete(key); area.hidden = false; area.value = text; return; }
     const h = holdText(text, clip(name, 80));
@@ -335,8 +341,17 @@ export class CalculatorElement extends HTMLElement {
     const file = input.files?.[0];
     const area = this.control(key);
     if (!file || !def || def.kind !== 'text' || !area) return;
-    if (file.size > def.maxLength) { this.showFieldMessage(key, `File too large: ${file.size} bytes; at most ${def.maxLength}.`); return; }
-    this.setText(key, await file.text(), file.name);
+    const turn = (this.fileTurn.get(key) ?? 0) + 1;
+    this.fileTurn.set(key, turn);
+    if (file.size > def.maxLength) {
+      // refused, and it stays so: a recompute must not clear the message and show the old text's results as if the file had loaded
+      this.refused.set(key, `File too large: ${file.size} bytes; at most ${def.maxLength}. The text shown was not replaced.`);
+      this.schedule();
+      return;
+    }
+    const text = await file.text();
+    if (this.fileTurn.get(key) !== turn) return; // another file was picked while this one was read
+    this.setText(key, text, file.name);
     this.schedule();
   }
 
@@ -363,6 +378,8 @@ export class CalculatorElement extends HTMLElement {
       const active = isActive(def, values);
       if (f) f.hidden = !active;
       if (!active) { this.showFieldMessage(def.key, ''); continue; }
+      const refusedWhy = this.refused.get(def.key);
+      if (refusedWhy) { bad = true; this.showFieldMessage(def.key, refusedWhy); continue; }
       const ctl = this.control(def.key);
       const r = readField(def, def.kind === 'text' ? this.textOf(def.key) : ctl?.value ?? '', this.unitSelect(def.key)?.value, values);
       if (r.ok) { values[def.key] = r.value; this.showFieldMessage(def.key, ''); }
