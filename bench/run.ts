@@ -11,71 +11,25 @@ import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { cpus, totalmem } from 'node:os';
 import { join, resolve } from 'node:path';
 import { gzipSync } from 'node:zlib';
-import fc from 'fast-check';
 import { evaluate } from '../src/calculators/evaluate.ts';
 import { calculators } from '../src/calculators/registry.ts';
 import type { CalculatorDefinition } from '../src/calculators/types.ts';
-import { DampbookError } from '../src/core/errors.ts';
 import { serveStatic } from '../src/server/staticServer.ts';
 import { launch } from '../test/helpers/browser.ts';
 import { calculatorPages, prosePages } from '../test/helpers/calcPages.ts';
 import { fileFor } from '../test/helpers/crawl.ts';
-import { validRecord } from '../test/calculators/hostile.arbitraries.ts';
 import { batchBench } from './batch.bench.ts';
+import { evaluateLatency, latencyLine, quantile } from './evaluate.bench.ts';
 import { generateCsv } from './lib/csv.ts';
 import { motionRecord } from './lib/motionRecord.ts';
 
 const SAMPLES = Number(process.env.DAMPBOOK_BENCH_SAMPLES ?? 2000);
 const CLOSED_FORM_TARGET_MS = 0.2;
 
-function quantile(sorted: number[], q: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? NaN;
-}
-
-/** Time budget per calculator and pass: slow (simulation-class) calculators get fewer samples. */
-const BUDGET_MS = Number(process.env.DAMPBOOK_BENCH_BUDGET_MS ?? 8000);
-
-/** Times fn over the inputs (after a warm-up pass) until done or out of budget; per-call ms, sorted. */
-function time<T>(inputs: readonly T[], fn: (x: T) => unknown, budgetMs = BUDGET_MS): number[] {
-  const start = performance.now();
-  for (const x of inputs.slice(0, 50)) { fn(x); if (performance.now() - start > budgetMs / 4) break; }
-  const t: number[] = [];
-  const t1 = performance.now();
-  for (const x of inputs) {
-    const t0 = performance.now();
-    fn(x);
-    t.push(performance.now() - t0);
-    if (t.length >= 20 && performance.now() - t1 > budgetMs) break;
-  }
-  return t.sort((a, b) => a - b);
-}
-
-function latency(calc: CalculatorDefinition) {
-  const raw = fc.sample(validRecord(calc), { numRuns: SAMPLES * 2, seed: 42 });
-  process.stderr.write(`latency ${calc.id}…\n`);
-  const t0 = performance.now();
-  const ok: Record<string, unknown>[] = [];
-  let tried = 0;
-  for (const r of raw) {
-    tried++;
-    if (ok.length >= SAMPLES || (ok.length >= 20 && performance.now() - t0 > BUDGET_MS)) break;
-    try { evaluate(calc, r, { fillDefaults: false }); ok.push(r); } catch { /* typed error: no answer for this record */ }
-  }
-  const compute = time(ok, (r) => evaluate(calc, r, { fillDefaults: false }));
-  // chart data may be refused with a typed error for extreme inputs (the page then keeps the results table)
-  const withCharts = calc.charts ? time(ok, (r) => { const res = evaluate(calc, r, { fillDefaults: false }); try { return calc.charts!(res.values, res); } catch (e) { if (e instanceof DampbookError) return undefined; throw e; } }) : undefined;
-  const median = quantile(compute, 0.5);
-  return {
-    id: calc.id,
-    samples: ok.length,
-    rejected: tried > ok.length ? `${tried - ok.length} of ${tried} random records had no answer (typed error)` : undefined,
-    medianMs: Number(median.toPrecision(3)),
-    p99Ms: Number(quantile(compute, 0.99).toPrecision(3)),
-    withChartsMedianMs: withCharts ? Number(quantile(withCharts, 0.5).toPrecision(3)) : undefined,
-    withChartsP99Ms: withCharts ? Number(quantile(withCharts, 0.99).toPrecision(3)) : undefined,
-    class: median <= CLOSED_FORM_TARGET_MS ? 'fast (≤ 0.2 ms median)' : 'simulation-class (> 0.2 ms median)',
-    evaluationsPerSecond: Math.round(1000 / median),
-  };
+/** Times fn over the inputs (after a warm-up pass); per-call ms, sorted. */
+function time<T>(inputs: readonly T[], fn: (x: T) => unknown): number[] {
+  for (const x of inputs.slice(0, 5)) fn(x);
+  return inputs.map((x) => { const t0 = performance.now(); fn(x); return performance.now() - t0; }).sort((a, b) => a - b);
 }
 
 /** CSV throughput for calculators with a text input: a generated 10,000-row record, when one can be made. */
@@ -187,7 +141,7 @@ async function bytesPerPage() {
   }
 }
 
-const lat = calculators.map(latency);
+const lat = calculators.map(evaluateLatency);
 const csv = calculators.flatMap(csvThroughput);
 const batch = await batchBench();
 const bytes = await bytesPerPage();
@@ -204,7 +158,7 @@ const result = {
 mkdirSync('bench/results', { recursive: true });
 writeFileSync('bench/results/latest.json', `${JSON.stringify(result, null, 2)}\n`);
 console.log(`machine: ${result.machine}`);
-for (const l of lat) console.log(`${l.id.padEnd(20)} median ${l.medianMs} ms  p99 ${l.p99Ms} ms${l.withChartsMedianMs !== undefined ? `  (with charts ${l.withChartsMedianMs} / ${l.withChartsP99Ms} ms)` : ''}  ${l.class}`);
+for (const l of lat) console.log(latencyLine(l));
 console.log('csv:', JSON.stringify(result.csvThroughput));
 console.log('batch:', JSON.stringify(batch));
 const { csvInBrowser: inBrowser, ...pageBytes } = bytes;
