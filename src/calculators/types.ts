@@ -205,6 +205,13 @@ export interface CalculatorDefinition {
   readonly handoffs?: readonly HandoffDef[];
   /** Study vocabulary: inputs that take a study quantity, outputs that publish one (see StudyBindings). */
   readonly study?: StudyBindings;
+  /**
+   * Set when `evaluate` plus `charts` can take longer than one frame (16 ms) for some valid inputs
+   * (`npm run bench` lists each calculator's p99 and flags any over a frame without this): the page
+   * then computes it in a module worker (src/components/client/off-thread.ts) so typing never waits
+   * for it. Same definition and core either way; the CLI and tests are unaffected.
+   */
+  readonly offMainThread?: true;
 }
 
 /**

@@ -152,6 +152,9 @@ export async function printSheet(o: PrintOptions): Promise<{ url: string }> {
         }
       }, o.texts.map((t) => ({ key: t.key, text: t.text })));
     }
+    // a recompute may still be on its way: the next frame's, or a worker's answer (offMainThread)
+    await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+    await page.waitForFunction(() => !document.querySelector('db-calculator[data-computing]'), undefined, { timeout: 20_000 });
     if (o.expect) await expectValues(page, o.expect);
     const bad = await page.locator('.field[data-invalid]').evaluateAll((els) => els.map((e) => `${(e as HTMLElement).dataset.key}: ${e.querySelector('.msg')?.textContent ?? ''}`));
     if (bad.length) throw new SheetError(`invalid input ${bad.join('; ')}`);

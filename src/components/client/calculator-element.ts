@@ -8,7 +8,7 @@
 import { evaluate, inputOrder, isActive } from '../../calculators/evaluate.ts';
 import { feedQuery, urlValue } from '../../calculators/feeds.ts';
 import { withOperatingPoint } from '../../calculators/chartMarks.ts';
-import type { CalculatorDefinition, Outputs, Result, Values } from '../../calculators/types.ts';
+import type { CalculatorDefinition, ChartSpec, Outputs, Result, Values } from '../../calculators/types.ts';
 import { DampbookError, InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, parseQuantity, toSI, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from '../render/format.ts';
@@ -16,7 +16,12 @@ import { clip, parseTyped, readField, splitTyped, textSum } from '../render/fiel
 import { describeHeld, holdText, LARGE_TEXT, type HeldText } from '../render/heldText.ts';
 
 import { loadCalculator } from '../../calculators/loaders.ts';
+import { offThread } from './off-thread.ts';
 import { openingStudy } from './study-fetch.ts';
+
+/** After this long without an answer from the worker the state line says "Computing…". */
+const BUSY_MS = 100;
+let elements = 0;
 
 export class CalculatorElement extends HTMLElement {
   calc: CalculatorDefinition | undefined;
@@ -34,6 +39,12 @@ export class CalculatorElement extends HTMLElement {
   private fileTurn = new Map<string, number>();
   /** Per text field: why the last picked file was refused; the field stays in error until it is edited. */
   private refused = new Map<string, string>();
+  /** Number of the latest recompute: a worker answer for an older one is dropped. */
+  private ticket = 0;
+  /** The latest off-thread computation (resolved at once for one computed here). */
+  private current: Promise<void> = Promise.resolve();
+  /** This element's name to the off-thread computer (its newer request supersedes its older). */
+  private readonly owner = `calc-${++elements}`;
 
   async connectedCallback(): Promise<void> {
     const id = this.dataset.calc ?? '';
@@ -60,6 +71,8 @@ export class CalculatorElement extends HTMLElement {
       this.recompute();
       if (study) void study.then((s) => { s.attach(this); this.dataset.study = ''; });
     }
+    // ready once the first result shows (a worker's answer arrives a moment later)
+    await this.current;
     this.dataset.ready = '';
     // tolerances, result ranges and the sweep chart (generic, from the definition): src/calculators/envelope/
     void import('./calc-tools.ts').then((m) => m.attachTools(this));
@@ -388,45 +401,93 @@ export class CalculatorElement extends HTMLElement {
     return bad ? null : values;
   }
 
-  recompute(): void {
+  /**
+   * Reads every field and shows the result (synchronous here, or from the worker for a calculator
+   * marked `offMainThread`); resolves once what it started is shown or superseded.
+   */
+  recompute(): Promise<void> {
     const calc = this.calc!;
+    const ticket = ++this.ticket;
+    this.removeAttribute('data-computing');
     const state = this.querySelector<HTMLElement>('.calc-state');
     const values = this.readValues();
     this.values = undefined;
     this.outputs = undefined;
-    if (!values) { this.setState(state, 'error', 'Not current: the results and charts below belong to earlier inputs. Fix the highlighted field to update them.'); return; }
-    let result;
     const offered = this.offered;
     this.offered = undefined;
+    this.current = Promise.resolve();
+    if (!values) { this.setState(state, 'error', 'Not current: the results and charts below belong to earlier inputs. Fix the highlighted field to update them.'); return Promise.resolve(); }
+    const draw = calc.charts !== undefined && this.querySelector('.chart') !== null;
+    if (calc.offMainThread) return (this.current = this.computeOff(ticket, values, draw));
+    // the study runner computed this step a moment ago with the same values: no second computation
+    this.computeHere(values, draw, offered && sameValues(calc, offered.values, values) ? offered : undefined);
+    return Promise.resolve();
+  }
+
+  private computeHere(values: Values, draw: boolean, offered?: Result & { values: Values }): void {
+    const calc = this.calc!;
+    let result;
     try {
-      // the study runner computed this step a moment ago with the same values: no second computation
-      result = offered && sameValues(calc, offered.values, values) ? offered : evaluate(calc, values);
+      result = offered ?? evaluate(calc, values);
     } catch (e) {
-      const msg = e instanceof DampbookError ? e.message : 'These inputs could not be computed.';
-      // a problem found while computing (e.g. a bad row in a pasted record) is shown at its field too
-      if (e instanceof InputRangeError && this.field(e.input)) this.showFieldMessage(e.input, e.message);
-      this.setState(state, 'error', `Not current: ${msg}`);
+      this.showError(e instanceof DampbookError ? e.message : '', e instanceof DampbookError, e instanceof InputRangeError ? e.input : undefined);
       return;
     }
+    let charts: ChartSpec[] | undefined;
+    let chartError: string | undefined;
+    if (draw && calc.charts) {
+      try { charts = withOperatingPoint(calc, calc.charts(result.values, result), result.values); } catch (e) {
+        if (!(e instanceof DampbookError)) throw e;
+        chartError = e.message;
+      }
+    }
+    this.show(values, result, charts, chartError);
+  }
+
+  /** The worker computes; "Computing…" shows after BUSY_MS; an answer for an older ticket is dropped. */
+  private async computeOff(ticket: number, values: Values, draw: boolean): Promise<void> {
+    const state = this.querySelector<HTMLElement>('.calc-state');
+    this.toggleAttribute('data-computing', true);
+    const slow = setTimeout(() => { if (ticket === this.ticket) this.setState(state, 'busy', 'Computing…'); }, BUSY_MS);
+    const out = await (await offThread()).run(this.owner, this.calc!.id, values, draw);
+    clearTimeout(slow);
+    if (ticket !== this.ticket || out === 'superseded') return;
+    this.removeAttribute('data-computing');
+    if (out === 'unavailable') this.computeHere(values, draw);
+    else if (!out.ok) this.showError(out.message, out.known, out.input);
+    else this.show(values, out.result, out.charts, out.chartError);
+  }
+
+  /** A computation refused these inputs: the reason at its field (when it names one) and in the state line. */
+  private showError(message: string, known: boolean, input: string | undefined): void {
+    // a problem found while computing (e.g. a bad row in a pasted record) is shown at its field too
+    if (known && input && this.field(input)) this.showFieldMessage(input, message);
+    this.setState(this.querySelector<HTMLElement>('.calc-state'), 'error', `Not current: ${known ? message : 'These inputs could not be computed.'}`);
+  }
+
+  private show(values: Values, result: Result & { values: Values }, charts: ChartSpec[] | undefined, chartError: string | undefined): void {
+    const calc = this.calc!;
     this.renderOutputs(result.outputs);
     this.renderFeeds(result);
     this.values = result.values;
     this.outputs = result.outputs;
     const warn = this.querySelector('.calc-warnings');
     if (warn) warn.replaceChildren(...result.warnings.map((w) => { const li = document.createElement('li'); li.textContent = w; return li; }));
-    this.setState(state, 'ok', '');
+    this.setState(this.querySelector<HTMLElement>('.calc-state'), 'ok', chartError ? `Charts not redrawn for these inputs: ${chartError}` : '');
+    // the results are current; charts that could not be drawn for them say so
+    this.querySelector('.calc-charts')?.toggleAttribute('data-not-current', chartError !== undefined);
     this.writeUrl(values);
-    if (calc.charts && this.querySelector('.chart')) void this.drawCharts(withOperatingPoint(calc, calc.charts(result.values, result), result.values));
+    if (charts) void this.drawCharts(charts);
     this.dispatchEvent(new CustomEvent('db-computed', { bubbles: true, detail: { id: calc.id, values, outputs: result.outputs } }));
   }
 
-  private setState(el: HTMLElement | null, kind: 'ok' | 'error', text: string): void {
+  private setState(el: HTMLElement | null, kind: 'ok' | 'error' | 'busy', text: string): void {
     if (!el) return;
     el.dataset.kind = kind;
     el.textContent = text;
-    const stale = kind === 'error';
-    this.toggleAttribute('data-stale', stale);
-    this.querySelector('.calc-results')?.setAttribute('aria-busy', 'false');
+    const stale = kind !== 'ok';
+    this.toggleAttribute('data-stale', kind === 'error');
+    this.querySelector('.calc-results')?.setAttribute('aria-busy', kind === 'busy' ? 'true' : 'false');
     for (const part of this.querySelectorAll('.calc-results table, .calc-warnings, .calc-charts')) part.toggleAttribute('data-not-current', stale);
     // a hand-off must never carry a value the page no longer shows as current
     if (stale) for (const a of this.querySelectorAll<HTMLAnchorElement>('a[data-feed-out]')) this.disableFeed(a);

@@ -62,6 +62,19 @@ describe('energyPerCycle invariants', () => {
       return Math.abs(a - b) <= 1e-8 * Math.abs(a);
     }), { seed: 1, numRuns: 100 });
   });
+  it('answers at once for a vanishing amplitude (5e-324 m used to make the quadrature split every panel 40 times)', () => {
+    // a bilinear law at X = 5e-324 m: the integrand was subnormal noise that no tolerance could meet;
+    // in units of the peak force it is O(1). Exact: π·c₁·ω·X² (below the knee), which underflows to 0
+    const law = { kind: 'bilinear' as const, rebound: { c1: 2e6, c2: 0 }, compression: { c1: 2e6, c2: 0 }, vknee: 1 };
+    const t0 = performance.now();
+    const e = energyPerCycleQuadrature(law, 5e-324, 5.4e306);
+    expect(performance.now() - t0).toBeLessThan(5000); // a guard against the hang, not a speed test
+    expect(e).toBeGreaterThanOrEqual(0);
+    expect(e).toBeLessThan(1e-300);
+    // and a small but normal amplitude keeps the linear closed form below the knee (π c₁ ω X²,
+    // Chopra, Dynamics of Structures 5th ed., eq. 3.8.1)
+    expect(energyPerCycleQuadrature(law, 1e-150, 1) / (Math.PI * 2e6 * 1e-300)).toBeCloseTo(1, 9);
+  });
   it('dissipated energy per cycle is never negative and rises with amplitude for every passive law', () => {
     fc.assert(fc.property(lawArb, fc.double({ min: 1e-4, max: 0.1, noNaN: true }), fc.double({ min: 1, max: 100, noNaN: true }), (law, X, w) => {
       const e1 = energyPerCycle(law, X, w);
