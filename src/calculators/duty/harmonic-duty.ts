@@ -20,6 +20,7 @@ function duty(law: DamperLaw, ks: number | undefined, X: number, omega: number) 
 /** Harmonic stroke → energy per cycle, mean power, RMS velocity and peak force for any damper law. */
 export const harmonicDutyCalculator = defineCalculator({
   id: 'harmonic-duty',
+  offMainThread: true, // p99 of evaluate + charts over a frame (npm run bench)
   title: 'Damper power under harmonic stroke',
   summary: 'Mean power, energy per cycle, RMS velocity and peak force of a damper driven through a sinusoidal stroke, for linear, power-law, friction, bilinear and hysteretic damper laws.',
   inputs: [

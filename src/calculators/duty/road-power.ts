@@ -33,6 +33,7 @@ const logGrid = (a: number, b: number, n: number) => Array.from({ length: n }, (
 /** Random-road duty of one quarter-car corner: RMS damper velocity, mean damper power, ride and road holding. */
 export const roadPowerCalculator = defineCalculator({
   id: 'road-power',
+  offMainThread: true, // p99 of evaluate + charts over a frame (npm run bench)
   title: 'Damper power on a random road (ISO 8608 quarter car)',
   summary: 'Mean power a suspension damper turns into heat on an ISO 8608 road, with ride (body acceleration, ISO 2631-1 weighted comfort value), suspension travel, dynamic tyre load, the comfort and road-holding optima of the damping and a motion ratio between wheel and damper, by frequency-domain integration checked against closed forms.',
   inputs: [

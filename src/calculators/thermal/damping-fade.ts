@@ -29,6 +29,7 @@ function setup(values: Values) {
 /** Damping fade and the coupled thermal equilibrium of a damper. */
 export const dampingFadeCalculator = defineCalculator({
   id: 'damping-fade',
+  offMainThread: true, // p99 of evaluate + charts over a frame (npm run bench)
   title: 'Damping fade and thermal equilibrium',
   summary: 'How the damping coefficient falls as the oil heats, and the body temperature and coefficient at which the heat the damper makes equals the heat it sheds — or the time until it passes its limit.',
   inputs: [

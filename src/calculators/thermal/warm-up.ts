@@ -65,6 +65,7 @@ function twoNodeEnd(values: Values, m: Setup, tau: number): number {
 /** Lumped warm-up and cool-down of a damper at constant or on/off power. */
 export const warmUpCalculator = defineCalculator({
   id: 'warm-up',
+  offMainThread: true, // p99 of evaluate + charts over a frame (npm run bench)
   title: 'Warm-up and cool-down of a damper',
   summary: 'Temperature of a damper against time from its heat capacity and heat loss: time to the limit (or the temperature it settles at), on/off duty, cool-down time, Biot-number check.',
   inputs: [

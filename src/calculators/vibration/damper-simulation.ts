@@ -32,6 +32,7 @@ export function runSimulation(values: Values): SimulationResult {
 /** Time simulation of a mass on a spring with any damper law, with an energy audit. */
 export const damperSimulationCalculator = defineCalculator({
   id: 'damper-simulation',
+  offMainThread: true, // p99 of evaluate + charts over a frame (npm run bench)
   title: 'Nonlinear damper: time simulation with energy audit',
   summary: 'Response of a mass on a spring with a linear, power-law, Coulomb, bilinear or hysteretic damper to initial conditions, a harmonic force or harmonic base motion; adaptive Dormand–Prince 5(4) integration with an energy audit.',
   inputs: [

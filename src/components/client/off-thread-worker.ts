@@ -3,7 +3,7 @@
  * data for one set of SI values and answers with plain data.
  *
  * Why a chunk of the page's own bundle and not a separately built worker: the page starts a module
- * worker from a two-line blob that imports this chunk by its URL (`selfUrl`), so the worker runs the
+ * worker (public/compute-worker.js) and tells it to import this chunk by its URL (`selfUrl`), so it runs the
  * very same calculator and core chunks the page already loaded (from the HTTP cache), and the build
  * has no second bundle of every calculator to make. Nothing here touches the DOM.
  */

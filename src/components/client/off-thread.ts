@@ -6,8 +6,9 @@
  * Only the newest request of each calculator element matters: while a job runs, later requests
  * wait in a one-place queue, each replacing the one before (which resolves `superseded`); a job
  * still running after RESTART_MS when the same element's newer one arrives is abandoned by terminating the worker
- * (a 5-second worst case must not delay the next keystroke's answer). When a module worker cannot
- * start (an old browser, a blocked blob URL) every job resolves `unavailable` and the page computes
+ * (a 5-second worst case must not delay the next keystroke's answer). The worker's entry is the
+ * plain file public/compute-worker.js (the pages' CSP allows scripts from 'self' only, no blob:),
+ * told by its first message which chunk to import. When a module worker cannot start (an old browser) every job resolves `unavailable` and the page computes
  * on the main thread, as before.
  */
 import type { Job, Reply } from './off-thread-worker.ts';
@@ -44,15 +45,15 @@ class OffThread {
   private start(): Worker | undefined {
     if (this.worker) return this.worker;
     try {
-      const src = `import { serve } from ${JSON.stringify(this.url)};\nserve(self);\n`;
-      const blob = URL.createObjectURL(new Blob([src], { type: 'text/javascript' }));
-      const w = new Worker(blob, { type: 'module' });
+      // the chunks live in <site>/_db/ (src/build/client-scripts.ts), public/ files at <site>/
+      const w = new Worker(new URL('../compute-worker.js', this.url), { type: 'module' });
+      w.postMessage({ load: this.url }); // public/compute-worker.js imports the chunk, then serves
       w.addEventListener('message', (e: MessageEvent<Reply>) => this.done(e.data));
-      w.addEventListener('error', (e) => { e.preventDefault(); this.fail(); });
+      w.addEventListener('error', (e) => { e.preventDefault(); this.fail(e.message); });
       this.worker = w;
       return w;
-    } catch {
-      this.fail();
+    } catch (e) {
+      this.fail(e instanceof Error ? e.message : String(e));
       return undefined;
     }
   }
@@ -86,7 +87,9 @@ class OffThread {
   }
 
   /** The worker could not start or died: every job now runs on the main thread. */
-  private fail(): void {
+  private fail(why: string): void {
+    // said once in the console: the page still computes, only on its own thread
+    if (!this.broken) console.warn(`Dampbook: computing on the page's own thread (the compute worker did not start: ${why})`);
     this.broken = true;
     this.worker?.terminate();
     this.worker = undefined;
