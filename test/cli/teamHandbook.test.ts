@@ -104,6 +104,20 @@ describe('a handbook folder outside the project', () => {
     expect(wrong.err).toMatch(/'thermal' is not a topic folder/);
   });
 
+  it('seals an approval, fails check once the method is edited (naming the file) and leaves the page "changed since approval" for the build below', async () => {
+    const page = join(content, 'machines', 'spindle-decay.mdx');
+    const a = await run('approve', 'spindle-decay', '--by', 'Ilse Marrow', '--date', '2026-12-02', '--content', content);
+    expect(a.code, a.err).toBe(0);
+    expect(readFileSync(page, 'utf8')).toMatch(/status: approved[\s\S]*approvalHash: "?[0-9a-f]{16}/);
+    expect((await run('check', '--content', content)).code).toBe(0);
+    // an edit of the method, the approval fields untouched
+    writeFileSync(page, readFileSync(page, 'utf8').replace('read two successive peaks', 'read two peaks five cycles apart'));
+    const changed = await run('check', '--content', content);
+    expect(changed.code).toBe(1);
+    expect(changed.err + changed.out).toMatch(/spindle-decay\.mdx.*changed since approval/);
+    expect((await run('check', '--content', content, '--allow-changed')).code).toBe(0);
+  });
+
   it('builds the page with the live calculator and the folder\'s own name, then prints its sheet', () => {
     const b = cli('build', '--content', content, '--out', out);
     expect(b.status, `${b.stdout}\n${b.stderr}`).toBe(0);
@@ -113,6 +127,8 @@ describe('a handbook folder outside the project', () => {
     expect(page).toContain('--accent-ink:#1f4d36');
     // the server-rendered default result: x₁ = 20 µm, x₂ = 12 µm → δ = ln(5/3) = 0.5108 (closed form)
     expect(page).toMatch(/0\.5108/);
+    // the page edited after its approval (the test above) says so instead of "approved"
+    expect(page).toMatch(/changed since approval/i);
     const home = readFileSync(join(out, 'index.html'), 'utf8');
     expect(home).toMatch(/<h2>Machines<\/h2>/);
     const pdf = join(tmp, 'sheet.pdf');
@@ -122,6 +138,7 @@ describe('a handbook folder outside the project', () => {
     const text = execFileSync('pdftotext', ['-layout', pdf, '-'], { encoding: 'utf8' });
     expect(text).toContain('Spindle damping from a peak pair');
     expect(text).toContain('Tarnwick Works — Machine shop');
+    expect(text).toMatch(/changed since approval/i);
     // without --content: the page's own defaults print; inputs need the folder's calculators
     const plain = cli('sheet', 'spindle-decay', '--site', out, '--pdf', join(tmp, 'plain.pdf'));
     expect(plain.status, plain.stderr).toBe(0);
