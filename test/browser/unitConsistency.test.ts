@@ -99,7 +99,11 @@ const NEEDS_DATA: Readonly<Record<string, string>> = {
 
 const site = serveBuiltSite();
 
-const frames = (page: Page) => page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(r, 0)))));
+/** Two frames (a scheduled recompute runs), then until no calculator waits for its worker's answer. */
+const frames = async (page: Page) => {
+  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(r, 0)))));
+  await page.waitForFunction(() => !document.querySelector('db-calculator[data-computing]'), undefined, { timeout: 30_000 });
+};
 
 async function open(page: Page, url: string): Promise<void> {
   await page.goto(url);

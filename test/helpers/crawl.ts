@@ -82,11 +82,12 @@ export async function openWatched(ctx: BrowserContext, origin: string, url: stri
   return { page, visit };
 }
 
-/** Waits until every calculator is live and every chart figure has its live chart. */
+/** Waits until every calculator is live, has no computation on its way (`data-computing`, a worker's answer) and every chart figure has its live chart. */
 export async function settle(page: Page): Promise<void> {
+  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
   await page.waitForFunction(() => {
     const calcs = [...document.querySelectorAll('db-calculator')];
-    if (calcs.some((c) => !c.hasAttribute('data-ready'))) return false;
+    if (calcs.some((c) => !c.hasAttribute('data-ready') || c.hasAttribute('data-computing'))) return false;
     const figs = [...document.querySelectorAll('db-calculator figure.chart .chart-canvas')];
     return figs.every((f) => f.hasAttribute('data-live') || f.querySelector('svg') === null);
   }, undefined, { timeout: 20_000 });

@@ -12,6 +12,8 @@ function oscillator(values: Values) {
 
 /** Samples of the energy audit, shared by the results and the chart (one closure value on the page). */
 const AUDIT_SAMPLES = 401;
+/** The smallest closure the page states: 401 steps of a recurrence round at about 1e-14 each. */
+const CLOSURE_FLOOR = 1e-13;
 /** Free vibration of a mass–spring–viscous-damper system: frequencies, damping, regime, energy. */
 export const sdofCalculator = defineCalculator({
   id: 'sdof',
@@ -34,7 +36,7 @@ export const sdofCalculator = defineCalculator({
     { key: 'Q', label: 'Quality factor Q', kind: 'dimensionless', optional: true, help: 'Underdamped only: 1/(2ζ), the sharpness of the resonance.' },
     { key: 'regime', label: 'Regime', kind: 'text' },
     { key: 'E0', label: 'Initial energy', kind: 'energy' },
-    { key: 'closure', label: 'Energy audit closure', kind: 'dimensionless', digits: 2, help: 'max |E_k + E_s + E_D − E_0| / E_0 over the plotted window.' },
+    { key: 'closure', label: 'Energy audit closure', kind: 'dimensionless', digits: 2, help: 'max |E_k + E_s + E_D − E_0| / E_0 over the plotted window. Read 1e-13 when smaller: below that it is rounding of double precision, and the last bits of an input (a mass typed in lb) move it.' },
   ],
   compute(values) {
     const p = oscillator(values);
@@ -56,7 +58,8 @@ export const sdofCalculator = defineCalculator({
         Q: regime === 'underdamped' ? qualityFactor(zeta) : undefined,
         regime,
         E0: audit.initial,
-        closure: audit.closure,
+        // below 1e-13 the figure is double-precision rounding that moves with the last bits of an input
+        closure: Math.max(audit.closure, CLOSURE_FLOOR),
       },
       warnings: capped ? ['ζ below about 2.4 %: the plotted window is capped at 30 cycles, before the motion has decayed to 1 %.'] : [],
     };

@@ -69,11 +69,12 @@ export class CalculatorElement extends HTMLElement {
     if (study && opened) {
       // a study is open: compute once, with the step's inputs, not first with the page's own
       const s = await study;
-      if (!s.attach(this)) this.recompute();
+      if (!s.attach(this)) void this.recompute();
+      await this.current; // `data-study`: the step's values are in and their result shows
       this.dataset.study = '';
     } else {
-      this.recompute();
-      if (study) void study.then((s) => { s.attach(this); this.dataset.study = ''; });
+      void this.recompute();
+      if (study) void study.then(async (s) => { s.attach(this); await this.current; this.dataset.study = ''; });
     }
     // ready once the first result shows (a worker's answer arrives a moment later)
     await this.current;
