@@ -13,7 +13,7 @@ for (const r of raw) {
   const t = performance.now() - t0;
   ok++; times.push(t);
   const band = String(res.outputs.band);
-  if (!band.startsWith('none')) { fell++; if (slow.length < 8) slow.push({ band, t: t.toFixed(1), r: Object.fromEntries(['w', 'ms', 'mu', 'ks', 'kt', 'law', 'c', 'Fref', 'alpha', 'MR'].map((k) => [k, r[k]])) }); }
+  if (!band.startsWith('none')) { fell++; if (slow.length < 8) slow.push({ band, t: t.toFixed(1), ceq: res.outputs.ceq, Gd0: res.outputs.Gd0Used, r: Object.fromEntries(['w', 'V', 'ms', 'mu', 'ks', 'kt', 'law', 'c', 'Fref', 'vref', 'alpha', 'MR'].map((k) => [k, r[k]])) }); }
 }
 times.sort((a, b) => a - b);
 console.log(`answered ${ok}; fell back ${fell} (${((100 * fell) / ok).toFixed(2)} %); p99 ${times[Math.floor(0.99 * times.length)]!.toFixed(2)} ms`);

@@ -63,6 +63,7 @@ export const RESULT_CHANGES: readonly VersionChanges[] = [
     changes: [
       { calculators: ['sdof'], what: 'energy audit by an exact step map and one Gauss–Legendre step integral: closure about 1e-14 (was about 1e-12); chart samples move below 1e-13 relative' },
       { calculators: ['road-power'], what: 'power-against-speed chart log–log, 60 speeds, power-law points interpolated within 1 % (chart only; outputs unchanged)' },
+      { calculators: ['road-power'], what: 'variances in closed form by residues (Mellin transform of the rational gains), quadrature only as the fallback: values move in about the 1e-8 relative place, quadError states the closed form\'s bound (about 1e-13), band names the method; chart points move up to the 1e-4 of its table' },
     ],
   },
 ];

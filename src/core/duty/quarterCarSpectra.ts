@@ -58,8 +58,9 @@ const biquad = (w: number, Q: number) => stableQuadratic(1, w / Q, w * w);
  *   |H_a|^2 = \frac{k_t^2 u^2 (k_s^2 + c^2 u)}{|\Delta|^2},\
  *   |H_F|^2 = \frac{k_t^2 u^2\,|m_s m_u s^2 + M c s + M k_s|^2}{|\Delta|^2}$$
  * and the weighting's biquads in the same form (each $|s^2 + (\omega_0/Q)s + \omega_0^2|^2 = (u + p_+^2)(u + p_-^2)$).
- * The roots of Δ come from polynomialRoots, refined by Newton steps in double-double arithmetic
- * (refineRoot) so the real part of a lightly damped mode is right to rounding; the weighting's are closed forms.
+ * The roots of Δ come from polynomialRoots; where the real part is not already known to 1e-12 (a lightly
+ * damped mode) they are refined by Newton steps in double-double arithmetic (refineRoot), so that part is
+ * right to rounding too; the weighting's are closed forms.
  *
  * @param q quarter car (validated); w the weighting (WEIGHTING_WK)
  * @throws ComputationError when the quartic's roots cannot be found
@@ -74,6 +75,9 @@ export function quarterCarSpectra(q: QuarterCar, w: WeightingFilter): QuarterCar
   const Mdd = ddAdd([q.ms, 0], [q.mu, 0]);
   const dd = [ddProduct(q.ks, q.kt), ddProduct(q.c, q.kt), ddAdd(ddMul(Mdd, [q.ks, 0]), ddProduct(q.ms, q.kt)), ddMul([q.c, 0], Mdd), ddProduct(q.ms, q.mu)];
   const poles = conjugatePairs(polynomialRoots(dd.map((x) => x[0] + x[1])).map((r) => {
+    // a root whose real part double precision already gives to 1e-12 relative is kept as it is (the
+    // refinement costs most of the work); only lightly damped or clustered ones are refined
+    if (r.error <= 1e-12 * Math.abs(r.z.re)) return { p: { re: -r.z.re, im: -r.z.im }, error: { re: r.error, im: r.error } };
     const f = refineRoot(dd, r.z);
     return { p: { re: -f.z.re, im: -f.z.im }, error: f.error };
   }));

@@ -55,11 +55,11 @@ const cmul = (ar: DD, ai: DD, br: DD, bi: DD): [DD, DD] => [ddAdd(ddMul(ar, br),
  * the estimated error of each part: the last correction plus the rounding of the double result.
  *
  * @param c coefficients, ascending, as double-doubles (ddProduct, ddAdd); z a root to about double precision
- * @param steps Newton steps, default 3 (from double accuracy: quadratic convergence)
+ * @param steps Newton steps, default 2 (from double accuracy one step reaches double-double, the second measures the error)
  * @example refineRoot([[-2, 0], [0, 0], [1, 0]], { re: 1.4142, im: 0 }).z.re // 1.41421356237310
  * @source dekker1971 (double-length arithmetic; from memory); press2007 §9.5 (root polishing; section from memory)
  */
-export function refineRoot(c: readonly DD[], z: { re: number; im: number }, steps = 3): { z: { re: number; im: number }; error: { re: number; im: number } } {
+export function refineRoot(c: readonly DD[], z: { re: number; im: number }, steps = 2): { z: { re: number; im: number }; error: { re: number; im: number } } {
   let zr: DD = [z.re, 0]; let zi: DD = [z.im, 0];
   let last = { re: Infinity, im: Infinity };
   for (let s = 0; s < steps; s++) {

@@ -65,6 +65,7 @@ export function polynomialRoots(c: readonly number[]): PolynomialRoot[] {
   if (n < 1 || n > 16 || !c.every(Number.isFinite) || c[n] === 0 || c[0] === 0) throw new ComputationError('polynomial roots: need finite coefficients, degree 1–16, non-zero first and last');
   const z = starts(c);
   const done = new Array<boolean>(n).fill(false);
+  const last = new Array<number>(n).fill(Infinity);
   for (let it = 0; it < 200 && done.includes(false); it++) {
     for (let k = 0; k < n; k++) {
       if (done[k]) continue;
@@ -84,7 +85,10 @@ export function polynomialRoots(c: readonly number[]): PolynomialRoot[] {
       const br = 1 - (wr * sr - wi * si); const bi = -(wr * si + wi * sr); const bm = br * br + bi * bi;
       const xr = bm > 0 ? (wr * br + wi * bi) / bm : wr; const xi = bm > 0 ? (wi * br - wr * bi) / bm : wi;
       z[k] = [zr - xr, zi - xi];
-      if (Math.hypot(xr, xi) <= 2 * Number.EPSILON * Math.hypot(zr, zi)) done[k] = true;
+      // settled: at rounding level, or no longer shrinking once small (rounding noise in p(z) near a cluster)
+      const step = Math.hypot(xr, xi); const size = Math.hypot(zr, zi);
+      if (step <= 4 * Number.EPSILON * size || (step <= 1e-8 * size && step >= 0.5 * last[k]!)) done[k] = true;
+      last[k] = step;
     }
   }
   if (!z.every(([a, b]) => Number.isFinite(a) && Number.isFinite(b))) throw new ComputationError('polynomial roots: the iteration did not settle');
