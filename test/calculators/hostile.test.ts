@@ -24,7 +24,7 @@ const SEED = 1;
 const RUNS = 150;
 const FEWER_RUNS: Readonly<Record<string, { readonly runs: number; readonly why: string }>> = {
   'damper-simulation': { runs: 25, why: 'each case is a full time integration of the oscillator, results and charts' },
-  'road-power': { runs: 10, why: 'each case (result and charts) integrates the quarter-car spectra over the road band, about 1 s' },
+  'road-power': { runs: 10, why: 'kept at 10: a case whose residues cancel (power law with an extreme vref) falls back to the quadrature, about 0.3 s with its chart' },
   'warm-up': { runs: 20, why: 'each case integrates the body temperature over the whole duty, often with a periodic profile' },
 };
 const runsFor = (id: string) => FEWER_RUNS[id]?.runs ?? RUNS;

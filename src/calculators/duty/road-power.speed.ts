@@ -11,7 +11,8 @@
  *   linearly in log–log between them (F is smooth and near a power law; the interpolation error is
  *   checked against direct evaluation in test/calculators/road-power.speed.test.ts).
  */
-import { ISO_8608_CLASSES, roadDamperPower, roadRoughness, type RoadDamper } from '../../core/duty/index.ts';
+import { damperVelocityVariance, ISO_8608_CLASSES, roadDamperPower, roadRoughness, statisticalLinearisation, type RoadDamper } from '../../core/duty/index.ts';
+import { gaussianMomentFactor } from '../../core/dampers/index.ts';
 
 type Car = Parameters<typeof roadDamperPower>[0];
 
@@ -32,7 +33,18 @@ function atScale(car: Car, w: number, damper: RoadDamper, s: number): number {
 function tabulated(car: Car, w: number, damper: RoadDamper, sLo: number, sHi: number): (s: number) => number {
   const n = Math.max(2, Math.ceil(5 * Math.log10(sHi / sLo)) + 1);
   const ls = logGrid(sLo, sHi, n).map(Math.log);
-  const lp = ls.map((l) => Math.log(atScale(car, w, damper, Math.exp(l))));
+  let lp: number[];
+  if (damper.kind === 'power') {
+    // roadDamperPower's linearisation, each point started from its neighbour's equivalent damping
+    // (a few secant steps instead of a dozen from the generic start)
+    let c0 = damper.C * gaussianMomentFactor(damper.alpha) * 0.3 ** (damper.alpha - 1);
+    lp = ls.map((l) => {
+      const road = { Gd0: Math.exp(l), w, V: 1 };
+      const lin = statisticalLinearisation(damper.C, damper.alpha, (c) => Math.sqrt(damperVelocityVariance({ ...car, c }, road, 1e-4, 24)), c0, 1e-4);
+      c0 = lin.ceq;
+      return Math.log(lin.ceq * lin.sigmaV ** 2);
+    });
+  } else lp = ls.map((l) => Math.log(atScale(car, w, damper, Math.exp(l))));
   return (s) => {
     const l = Math.log(s);
     if (n === 2 || !(sHi > sLo)) return Math.exp(lp[0]! + ((l - ls[0]!) / ((ls[1]! - ls[0]!) || 1)) * (lp[1]! - lp[0]!));

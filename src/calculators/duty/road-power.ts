@@ -35,7 +35,7 @@ export const roadPowerCalculator = defineCalculator({
   id: 'road-power',
   offMainThread: true, // p99 of evaluate + charts over a frame (npm run bench)
   title: 'Damper power on a random road (ISO 8608 quarter car)',
-  summary: 'Mean power a suspension damper turns into heat on an ISO 8608 road, with ride (body acceleration, ISO 2631-1 weighted comfort value), suspension travel, dynamic tyre load, the comfort and road-holding optima of the damping and a motion ratio between wheel and damper, by frequency-domain integration checked against closed forms.',
+  summary: 'Mean power a suspension damper turns into heat on an ISO 8608 road, with ride (body acceleration, ISO 2631-1 weighted comfort value), suspension travel, dynamic tyre load, the comfort and road-holding optima of the damping and a motion ratio between wheel and damper, in closed form by residues (frequency-domain quadrature where that cancels), checked against the white-road closed forms.',
   inputs: [
     { key: 'roadClass', label: 'ISO 8608 road class', kind: 'choice', options: ISO_8608_CLASSES.map((c) => ({ value: c, label: `Class ${c}` })), default: 'C', help: 'A (very good) to H (very poor). Ignored when a measured G_d(n0) is given.' },
     { key: 'classValue', label: 'Value within the class', kind: 'choice', options: [{ value: 'mean', label: 'geometric mean' }, { value: 'lower', label: 'lower class limit' }, { value: 'upper', label: 'upper class limit' }], default: 'mean', help: 'Each class spans half to twice its geometric mean.' },
@@ -67,9 +67,9 @@ export const roadPowerCalculator = defineCalculator({
     { key: 'ceq', label: 'Linear (or equivalent) damping, at the damper', kind: 'damping' },
     { key: 'PClosed', label: 'Mean power, closed form (w = 2)', kind: 'power', optional: true, help: 'π²·k_t·G_d(n0)·n0²·V: no damper or mass term.' },
     { key: 'vRmsClosed', label: 'RMS damper velocity, closed form (w = 2)', kind: 'velocity', optional: true },
-    { key: 'closedFormDiff', label: 'Quadrature check: largest difference from the closed forms', kind: 'fraction', digits: 2, help: 'Same car and damping on a w = 2 road, where closed forms exist (for w = 2 these are the results shown).' },
-    { key: 'quadError', label: 'Quadrature error bound (relative)', kind: 'fraction', digits: 2 },
-    { key: 'band', label: 'Quadrature band (log grid, adaptive Simpson; tails added)', kind: 'text' },
+    { key: 'closedFormDiff', label: 'Integration check: largest difference from the white-road closed forms', kind: 'fraction', digits: 2, help: 'The variances computed as for the results (residues, or quadrature where they fall back), for the same car and damping on a w = 2 road, against the Lyapunov closed forms (for w = 2 these are the results shown).' },
+    { key: 'quadError', label: 'Error bound of the variances (relative)', kind: 'fraction', digits: 2, help: 'Largest of the five: rounding and root errors of the closed form by residues, or the quadrature tolerance plus 10 % of its tails where it fell back.' },
+    { key: 'band', label: 'Integration method (quadrature band where it falls back)', kind: 'text', help: 'The gains are rational in ω² and the road PSD a power law, so each variance is a Mellin transform summed by residues. Where the partial fractions cancel (damping close to critical in a mode) that variance is integrated by adaptive Simpson on a log grid over the band shown, tails added.' },
     { key: 'roadBasis', label: 'Road input', kind: 'text' },
   ],
   compute(values) {
@@ -84,15 +84,15 @@ export const roadPowerCalculator = defineCalculator({
     if (optNum(values, 'Gd0') !== undefined) warnings.push('A measured G_d(n0) is given, so the road class is not used; leave that field empty to use the class.');
     if (s.openLimit) warnings.push('ISO 8608 leaves this class limit open; the value shown is the factor-2 step from the class mean.');
     if (r.tyreLoadRatio > 1 / 3) warnings.push(`RMS dynamic tyre load is ${(100 * r.tyreLoadRatio).toFixed(0)} % of the static load: the wheel lifts off at times, and the linear model no longer holds.`);
-    if (diff > 5e-3) warnings.push(`On this car the quadrature misses the white-road closed form by ${(100 * diff).toPrecision(2)} %: the inputs are outside what the integration resolves${s.road.w === 2 ? '; use the closed-form values' : ''}.`);
-    if (s.road.w !== 2) warnings.push('w ≠ 2: road velocity is not white, so only the quadrature applies (no closed-form check).');
+    if (diff > 5e-3) warnings.push(`On this car the integration misses the white-road closed form by ${(100 * diff).toPrecision(2)} %: the inputs are outside what the integration resolves${s.road.w === 2 ? '; use the closed-form values' : ''}.`);
+    if (s.road.w !== 2) warnings.push('w ≠ 2: road velocity is not white, so there is no white-road closed form to check against.');
     return {
       outputs: {
         vRms, FRms: damperForceRms(s.atDamper, vRms), P: r.P, accRms: r.accRms, awWk: r.awWk, comfort: comfortReaction(r.awWk),
         cComfort: opt.comfort / (MR * MR), cRoadHolding: opt.roadHolding / (MR * MR),
         travelRms: r.travelRms, strokeRms: MR * r.travelRms, tyreLoadRms: r.tyreLoadRms, tyreLoadRatio: r.tyreLoadRatio,
         Gd0Used: s.road.Gd0, ceq: r.c / (MR * MR), PClosed: c?.P, vRmsClosed: c ? MR * c.vRms : undefined, closedFormDiff: diff, quadError: r.relError,
-        band: `${r.band[0].toPrecision(3)}–${r.band[1].toPrecision(3)} Hz`,
+        band: r.fallbacks === 0 ? 'none: closed form by residues (Mellin transform of the rational gains)' : `${r.band[0].toPrecision(3)}–${r.band[1].toPrecision(3)} Hz for ${r.fallbacks} of 5 variances (residues cancel; quadrature)`,
         roadBasis: s.basis,
       },
       warnings,

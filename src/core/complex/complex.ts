@@ -61,3 +61,35 @@ export function abs(a: Complex): number {
 export function arg(a: Complex): number {
   return Math.atan2(a.im, a.re);
 }
+
+/**
+ * Exponential e^a = e^{re}(cos im + i sin im).
+ * @example exp(complex(0, Math.PI / 2)).im // 1
+ * @source abramowitz1964 4.3.47 (from memory)
+ */
+export function exp(a: Complex): Complex {
+  const m = Math.exp(a.re);
+  return { re: m * Math.cos(a.im), im: m * Math.sin(a.im) };
+}
+
+/**
+ * e^a − 1 without the cancellation of exp(a) − 1 when |a| is small: the real part is written as
+ * expm1(re)·cos(im) − 2 sin²(im/2), both terms accurate to rounding.
+ * @example expm1(complex(1e-12, 1e-12)).im // 1e-12
+ * @source abramowitz1964 4.3.47 with the half-angle identity 4.3.20 (from memory)
+ */
+export function expm1(a: Complex): Complex {
+  const h = Math.sin(a.im / 2);
+  return { re: Math.expm1(a.re) * Math.cos(a.im) - 2 * h * h, im: Math.exp(a.re) * Math.sin(a.im) };
+}
+
+/**
+ * Principal logarithm ln|a| + i arg a, arg in (−π, π] (the branch cut is the negative real axis).
+ * @throws ComputationError when a = 0
+ * @example log(complex(-1, 0)).im // 3.141593
+ * @source abramowitz1964 4.1.2 (principal value; from memory)
+ */
+export function log(a: Complex): Complex {
+  if (a.re === 0 && a.im === 0) throw new ComputationError('logarithm of zero');
+  return { re: Math.log(Math.hypot(a.re, a.im)), im: Math.atan2(a.im, a.re) };
+}

@@ -1,2 +1,2 @@
 /** Complex arithmetic for phasors and frequency responses. */
-export { abs, add, arg, complex, div, mul, scale, sub, type Complex } from './complex.ts';
+export { abs, add, arg, complex, div, exp, expm1, log, mul, scale, sub, type Complex } from './complex.ts';

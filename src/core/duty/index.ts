@@ -33,3 +33,5 @@ export { propertyBounds, type PropertyFactors, type PropertyBounds } from './pro
 export { narrowBandStroke, spectralStroke, type RandomStroke } from './randomStroke.ts';
 export { protocolHeating, MAX_PROTOCOL_CYCLES, PROTOCOL_T_MAX, type ProtocolBlock, type ProtocolBody, type ProtocolRun } from './protocolHeating.ts';
 export { parseProtocol, MAX_PROTOCOL_ROWS } from './protocolText.ts';
+export { quarterCarSpectra, type QuarterCarSpectra } from './quarterCarSpectra.ts';
+export { roadResponseVariance } from './roadVariance.ts';

@@ -1,6 +1,7 @@
 /**
- * Damper duty of a quarter car on an ISO 8608 road: RMS responses and mean damper power by
- * frequency-domain integration, with the white-velocity closed forms beside them when w = 2.
+ * Damper duty of a quarter car on an ISO 8608 road: RMS responses and mean damper power from the
+ * spectral variances (closed form by residues, quadrature as the fallback), with the white-velocity
+ * closed forms beside them when w = 2.
  */
 import { STANDARD_GRAVITY } from '../constants.ts';
 import { ALPHA_RANGE, gaussianMomentFactor } from '../dampers/index.ts';
@@ -32,12 +33,15 @@ export interface RoadDuty {
   readonly band: readonly [number, number];
   /** Largest relative error bound of the five integrals. */
   readonly relError: number;
+  /** How many of the five variances fell back to quadrature (0: all by residues). */
+  readonly fallbacks: number;
   /** Closed forms (w = 2 only), same c. */
   readonly closed?: { readonly vRms: number; readonly P: number; readonly accRms: number; readonly travelRms: number; readonly tyreLoadRms: number } | undefined;
   readonly iterations: number;
   /**
-   * Largest relative difference between quadrature and closed form for this car and linear damping c
-   * on a w = 2 road (the integration check; when w = 2 it compares the reported values themselves).
+   * Largest relative difference between the computed variances (residues, or quadrature where they fell
+   * back) and the Lyapunov closed forms for this car and linear damping c on a w = 2 road (the
+   * integration check; when w = 2 it compares the reported values themselves).
    */
   readonly closedFormDiff: number;
 }
@@ -94,6 +98,7 @@ export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: Ro
     tyreLoadRms,
     tyreLoadRatio: tyreLoadRms / ((car.ms + car.mu) * STANDARD_GRAVITY),
     band: r.damperVelocity.band,
+    fallbacks: r.fallbacks,
     relError: Math.max(r.damperVelocity.relError, r.travel.relError, r.bodyAcceleration.relError, r.tyreLoad.relError, r.weightedAcceleration.relError),
   };
 }

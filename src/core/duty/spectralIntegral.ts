@@ -14,6 +14,8 @@ export interface SpectralIntegral {
   readonly tailFraction: number;
   /** Error bound (relative): quadrature tolerance + 10 % of the tails. */
   readonly relError: number;
+  /** How the value was found: this quadrature, or a closed form by residues (quarterCarRandom). */
+  readonly method?: 'quadrature' | 'residues';
 }
 
 /**
@@ -83,7 +85,7 @@ export function spectralIntegral(g: (f: number) => number, f1: number, f2: numbe
   if (p1 <= -1 || q2 <= 1) throw new ComputationError(`spectral integral: the PSD does not decay fast enough outside ${f1.toPrecision(3)}–${f2.toPrecision(3)} Hz (variance unbounded)`);
   const tails = (g(f1) * f1) / (p1 + 1) + (g(f2) * f2) / (q2 - 1);
   const value = band + tails;
-  return { value, band: [f1, f2], tailFraction: tails / value, relError: relTol + (0.1 * tails) / value };
+  return { value, band: [f1, f2], tailFraction: tails / value, relError: relTol + (0.1 * tails) / value, method: 'quadrature' };
 }
 
 /**
@@ -126,6 +128,6 @@ export function spectralIntegrals(g: (f: number) => readonly number[], f1: numbe
     if (p1 <= -1 || q2 <= 1) throw new ComputationError(`spectral integral: the PSD does not decay fast enough outside ${f1.toPrecision(3)}–${f2.toPrecision(3)} Hz (variance unbounded)`);
     const tails = (gk(f1) * f1) / (p1 + 1) + (gk(f2) * f2) / (q2 - 1);
     const value = b + tails;
-    return { value, band: [f1, f2] as const, tailFraction: tails / value, relError: relTol + (0.1 * tails) / value };
+    return { value, band: [f1, f2] as const, tailFraction: tails / value, relError: relTol + (0.1 * tails) / value, method: 'quadrature' as const };
   });
 }

@@ -9,3 +9,6 @@ export { DECIMAL_COMMA, PLAIN_NUMBER, hasDecimalComma, isPlainNumber } from './p
 export { goldenSection, type GoldenMinimum } from './goldenSection.ts';
 export { relativeDifference, withinTolerance } from './compare.ts';
 export { maxOf, minOf, maxAbsOf } from './extent.ts';
+export { polynomialRoots, type PolynomialRoot } from './polynomialRoots.ts';
+export { mellinRational, type MellinValue, type RationalSpectrum } from './mellinRational.ts';
+export { ddAdd, ddMul, ddProduct, refineRoot, type DD } from './doubleDouble.ts';
