@@ -63,7 +63,7 @@ export const RESULT_CHANGES: readonly VersionChanges[] = [
     changes: [
       { calculators: ['sdof'], what: 'energy audit by an exact step map and one Gauss–Legendre step integral: closure about 1e-14 (was about 1e-12); chart samples move below 1e-13 relative' },
       { calculators: ['road-power'], what: 'power-against-speed chart log–log, 60 speeds, power-law points interpolated within 1 % (chart only; outputs unchanged)' },
-      { calculators: ['sdof'], what: 'energy audit of heavily overdamped steps on graded panels: closure 3e-14 where it read up to 0.88 (ζ ≈ 1.6e4); other outputs unchanged' },
+      { calculators: ['sdof'], what: 'energy audit of heavily overdamped steps on graded panels: closure 3e-14 where it read up to 0.88 (ζ ≈ 1.6e4); closure stated as 1e-13 when smaller (rounding level); other outputs unchanged' },
       { calculators: ['energy-per-cycle', 'harmonic-duty', 'storey-dampers', 'structural-dampers', 'test-protocol'], what: 'bilinear-law energy per cycle integrated in units of the peak force (below 1e-13 relative for normal inputs); a vanishing amplitude answers instead of hanging' },
       { calculators: ['road-power'], what: 'variances in closed form by residues (Mellin transform of the rational gains), quadrature only as the fallback: values move in about the 1e-8 relative place, quadError states the closed form\'s bound (about 1e-13), band names the method; chart points move up to the 1e-4 of its table' },
     ],

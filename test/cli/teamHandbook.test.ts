@@ -106,6 +106,8 @@ describe('a handbook folder outside the project', () => {
 
   it('seals an approval, fails check once the method is edited (naming the file) and leaves the page "changed since approval" for the build below', async () => {
     const page = join(content, 'machines', 'spindle-decay.mdx');
+    const c = await run('check-off', 'spindle-decay', '--by', 'Toma Reeve', '--date', '2026-12-02', '--content', content);
+    expect(c.code, c.err).toBe(0);
     const a = await run('approve', 'spindle-decay', '--by', 'Ilse Marrow', '--date', '2026-12-02', '--content', content);
     expect(a.code, a.err).toBe(0);
     expect(readFileSync(page, 'utf8')).toMatch(/status: approved[\s\S]*approvalHash: "?[0-9a-f]{16}/);

@@ -4,6 +4,9 @@ import { pageBody, SEAL_FIELD, sealOf } from '../../content/seal.ts';
 import { UsageError, type ParsedArgs } from '../args.ts';
 import { contentDirOf } from '../contentDir.ts';
 import { setFields, yamlScalar, type FieldEdit } from '../frontmatterEdit.ts';
+import { topicTitles } from '../../content/handbookConfig.ts';
+import { readHandbookConfig } from '../../content/readHandbookConfig.ts';
+import { pageSchemaFor } from '../../content/schema.ts';
 import { parsePage, readPages } from '../pages.ts';
 
 type Level = 'approved' | 'checked';
@@ -38,7 +41,8 @@ function signOff(level: Level, args: ParsedArgs, out: (s: string) => void): numb
   ];
   let next: string;
   try { next = setFields(text, edits); } catch (e) { throw new UsageError(`${page.file}: ${e instanceof Error ? e.message : String(e)}`); }
-  const parsed = parsePage(next);
+  // the folder's own topics (its handbook.config.json), as check reads the page
+  const parsed = parsePage(next, pageSchemaFor(topicTitles(readHandbookConfig(dir))));
   if (parsed.errors.length) throw new UsageError(`not written: ${page.file} would fail check: ${parsed.errors.join('; ')}`);
   // the frontmatter edit must not reach what is signed
   if (sealOf(pageBody(next), parsed.meta!) !== seal) throw new Error('the sign-off edit changed the signed content');
