@@ -17,11 +17,14 @@ describe('oscillator page in Chromium', () => {
     await page.waitForSelector('figure[data-chart="response"] canvas');
     const zeta = page.locator('tr[data-out="zeta"] .value');
     await expect.poll(() => zeta.textContent()).toBe('0.1');
-    const summaryBefore = await page.locator('figure[data-chart="energy"] .chart-summary').textContent();
+    // the response chart's summary names ζ, so it must change with c (the energy chart's states the
+    // audit closure, which reads 1e-13 at the rounding level for any c)
+    const summaryBefore = await page.locator('figure[data-chart="response"] .chart-summary').textContent();
 
     await page.fill('#c-sdof-c', '80');
     await expect.poll(() => zeta.textContent()).toBe('0.2');
-    await expect.poll(() => page.locator('figure[data-chart="energy"] canvas').getAttribute('aria-label')).not.toContain(summaryBefore ?? '');
+    await expect.poll(() => page.locator('figure[data-chart="response"] canvas').getAttribute('aria-label')).not.toContain(summaryBefore ?? '');
+    await expect.poll(() => page.locator('figure[data-chart="response"] canvas').getAttribute('aria-label')).toContain('ζ = 0.200');
     expect(new URL(page.url()).searchParams.get('c')).toBe('80');
 
     // overdamped: the optional log decrement disappears and the regime changes
