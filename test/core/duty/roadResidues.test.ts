@@ -43,6 +43,10 @@ describe('quarter-car variances by residues', () => {
       for (const key of ['damperVelocity', 'travel', 'bodyAcceleration', 'tyreLoad'] as const) {
         const r = roadResponseVariance(s[key], road);
         const d = Math.abs(r.value / cf[key] - 1);
+        // reference: white-noise response of a linear system by the Lyapunov equation (Newland, An
+        // Introduction to Random Vibrations, Spectral and Wavelet Analysis, 3rd ed., ch. 7, from memory;
+        // the quarter-car forms as Gobbi & Mastinu 2001, from memory); road input ISO 8608 class C mean
+        // G_d(n0) = 256e-6 m³ (ISO 8608:2016 Table 1, from memory)
         expect(d).toBeLessThan(1e-12);
         // the closed forms themselves round: allow 1e-14 on top of the bound
         expect(d).toBeLessThan(r.relError + 1e-14);
@@ -56,6 +60,8 @@ describe('quarter-car variances by residues', () => {
       const road = { Gd0: 256e-6, w, V: 20 };
       const closed = quarterCarRandom(q, road);
       const quad = byQuadrature(q, road);
+      // reference: adaptive-Simpson quadrature of the same spectra (Lyness, J. ACM 16 (1969) 483–495);
+      // the residue sum it is checked against: Gradshteyn & Ryzhik, Table of Integrals, 7th ed., 3.222.2 (from memory)
       KEYS.forEach((key, i) => expect(Math.abs(closed[key].value / quad[i]! - 1)).toBeLessThan(1e-6));
     }), { seed: 1, numRuns: 30 });
   });
@@ -70,6 +76,8 @@ describe('quarter-car variances by residues', () => {
       const r = roadDuty(k, road, d);
       // the quadrature at the damping roadDuty settled on: same σ_v (and so the same fixed point)
       const quad = byQuadrature({ ...k, c: r.c }, road);
+      // reference: the quadrature as above (Lyness 1969) at the linearised damping (Roberts & Spanos,
+      // Random Vibration and Statistical Linearization, 2003, ch. 5, from memory)
       expect(Math.abs(r.vRms / Math.sqrt(quad[0]!) - 1)).toBeLessThan(1e-6);
       expect(Math.abs(r.awWk / Math.sqrt(quad[4]!) - 1)).toBeLessThan(1e-6);
       expect(r.fallbacks).toBe(0);
@@ -87,6 +95,8 @@ describe('quarter-car variances by residues', () => {
       const quad = byQuadrature(q, { Gd0: 256e-6, w: 2.5, V: 20 });
       KEYS.forEach((key, i) => { worst = Math.max(worst, Math.abs(r[key].value / quad[i]! - 1)); expect(r[key].relError).toBeLessThan(1e-8); });
     }
+    // reference: the quadrature (Lyness 1969); double poles at critical damping are where partial
+    // fractions cancel (common practice, no source), so this sweep crosses them on purpose
     expect(worst).toBeLessThan(1e-7);
   });
 });
