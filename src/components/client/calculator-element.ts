@@ -5,11 +5,10 @@
  * inputs in the page URL, and hands charts to the chart element. No calculator logic here:
  * everything comes from the definition.
  */
-import { evaluate, inputOrder, isActive } from '../../calculators/evaluate.ts';
+import { inputOrder, isActive } from '../../calculators/evaluate.ts';
 import { feedQuery, urlValue } from '../../calculators/feeds.ts';
-import { withOperatingPoint } from '../../calculators/chartMarks.ts';
+import { computeForPage, type PageResult } from '../../calculators/pageCompute.ts';
 import type { CalculatorDefinition, ChartSpec, Outputs, Result, Values } from '../../calculators/types.ts';
-import { DampbookError, InputRangeError } from '../../core/errors.ts';
 import { findUnit, fromSI, parseQuantity, toSI, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from '../render/format.ts';
 import { clip, parseTyped, readField, splitTyped, textSum } from '../render/fieldState.ts';
@@ -29,7 +28,7 @@ export class CalculatorElement extends HTMLElement {
   private charts: { update(specs: ReturnType<NonNullable<CalculatorDefinition['charts']>>, system: UnitSystem): void } | undefined;
   private pending = 0;
   /** A result already computed elsewhere for exactly these values (the open study's run of this step), used once. */
-  private offered: (Result & { values: Values }) | undefined;
+  private offered: (PageResult) | undefined;
   /** The last valid inputs (SI) and outputs shown; undefined while a field is bad. */
   values: Values | undefined;
   outputs: Outputs | undefined;
@@ -429,24 +428,10 @@ export class CalculatorElement extends HTMLElement {
     return Promise.resolve();
   }
 
-  private computeHere(values: Values, draw: boolean, offered?: Result & { values: Values }): void {
-    const calc = this.calc!;
-    let result;
-    try {
-      result = offered ?? evaluate(calc, values);
-    } catch (e) {
-      this.showError(e instanceof DampbookError ? e.message : '', e instanceof DampbookError, e instanceof InputRangeError ? e.input : undefined);
-      return;
-    }
-    let charts: ChartSpec[] | undefined;
-    let chartError: string | undefined;
-    if (draw && calc.charts) {
-      try { charts = withOperatingPoint(calc, calc.charts(result.values, result), result.values); } catch (e) {
-        if (!(e instanceof DampbookError)) throw e;
-        chartError = e.message;
-      }
-    }
-    this.show(values, result, charts, chartError);
+  private computeHere(values: Values, draw: boolean, offered?: PageResult): void {
+    const out = computeForPage(this.calc!, values, draw, offered);
+    if (!out.ok) this.showError(out.message, out.known, out.input);
+    else this.show(values, out.result, out.charts, out.chartError);
   }
 
   /** The worker computes; "Computing…" shows after BUSY_MS; an answer for an older ticket is dropped. */
@@ -470,7 +455,7 @@ export class CalculatorElement extends HTMLElement {
     this.setState(this.querySelector<HTMLElement>('.calc-state'), 'error', `Not current: ${known ? message : 'These inputs could not be computed.'}`);
   }
 
-  private show(values: Values, result: Result & { values: Values }, charts: ChartSpec[] | undefined, chartError: string | undefined): void {
+  private show(values: Values, result: PageResult, charts: ChartSpec[] | undefined, chartError: string | undefined): void {
     const calc = this.calc!;
     this.renderOutputs(result.outputs);
     this.renderFeeds(result);
@@ -527,7 +512,7 @@ export class CalculatorElement extends HTMLElement {
   }
 
   /** Rewrites each feed link from the new result (feedQuery); hides it while a source is absent. */
-  private renderFeeds(result: Result & { values: Values }): void {
+  private renderFeeds(result: PageResult): void {
     for (const a of this.querySelectorAll<HTMLAnchorElement>('a[data-feed-out]')) {
       const out = a.dataset.feedOut ?? '';
       const feed = this.calc!.outputs.find((o) => o.key === out)?.feeds?.[Number(a.dataset.feedIndex)];

@@ -7,11 +7,9 @@
  * very same calculator and core chunks the page already loaded (from the HTTP cache), and the build
  * has no second bundle of every calculator to make. Nothing here touches the DOM.
  */
-import { withOperatingPoint } from '../../calculators/chartMarks.ts';
-import { evaluate } from '../../calculators/evaluate.ts';
 import { loadCalculator } from '../../calculators/loaders.ts';
+import { computeForPage } from '../../calculators/pageCompute.ts';
 import type { ChartSpec, Outputs, Values } from '../../calculators/types.ts';
-import { DampbookError, InputRangeError } from '../../core/errors.ts';
 
 /** The URL of the chunk this module is bundled in: what the worker imports. */
 export const selfUrl: string = import.meta.url;
@@ -41,20 +39,11 @@ export type Reply =
 export async function answer(job: Job): Promise<Reply> {
   const calc = await loadCalculator(job.id);
   if (!calc) return { seq: job.seq, ok: false, known: false, message: `no calculator '${job.id}'` };
-  let full;
-  try {
-    full = evaluate(calc, job.values);
-  } catch (e) {
-    return { seq: job.seq, ok: false, known: e instanceof DampbookError, message: e instanceof Error ? e.message : String(e), ...(e instanceof InputRangeError ? { input: e.input } : {}) };
-  }
-  const result: Computed = { outputs: full.outputs, warnings: full.warnings, values: full.values, ...(full.handoff ? { handoff: full.handoff } : {}) };
-  if (!job.charts || !calc.charts) return { seq: job.seq, ok: true, result };
-  try {
-    return { seq: job.seq, ok: true, result, charts: withOperatingPoint(calc, calc.charts(full.values, full), full.values) };
-  } catch (e) {
-    if (!(e instanceof DampbookError)) throw e;
-    return { seq: job.seq, ok: true, result, chartError: e.message };
-  }
+  const out = computeForPage(calc, job.values, job.charts);
+  if (!out.ok) return { seq: job.seq, ...out };
+  const { outputs, warnings, values, handoff } = out.result;
+  const result: Computed = { outputs, warnings, values, ...(handoff ? { handoff } : {}) };
+  return { seq: job.seq, ok: true, result, ...(out.charts ? { charts: out.charts } : {}), ...(out.chartError !== undefined ? { chartError: out.chartError } : {}) };
 }
 
 /** What a dedicated worker's global scope offers here (typed without the webworker lib). */
