@@ -1,6 +1,7 @@
 /**
  * `dampbook batch` throughput: sdof cases per second through the whole command (read the CSV,
- * one calc per row on every core, write the results file), with all cores and with --jobs 1,
+ * one calc per row, write the results file) with the default threads, with every thread started
+ * at once (--jobs N) and with --jobs 1,
  * against one process per case (the cost of calling `npx dampbook calc` in a loop: 10 single
  * `calc` processes timed, the median extrapolated). Target ≥ 20,000 rows/s (issue 17). Part of
  * `npm run bench` (bench/run.ts); alone: npx tsx bench/batch.bench.ts [rows]
@@ -15,9 +16,10 @@ import { median } from './lib/timing.ts';
 
 const TARGET_ROWS_PER_S = 20_000;
 
-async function timedBatch(csv: string, out: string, jobs: number): Promise<number> {
+/** `jobs` undefined: the command's default (every core once the rows are worth it). */
+async function timedBatch(csv: string, out: string, jobs: number | undefined): Promise<number> {
   const t0 = performance.now();
-  const code = await main(['batch', 'sdof', '--csv', csv, '--out', out, '--jobs', String(jobs)], () => {}, (s) => process.stderr.write(`${s}\n`));
+  const code = await main(['batch', 'sdof', '--csv', csv, '--out', out, ...(jobs === undefined ? [] : ['--jobs', String(jobs)])], () => {}, (s) => process.stderr.write(`${s}\n`));
   if (code !== 0) throw new Error(`batch bench: exit ${code}`);
   return (performance.now() - t0) / 1000;
 }
@@ -32,8 +34,10 @@ export async function batchBench(rows = 20_000) {
     writeFileSync(csv, `${lines.join('\n')}\n`);
     const out = join(dir, 'results.csv');
     const jobs = availableParallelism();
-    process.stderr.write(`batch: ${rows} sdof rows, ${jobs} jobs…\n`);
-    const all = await timedBatch(csv, out, jobs);
+    process.stderr.write(`batch: ${rows} sdof rows, the default (up to ${jobs} threads)…\n`);
+    const all = await timedBatch(csv, out, undefined);
+    process.stderr.write(`batch: --jobs ${jobs} (threads started at once)…\n`);
+    const forced = await timedBatch(csv, out, jobs);
     process.stderr.write('batch: --jobs 1…\n');
     const one = await timedBatch(csv, out, 1);
     process.stderr.write('batch: 10 single calc processes…\n');
@@ -48,7 +52,8 @@ export async function batchBench(rows = 20_000) {
     const rowsPerS = Math.round(rows / all);
     return {
       rows, jobs,
-      allCoresSeconds: Number(all.toFixed(2)), rowsPerSecond: rowsPerS,
+      defaultSeconds: Number(all.toFixed(2)), rowsPerSecond: rowsPerS,
+      forcedThreadsSeconds: Number(forced.toFixed(2)), forcedThreadsRowsPerSecond: Math.round(rows / forced),
       oneJobSeconds: Number(one.toFixed(2)), oneJobRowsPerSecond: Math.round(rows / one),
       singleCalcProcessSeconds: Number(perProcess.toFixed(3)), processPerCaseRowsPerSecond: Number((1 / perProcess).toFixed(2)),
       ratioToProcessPerCase: Math.round(rowsPerS * perProcess),

@@ -13,6 +13,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseCsv } from '../../src/cli/batch/csv.ts';
+import { runRows, type RunStats } from '../../src/cli/batch/pool.ts';
 import { main } from '../../src/cli/main.ts';
 import { withinTolerance } from '../../src/core/numeric/compare.ts';
 
@@ -153,5 +154,23 @@ describe('threads', () => {
     expect((await run('batch', 'sdof', '--csv', csv, '--out', a, '--jobs', '2')).code).toBe(1);
     expect((await run('batch', 'sdof', '--csv', csv, '--out', b, '--jobs', '1')).code).toBe(1);
     expect(readFileSync(a, 'utf8')).toBe(readFileSync(b, 'utf8'));
+  });
+});
+
+describe('how many threads the default starts', () => {
+  const rowsOf = (n: number) => Array.from({ length: n }, (_, i) => caseOf(i).map(String));
+  const base = { id: 'sdof', header: ['m', 'k', 'c', 'x0', 'v0'], withInputs: false };
+  it('none for rows that one thread finishes sooner than a worker starts (3,000 sdof rows)', async () => {
+    const stats: RunStats = { workersStarted: 0 };
+    const r = await runRows(base, rowsOf(3000), { threads: 2, measure: true }, undefined, stats);
+    expect(r).toHaveLength(3000);
+    expect(stats.workersStarted).toBe(0);
+  });
+  it('an explicit --jobs 2 starts its worker at once, and the results are the same', { timeout: 120_000 }, async () => {
+    const stats: RunStats = { workersStarted: 0 };
+    const rows = rowsOf(3000);
+    const forced = await runRows(base, rows, { threads: 2, measure: false }, undefined, stats);
+    expect(stats.workersStarted).toBe(1);
+    expect(forced).toEqual(await runRows(base, rows, { threads: 1, measure: false }));
   });
 });

@@ -1,5 +1,5 @@
 import {
-  criticalDamping, dampedFrequency, dampingRatio, dampingRegime, energyHistory, logDecrementFromZeta,
+  criticalDamping, dampedFrequency, dampingRatio, dampingRegime, energyAudit, energyHistory, logDecrementFromZeta,
   naturalFrequency, qualityFactor, responseWindow,
 } from '../../core/vibration/index.ts';
 import { defineCalculator, num, type ChartSpec, type Values } from '../types.ts';
@@ -44,7 +44,7 @@ export const sdofCalculator = defineCalculator({
     const zeta = dampingRatio(p.m, p.k, p.c);
     const regime = dampingRegime(zeta);
     const window = responseWindow(wn, zeta);
-    const audit = energyHistory(p, window, AUDIT_SAMPLES); // the chart's samples: one closure for the page
+    const audit = energyAudit(p, window, AUDIT_SAMPLES); // on the chart's samples: one closure for the page
     // the window is capped at 30 periods where the decay to 1 % would take longer (ζ < ln 100/(60π) ≈ 2.44 %)
     const capped = zeta < 1 && Math.log(100) / (zeta * wn) > window * (1 + 1e-12);
     return {

@@ -1,6 +1,7 @@
 /**
  * `dampbook batch <id> --csv cases.csv [--out results.csv] [--jobs N] [--json]`: one `calc` per
- * row (src/cli/batch/rows.ts), on every core by default (src/cli/batch/pool.ts), results in the
+ * row (src/cli/batch/rows.ts), on every core by default when the rows are worth it
+ * (src/cli/batch/pool.ts), results in the
  * order of the rows. A refused row gets its one-line message in the `error` column and the run
  * goes on; the exit code is 1 when any row was refused, and stderr says how many.
  */
@@ -9,7 +10,7 @@ import { availableParallelism } from 'node:os';
 import { resolve } from 'node:path';
 import { UsageError, type ParsedArgs } from '../args.ts';
 import { CsvError } from '../batch/csv.ts';
-import { runRows } from '../batch/pool.ts';
+import { runRows, type ThreadPlan } from '../batch/pool.ts';
 import { progressBar } from '../batch/progress.ts';
 import { readCases, resultLines } from '../batch/table.ts';
 import { requireCalculator } from '../lookup.ts';
@@ -25,11 +26,12 @@ function stringFlag(args: ParsedArgs, name: string): string | undefined {
   return v;
 }
 
-function jobsOf(args: ParsedArgs): number {
+/** Without --jobs: every core, once the rows are seen to be worth it (pool.ts); with it: N threads. */
+function plan(args: ParsedArgs): ThreadPlan {
   const v = stringFlag(args, 'jobs');
-  if (v === undefined) return availableParallelism();
+  if (v === undefined) return { threads: availableParallelism(), measure: true };
   if (!/^\d+$/.test(v) || Number(v) < 1 || Number(v) > MAX_JOBS) throw new UsageError(`--jobs ${v}: expected a whole number from 1 to ${MAX_JOBS}`);
-  return Number(v);
+  return { threads: Number(v), measure: false };
 }
 
 export async function batch(args: ParsedArgs, out: (s: string) => void, err: (s: string) => void): Promise<number> {
@@ -39,7 +41,7 @@ export async function batch(args: ParsedArgs, out: (s: string) => void, err: (s:
   if (csvPath === undefined) throw new UsageError('batch needs --csv <cases.csv> (header = input keys, one case per row)');
   const outPath = stringFlag(args, 'out');
   if (outPath !== undefined && resolve(outPath) === resolve(csvPath)) throw new UsageError('--out must not be the --csv file (it would overwrite the cases)');
-  const jobs = jobsOf(args);
+  const threads = plan(args);
   let cases;
   try {
     cases = readCases(def, readBoundedFile(csvPath, BATCH_FILE_LIMIT).text, csvPath);
@@ -53,7 +55,7 @@ export async function batch(args: ParsedArgs, out: (s: string) => void, err: (s:
   let results;
   try {
     const content = stringFlag(args, 'content');
-    results = await runRows({ id: def.id, header: cases.header, withInputs: json, ...(content !== undefined ? { content } : {}) }, cases.rows, jobs, (n) => bar.update(n));
+    results = await runRows({ id: def.id, header: cases.header, withInputs: json, ...(content !== undefined ? { content } : {}) }, cases.rows, threads, (n) => bar.update(n));
   } finally {
     bar.end();
   }

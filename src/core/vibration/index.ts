@@ -8,7 +8,7 @@ export { logDecrementFromZeta, zetaFromLogDecrement } from './logDecrement.ts';
 export { qualityFactor } from './qualityFactor.ts';
 export { dampingRegime, CRITICAL_BAND, type DampingRegime } from './regime.ts';
 export { freeResponse, type FreeOscillator, type State } from './freeResponse.ts';
-export { energyHistory, responseWindow, type EnergyHistory } from './energyHistory.ts';
+export { energyAudit, energyHistory, responseWindow, type EnergyHistory } from './energyHistory.ts';
 export { magnificationFactor, phaseLag } from './magnification.ts';
 export { transmissibility, relativeMotionRatio, baseMotionPhaseLag } from './transmissibility.ts';
 export { displacementPeak, transmissibilityPeak } from './peakResponse.ts';

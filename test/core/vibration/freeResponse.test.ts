@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { InputRangeError } from '../../../src/core/errors.ts';
-import { energyHistory, freeResponse, responseWindow } from '../../../src/core/vibration/index.ts';
+import { energyAudit, energyHistory, freeResponse, responseWindow } from '../../../src/core/vibration/index.ts';
 import { FREE_RESPONSE_ROWS } from './freeResponse.fixtures.ts';
 
 describe('freeResponse', () => {
@@ -75,5 +75,18 @@ describe('energyHistory', () => {
     const h = energyHistory({ m: 1, k: 100, c: 4, x0: 0.01, v0: 0 }, 3, 301);
     for (let i = 1; i < h.t.length; i++) expect(h.dissipated[i]!).toBeGreaterThanOrEqual(h.dissipated[i - 1]!);
     expect(h.dissipated.at(-1)!).toBeLessThanOrEqual(h.initial * (1 + 1e-12));
+  });
+
+  it('energyAudit: the same initial energy and closure as energyHistory, without the samples', () => {
+    // initial = ½ k x₀² = ½·100·0.01² = 0.005 J (closed form); the closure is the same walk's
+    for (const c of [4, 20, 200]) {
+      const p = { m: 1, k: 100, c, x0: 0.01, v0: 0 };
+      const h = energyHistory(p, 3, 301);
+      const a = energyAudit(p, 3, 301);
+      expect(a.initial).toBe(0.005);
+      expect(a.initial).toBe(h.initial);
+      expect(a.closure).toBe(h.closure);
+    }
+    expect(() => energyAudit({ m: 1, k: 1, c: 1, x0: 1, v0: 0 }, 0)).toThrow(/duration/);
   });
 });
