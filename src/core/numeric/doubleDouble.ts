@@ -40,7 +40,11 @@ export function ddAdd(a: DD, b: DD): DD {
   return [h, l];
 }
 
-/** Product of double-doubles (the lo·lo term is below the precision kept). */
+/**
+ * Product of double-doubles (the lo·lo term is below the precision kept).
+ * @example ddMul([1, 1e-17], [1, 1e-17]) // [1, 2e-17]
+ * @source dekker1971 (mul2; from memory)
+ */
 export function ddMul(a: DD, b: DD): DD {
   const [p, e] = ddProduct(a[0], b[0]);
   return twoSum(p, e + a[0] * b[1] + a[1] * b[0]);
