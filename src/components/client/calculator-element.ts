@@ -8,6 +8,7 @@
 import { inputOrder, isActive } from '../../calculators/evaluate.ts';
 import { feedQuery, urlValue } from '../../calculators/feeds.ts';
 import { computeForPage, type PageResult } from '../../calculators/pageCompute.ts';
+import { absentOutputsLine } from '../render/absentOutputs.ts';
 import type { CalculatorDefinition, ChartSpec, Outputs, Result, Values } from '../../calculators/types.ts';
 import { findUnit, fromSI, parseQuantity, toSI, type UnitSystem } from '../../core/units/index.ts';
 import { displayUnit, formatInput, formatNumber } from '../render/format.ts';
@@ -509,6 +510,8 @@ export class CalculatorElement extends HTMLElement {
       cell.textContent = formatNumber(fromSI(v, u), def.digits ?? 4);
       unitCell.textContent = u.symbol;
     }
+    const absent = this.querySelector('.calc-absent');
+    if (absent) absent.textContent = absentOutputsLine(this.calc!, outputs);
   }
 
   /** Rewrites each feed link from the new result (feedQuery); hides it while a source is absent. */
