@@ -11,8 +11,7 @@
  *   linearly in log–log between them (F is smooth and near a power law; the interpolation error is
  *   checked against direct evaluation in test/calculators/road-power.speed.test.ts).
  */
-import { damperVelocityVariance, ISO_8608_CLASSES, roadDamperPower, roadRoughness, statisticalLinearisation, type RoadDamper } from '../../core/duty/index.ts';
-import { gaussianMomentFactor } from '../../core/dampers/index.ts';
+import { damperVelocityVariance, ISO_8608_CLASSES, roadDamperPower, roadRoughness, linearisationStart, statisticalLinearisation, type RoadDamper } from '../../core/duty/index.ts';
 
 type Car = Parameters<typeof roadDamperPower>[0];
 
@@ -37,7 +36,7 @@ function tabulated(car: Car, w: number, damper: RoadDamper, sLo: number, sHi: nu
   if (damper.kind === 'power') {
     // roadDamperPower's linearisation, each point started from its neighbour's equivalent damping
     // (a few secant steps instead of a dozen from the generic start)
-    let c0 = damper.C * gaussianMomentFactor(damper.alpha) * 0.3 ** (damper.alpha - 1);
+    let c0 = linearisationStart(damper.C, damper.alpha);
     lp = ls.map((l) => {
       const road = { Gd0: Math.exp(l), w, V: 1 };
       const lin = statisticalLinearisation(damper.C, damper.alpha, (c) => Math.sqrt(damperVelocityVariance({ ...car, c }, road, 1e-4, 24)), c0, 1e-4);

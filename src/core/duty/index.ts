@@ -6,7 +6,7 @@ export { checkQuarterCar, quarterCarGains, quarterCarModes, quarterCarCharacteri
 export { spectralIntegral, spectralIntegrals, type SpectralIntegral } from './spectralIntegral.ts';
 export { quarterCarRandom, quarterCarBand, damperVelocityVariance, type QuarterCarRandom } from './quarterCarRandom.ts';
 export { quarterCarWhiteVariances, whiteRoadDamperPower, type QuarterCarVariances } from './quarterCarWhite.ts';
-export { statisticalLinearisation, type Linearised } from './statisticalLinearisation.ts';
+export { linearisationStart, statisticalLinearisation, type Linearised } from './statisticalLinearisation.ts';
 export { roadDuty, type RoadDamper, type RoadDuty } from './roadDuty.ts';
 export { WEIGHTING_WK, WEIGHTING_WD, weightingSquared, type WeightingFilter } from './comfortWeighting.ts';
 export { COMFORT_BANDS, comfortReaction } from './comfortBands.ts';

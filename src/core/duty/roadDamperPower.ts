@@ -2,13 +2,12 @@
  * Mean damper power alone, for sweeps over speed and roughness (charts): the damper-velocity
  * integral only, at a looser tolerance than roadDuty.
  */
-import { gaussianMomentFactor } from '../dampers/index.ts';
 import type { QuarterCar } from './quarterCar.ts';
 import { damperVelocityVariance } from './quarterCarRandom.ts';
 import { whiteRoadDamperPower } from './quarterCarWhite.ts';
 import type { RoadDamper } from './roadDuty.ts';
 import type { RoadInput } from './roadPsd.ts';
-import { statisticalLinearisation } from './statisticalLinearisation.ts';
+import { linearisationStart, statisticalLinearisation } from './statisticalLinearisation.ts';
 
 /**
  * For w = 2 the closed form $\pi^2 k_t G_d(n_0) n_0^2 V$ holds for every law and is returned directly.
@@ -23,7 +22,6 @@ import { statisticalLinearisation } from './statisticalLinearisation.ts';
 export function roadDamperPower(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: RoadDamper, relTol = 1e-6, panels = 60): number {
   if (road.w === 2) return whiteRoadDamperPower(car.kt, road.Gd0, road.V); // exact for every law (closed form)
   if (damper.kind === 'linear') return damper.c * damperVelocityVariance({ ...car, c: damper.c }, road, relTol, panels);
-  const k = damper.C * gaussianMomentFactor(damper.alpha);
-  const lin = statisticalLinearisation(damper.C, damper.alpha, (c) => Math.sqrt(damperVelocityVariance({ ...car, c }, road, relTol, panels)), k * 0.3 ** (damper.alpha - 1), relTol);
+  const lin = statisticalLinearisation(damper.C, damper.alpha, (c) => Math.sqrt(damperVelocityVariance({ ...car, c }, road, relTol, panels)), linearisationStart(damper.C, damper.alpha), relTol);
   return lin.ceq * lin.sigmaV ** 2;
 }

@@ -11,7 +11,7 @@ import { checkQuarterCar, type QuarterCar } from './quarterCar.ts';
 import { damperVelocityVariance, quarterCarRandom } from './quarterCarRandom.ts';
 import { quarterCarWhiteVariances, whiteRoadDamperPower } from './quarterCarWhite.ts';
 import { checkRoad, roadVelocityWhiteLevel, type RoadInput } from './roadPsd.ts';
-import { statisticalLinearisation } from './statisticalLinearisation.ts';
+import { linearisationStart, statisticalLinearisation } from './statisticalLinearisation.ts';
 
 /** The quarter car's damper: linear, or power law F = C|v|^α sgn v. */
 export type RoadDamper = { readonly kind: 'linear'; readonly c: number } | { readonly kind: 'power'; readonly C: number; readonly alpha: number };
@@ -71,7 +71,7 @@ export function roadDuty(car: Omit<QuarterCar, 'c'>, road: RoadInput, damper: Ro
     requireInRange('alpha', damper.alpha, ALPHA_RANGE, '');
     checkQuarterCar({ ...car, c: 1 });
     const sig = (cc: number) => Math.sqrt(damperVelocityVariance({ ...car, c: cc }, road));
-    const lin = statisticalLinearisation(damper.C, damper.alpha, sig, damper.C * gaussianMomentFactor(damper.alpha) * 0.3 ** (damper.alpha - 1));
+    const lin = statisticalLinearisation(damper.C, damper.alpha, sig, linearisationStart(damper.C, damper.alpha));
     c = lin.ceq;
     iterations = lin.iterations;
   }

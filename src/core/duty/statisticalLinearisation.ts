@@ -51,3 +51,12 @@ export function statisticalLinearisation(C: number, alpha: number, sigmaVOf: (c:
   }
   throw new ComputationError(`statistical linearisation did not converge to ${tol} in 200 steps`);
 }
+
+/**
+ * Where the iteration starts: the equivalent damping c = C·K(α)·σ_v^(α−1) at σ_v = 0.3 m/s, a
+ * typical RMS damper velocity of a vehicle suspension on a rough road (common practice, no source).
+ * @example linearisationStart(800, 1) // 800 (a linear law is its own equivalent)
+ */
+export function linearisationStart(C: number, alpha: number): number {
+  return C * gaussianMomentFactor(alpha) * 0.3 ** (alpha - 1);
+}
