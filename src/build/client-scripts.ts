@@ -23,6 +23,7 @@ export const CLIENT_ENTRIES = {
   finder: 'src/components/client/finder.ts',
   sheetDetails: 'src/components/client/sheet-details.ts',
   studyPackage: 'src/components/client/study-package.ts',
+  studyEarly: 'src/components/client/study-early.ts',
 } as const;
 
 export type ClientEntry = keyof typeof CLIENT_ENTRIES;

@@ -78,7 +78,14 @@ function stepCalculators(text: string | null | undefined): string[] {
  * fetching the named one and starts loading its step calculators as soon as their ids are known,
  * so they load with the page instead of after the study code has read and checked the study.
  */
+let opening: boolean | undefined;
+
 export function openingStudy(): boolean {
+  opening ??= startOpening();
+  return opening;
+}
+
+function startOpening(): boolean {
   const named = fetchNamedStudy();
   if (named) { void named.then((r) => warm(stepCalculators(r.text))); return true; }
   if (!storedStudy()) return false;
