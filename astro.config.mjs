@@ -5,6 +5,7 @@ import mdx from '@astrojs/mdx';
 import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
 import { clientScripts } from './src/build/client-scripts.ts';
+import { serverModules } from './src/build/server-prebundle.ts';
 
 const base = process.env.DAMPBOOK_BASE ?? '/';
 
@@ -35,7 +36,8 @@ export default defineConfig({
   markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'warn' }], focusableDisplays] },
   // optimize: without it, math-heavy sites exhaust the heap (hundreds of KaTeX trees per page)
   // clientScripts: browser code is bundled by esbuild in one pass (src/build/client-scripts.ts)
-  integrations: [mdx({ optimize: true }), clientScripts()],
+  // serverModules: the pages' own TypeScript too, for the server pass (src/build/server-prebundle.ts)
+  integrations: [mdx({ optimize: true }), clientScripts(), serverModules()],
   devToolbar: { enabled: false },
   vite: {
     // never inline scripts or assets: the Content-Security-Policy allows only same-origin files.

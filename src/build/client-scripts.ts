@@ -135,26 +135,31 @@ function moduleSource(base: string, files: Record<ClientEntry, string>, preloads
 export function clientScripts(): AstroIntegration {
   let root = '';
   let base = '/';
-  let built: { files: Record<ClientEntry, string>; preloads: Record<LazyPreload, string[]>; calculators: Record<string, string[]>; outputs: OutputFile[] } | undefined;
+  type Built = { files: Record<ClientEntry, string>; preloads: Record<LazyPreload, string[]>; calculators: Record<string, string[]>; outputs: OutputFile[] };
+  /** The bundle, started at setup and awaited where it is needed: it runs while Astro syncs the content. */
+  let built: Promise<Built> | undefined;
   let dev: BuildContext | undefined;
   const devFiles = Object.fromEntries(Object.entries(CLIENT_ENTRIES).map(([k, src]) => [k, `${src.split('/').pop()!.replace(/\.ts$/, '')}.js`])) as Record<ClientEntry, string>;
 
   return {
     name: 'dampbook:client-scripts',
     hooks: {
-      'astro:config:setup': async ({ command, config, updateConfig }) => {
+      'astro:config:setup': ({ command, config, updateConfig }) => {
         root = fileURLToPath(config.root);
         base = config.base;
         if (command === 'build') {
-          const result = await build(options(root, true));
-          built = { files: entryFiles(root, result.metafile!), preloads: preloadFiles(root, result.metafile as Meta), calculators: calculatorFiles(root, result.metafile as Meta), outputs: result.outputFiles! };
+          built = build(options(root, true)).then((result) => ({ files: entryFiles(root, result.metafile!), preloads: preloadFiles(root, result.metafile as Meta), calculators: calculatorFiles(root, result.metafile as Meta), outputs: result.outputFiles! }));
+          built.catch(() => undefined); // the failure surfaces where the build awaits it
         }
-        const files = () => built?.files ?? devFiles;
         const plugin: Plugin = {
           name: 'dampbook:client-urls',
           resolveId: (id) => (id === VIRTUAL ? RESOLVED : undefined),
           // dev serves unsplit-by-hash files on request: nothing to preload there
-          load: (id) => (id === RESOLVED ? moduleSource(base, files(), built?.preloads ?? { study: [] }, built?.calculators ?? {}) : undefined),
+          load: async (id) => {
+            if (id !== RESOLVED) return undefined;
+            const b = await built;
+            return moduleSource(base, b?.files ?? devFiles, b?.preloads ?? { study: [] }, b?.calculators ?? {});
+          },
           configureServer(server) {
             const prefix = `${base.endsWith('/') ? base : `${base}/`}${FOLDER}/`;
             server.middlewares.use(async (req, res, next) => {
@@ -171,10 +176,10 @@ export function clientScripts(): AstroIntegration {
         };
         updateConfig({ vite: { plugins: [plugin, teamCalculatorsVite()] } });
       },
-      'astro:build:done': ({ dir }) => {
+      'astro:build:done': async ({ dir }) => {
         if (!built) return;
         const out = join(fileURLToPath(dir), FOLDER);
-        for (const f of built.outputs) {
+        for (const f of (await built).outputs) {
           const target = join(out, relative(join(root, FOLDER), f.path));
           mkdirSync(dirname(target), { recursive: true });
           writeFileSync(target, f.contents);
