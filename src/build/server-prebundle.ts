@@ -18,16 +18,16 @@
  * does for Vite. Only `astro build` uses this; dev and the tests keep Vite's module graph.
  */
 import { mkdirSync, readFileSync, readdirSync, rmSync, statSync } from 'node:fs';
-import { dirname, join, relative, resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import type { AstroIntegration } from 'astro';
 import { build, type Plugin as EsbuildPlugin } from 'esbuild';
 import type { Plugin as VitePlugin } from 'vite';
-import { ENTRY_POINTS, TOOL_ROOT, teamCalculatorFiles } from '../team/entryPoints.ts';
+import { ENTRY_POINTS, TOOL_ROOT } from '../team/entryPoints.ts';
+import { serverSlot } from './team-calculators.ts';
 
 const SLOT = resolve(TOOL_ROOT, 'src', 'calculators', 'teamSlot.ts');
 let serial = 0;
-const contentDir = () => resolve(TOOL_ROOT, process.env.DAMPBOOK_CONTENT ?? 'content');
 
 /** Relative and bare module specifiers a source file imports (static, re-export, dynamic, bare `import '…'`). */
 export function importSpecifiers(text: string): string[] {
@@ -72,20 +72,7 @@ function teamSlotEsbuild(): EsbuildPlugin {
     name: 'dampbook-server-team-slot',
     setup(b) {
       b.onResolve({ filter: /^dampbook\/(calculator|core)$/ }, (a) => ({ path: ENTRY_POINTS[a.path]! }));
-      b.onLoad({ filter: /teamSlot\.ts$/ }, (a) => {
-        if (resolve(a.path) !== SLOT) return undefined;
-        const dir = contentDir();
-        const files = teamCalculatorFiles(dir);
-        return {
-          loader: 'ts',
-          resolveDir: dirname(SLOT),
-          contents: [
-            ...files.map((f, i) => `import d${i} from ${JSON.stringify(f)};`),
-            `export const teamDefinitions = [${files.map((f, i) => `{ file: ${JSON.stringify(relative(dir, f))}, definition: d${i} }`).join(', ')}];`,
-            'export const loadTeamDefinitions = async () => [];',
-          ].join('\n'),
-        };
-      });
+      b.onLoad({ filter: /teamSlot\.ts$/ }, (a) => (resolve(a.path) === SLOT ? { loader: 'ts', resolveDir: dirname(SLOT), contents: serverSlot() } : undefined));
     },
   };
 }

@@ -15,8 +15,8 @@ import { ENTRY_POINTS, TOOL_ROOT, teamCalculatorFiles } from '../team/entryPoint
 const SLOT = resolve(TOOL_ROOT, 'src', 'calculators', 'teamSlot.ts');
 const contentDir = () => resolve(TOOL_ROOT, process.env.DAMPBOOK_CONTENT ?? 'content');
 
-/** The slot's text with the team's files imported eagerly (server side). */
-function serverSlot(): string {
+/** The slot's text with the team's files imported eagerly (server side; also the server-pass bundle, server-prebundle.ts). */
+export function serverSlot(): string {
   const dir = contentDir();
   const files = teamCalculatorFiles(dir);
   return [
