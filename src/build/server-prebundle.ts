@@ -148,7 +148,7 @@ export function serverModules(): AstroIntegration {
         process.once('exit', remove);
         updateConfig({ vite: { plugins: [serverBundlePlugin(pending)] } });
       },
-      'astro:build:done': async () => { await pending?.catch(() => undefined); remove(); },
+      'astro:build:done': async () => { await pending?.catch(() => undefined); remove(); process.off('exit', remove); },
     },
   };
 }
