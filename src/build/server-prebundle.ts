@@ -24,16 +24,11 @@ import type { AstroIntegration } from 'astro';
 import { build, type Plugin as EsbuildPlugin } from 'esbuild';
 import type { Plugin as VitePlugin } from 'vite';
 import { ENTRY_POINTS, TOOL_ROOT } from '../team/entryPoints.ts';
+import { importSpecifiers } from './importSpecifiers.ts';
 import { serverSlot } from './team-calculators.ts';
 
 const SLOT = resolve(TOOL_ROOT, 'src', 'calculators', 'teamSlot.ts');
 let serial = 0;
-
-/** Relative and bare module specifiers a source file imports (static, re-export, dynamic, bare `import '…'`). */
-export function importSpecifiers(text: string): string[] {
-  return [...text.matchAll(/(?:import|export)\s[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)|^import\s+['"]([^'"]+)['"]/gm)]
-    .map((m) => m[1] ?? m[2] ?? m[3]!);
-}
 
 /** True when a module itself needs Vite or Astro (their virtual modules, components, CSS or import.meta). */
 export function needsVite(text: string, specifiers: readonly string[]): boolean {

@@ -6,16 +6,9 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { dirname, join, relative, resolve, sep } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { importSpecifiers as specifiers } from '../../src/build/importSpecifiers.ts';
 
 const SRC = resolve('src');
-
-/** Every module specifier a file imports or re-exports, static or dynamic. */
-export function specifiers(source: string): string[] {
-  const out: string[] = [];
-  const re = /(?:^|[\s;])(?:import|export)\s[^'"`;]*?from\s*['"]([^'"]+)['"]|(?:^|[\s;(])import\s*\(\s*['"]([^'"]+)['"]\s*\)|(?:^|[\s;])import\s*['"]([^'"]+)['"]/gm;
-  for (const m of source.matchAll(re)) out.push((m[1] ?? m[2] ?? m[3])!);
-  return out;
-}
 
 function files(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {

@@ -7,7 +7,8 @@
  */
 import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { bundlableModules, importSpecifiers, needsVite } from '../../src/build/server-prebundle.ts';
+import { importSpecifiers } from '../../src/build/importSpecifiers.ts';
+import { bundlableModules, needsVite } from '../../src/build/server-prebundle.ts';
 
 const rel = (files: string[]) => files.map((f) => f.slice(resolve('src').length + 1));
 

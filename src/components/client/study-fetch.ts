@@ -73,13 +73,14 @@ function stepCalculators(text: string | null | undefined): string[] {
   }
 }
 
+/** Whether a study opens on this page, decided once (the first script and the calculator element both ask). */
+let opening: boolean | undefined;
+
 /**
  * True when a study will open on this page (named in the address, or kept in this browser); starts
  * fetching the named one and starts loading its step calculators as soon as their ids are known,
  * so they load with the page instead of after the study code has read and checked the study.
  */
-let opening: boolean | undefined;
-
 export function openingStudy(): boolean {
   opening ??= startOpening();
   return opening;

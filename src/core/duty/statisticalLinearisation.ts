@@ -55,7 +55,8 @@ export function statisticalLinearisation(C: number, alpha: number, sigmaVOf: (c:
 /**
  * Where the iteration starts: the equivalent damping c = C·K(α)·σ_v^(α−1) at σ_v = 0.3 m/s, a
  * typical RMS damper velocity of a vehicle suspension on a rough road (common practice, no source).
- * @example linearisationStart(800, 1) // 800 (a linear law is its own equivalent)
+ * @example linearisationStart(800, 1) // 800 to rounding (a linear law is its own equivalent)
+ * @example linearisationStart(800, 0.5) // 1256.17 = 800 · κ(0.5) / √0.3, κ(0.5) = 0.86004
  */
 export function linearisationStart(C: number, alpha: number): number {
   return C * gaussianMomentFactor(alpha) * 0.3 ** (alpha - 1);

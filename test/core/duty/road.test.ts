@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   roadDuty, roadRoughness, roadDisplacementPsd, roadVelocityWhiteLevel, quarterCarRandom, quarterCarWhiteVariances,
-  spectralIntegral, whiteRoadDamperPower, ISO_8608_CLASSES,
+  spectralIntegral, whiteRoadDamperPower, ISO_8608_CLASSES, linearisationStart,
 } from '../../../src/core/duty/index.ts';
 import { gaussianMeanPower, gaussianMomentFactor } from '../../../src/core/dampers/index.ts';
 import { InputRangeError } from '../../../src/core/errors.ts';
@@ -144,3 +144,14 @@ describe('quarter car on a random road', () => {
     expect(() => roadDuty(TW210, { Gd0: 256e-6, w: 1, V: 20 }, { kind: 'linear', c: 980 })).toThrow(/'w'/);
   });
 });
+
+describe('statistical linearisation, starting point', () => {
+  // c_eq = C·κ(α)·σ_v^(α−1) for F = C|v|^α sgn v under Gaussian velocity (Roberts & Spanos, Random
+  // Vibration and Statistical Linearization, 2003, ch. 5, power-law damping; from memory), taken at
+  // σ_v = 0.3 m/s; κ(0.5) = 0.86004 from Abramowitz & Stegun §26.2 (scipy), as in energyPerCycle.test.ts.
+  it('a linear law starts at its own coefficient', () =>
+    expectClose({ label: 'c0', computed: linearisationStart(800, 1), expected: 800, tol: 1e-12, why: 'κ(1) = 1 through the Γ function, to rounding' }));
+  it('C = 800, α = 0.5 → 800 · 0.86004 / √0.3 = 1256.17 N·s/m', () =>
+    expectClose({ label: 'c0', computed: linearisationStart(800, 0.5), expected: (800 * 0.86004) / Math.sqrt(0.3), tol: 1e-5, why: 'κ to 6 s.f.' }));
+});
+
