@@ -120,3 +120,22 @@ describe('what a link carries', () => {
     expect(await page.inputValue('input[name="Ff"]')).not.toBe('');
   });
 });
+
+describe('hand-off links keep the unit system', () => {
+  // 1 Btu/(h·°F) = 0.29307107 W × 1.8 /K = 0.527528 W/K (NIST SP 811, 2008 ed., App. B.9: Btu_IT/h and °F interval)
+  const W_PER_K_PER_BTU_H_F = 0.29307107 * 1.8;
+  it('a reader in US units follows "Warm-up with this UA" and lands in US units, with the same UA', async () => {
+    const page = await open('thermal/steady-temperature/?units=US');
+    const link = page.locator('a[data-feed-out="UA"]', { hasText: 'Warm-up' });
+    const href = new URL((await link.getAttribute('href'))!, site.server.origin);
+    expect(href.searchParams.get('units')).toBe('US');
+    const uaSI = Number(href.searchParams.get('UA')); // the value travels in SI (W/K)
+    const shown = Number(await out(page, 'UA')); // Btu/(h·°F), 4 significant digits
+    expect(Math.abs(uaSI / W_PER_K_PER_BTU_H_F - shown) / shown).toBeLessThan(5e-4);
+    await link.click();
+    await page.waitForSelector('db-calculator[data-ready]');
+    expect(await page.locator('input[name="units"][value="US"]').isChecked()).toBe(true);
+    expect(await page.inputValue('select[name="UA.unit"]')).toBe('Btu/hF');
+    expect(Math.abs(Number(await page.inputValue('input[name="UA"]')) * W_PER_K_PER_BTU_H_F - uaSI) / uaSI).toBeLessThan(1e-9);
+  });
+});

@@ -514,7 +514,11 @@ export class CalculatorElement extends HTMLElement {
     if (absent) absent.textContent = absentOutputsLine(this.calc!, outputs);
   }
 
-  /** Rewrites each feed link from the new result (feedQuery); hides it while a source is absent. */
+  /**
+   * Rewrites each feed link from the new result (feedQuery); hides it while a source is absent.
+   * The values travel in SI; the reader's unit system travels with them, so a reader in US units
+   * does not land on the next page in SI.
+   */
   private renderFeeds(result: PageResult): void {
     for (const a of this.querySelectorAll<HTMLAnchorElement>('a[data-feed-out]')) {
       const out = a.dataset.feedOut ?? '';
@@ -523,7 +527,7 @@ export class CalculatorElement extends HTMLElement {
       const base = this.feedBase(a);
       a.hidden = query === undefined;
       if (query === undefined) continue;
-      a.href = `${base}?${query}`;
+      a.href = `${base}?${query}${this.system === 'US' ? '&units=US' : ''}`;
       a.removeAttribute('aria-disabled');
       a.removeAttribute('title');
     }
