@@ -26,7 +26,17 @@ export const CLIENT_ENTRIES = {
   studyEarly: 'src/components/client/study-early.ts',
 } as const;
 
-export type ClientEntry = keyof typeof CLIENT_ENTRIES;
+/**
+ * Classic scripts: run the moment the parser reaches them, before any module script (which waits
+ * for the parser to yield). Each is one self-contained file; keep them tiny, they hold up parsing.
+ */
+export const CLASSIC_ENTRIES = {
+  studyHint: 'src/components/client/study-hint.ts',
+} as const;
+
+export type ClientEntry = keyof typeof CLIENT_ENTRIES | keyof typeof CLASSIC_ENTRIES;
+
+const ALL_ENTRIES: Record<ClientEntry, string> = { ...CLIENT_ENTRIES, ...CLASSIC_ENTRIES };
 
 /**
  * Lazy modules whose whole chunk graph a page announces with `<link rel="modulepreload">` before
@@ -44,14 +54,14 @@ const FOLDER = '_db';
 const VIRTUAL = 'virtual:dampbook/client';
 const RESOLVED = `\0${VIRTUAL}`;
 
-function options(root: string, hashed: boolean): BuildOptions {
+function options(root: string, hashed: boolean, classic = false): BuildOptions {
   return {
     absWorkingDir: root,
-    entryPoints: Object.values(CLIENT_ENTRIES),
+    entryPoints: Object.values(classic ? CLASSIC_ENTRIES : CLIENT_ENTRIES),
     outdir: join(root, FOLDER), // never written: write is false; names the output paths
     bundle: true,
-    splitting: true,
-    format: 'esm',
+    splitting: !classic,
+    format: classic ? 'iife' : 'esm',
     target: 'es2022',
     platform: 'browser',
     minify: hashed,
@@ -68,11 +78,11 @@ function options(root: string, hashed: boolean): BuildOptions {
 }
 
 /** Maps each entry to its output file name (e.g. calculator → "calculator-element.AB12CD.js"). */
-function entryFiles(root: string, meta: { outputs: Record<string, { entryPoint?: string }> }): Record<ClientEntry, string> {
+function entryFiles(root: string, ...metas: { outputs: Record<string, { entryPoint?: string }> }[]): Record<ClientEntry, string> {
   const byEntry = new Map<string, string>();
-  for (const [out, info] of Object.entries(meta.outputs)) if (info.entryPoint) byEntry.set(resolve(root, info.entryPoint), out);
+  for (const meta of metas) for (const [out, info] of Object.entries(meta.outputs)) if (info.entryPoint) byEntry.set(resolve(root, info.entryPoint), out);
   const files = {} as Record<ClientEntry, string>;
-  for (const [name, src] of Object.entries(CLIENT_ENTRIES) as [ClientEntry, string][]) {
+  for (const [name, src] of Object.entries(ALL_ENTRIES) as [ClientEntry, string][]) {
     const out = byEntry.get(resolve(root, src));
     if (!out) throw new Error(`client scripts: esbuild produced no output for ${src}`);
     files[name] = out.split('/').pop()!;
@@ -138,8 +148,8 @@ export function clientScripts(): AstroIntegration {
   type Built = { files: Record<ClientEntry, string>; preloads: Record<LazyPreload, string[]>; calculators: Record<string, string[]>; outputs: OutputFile[] };
   /** The bundle, started at setup and awaited where it is needed: it runs while Astro syncs the content. */
   let built: Promise<Built> | undefined;
-  let dev: BuildContext | undefined;
-  const devFiles = Object.fromEntries(Object.entries(CLIENT_ENTRIES).map(([k, src]) => [k, `${src.split('/').pop()!.replace(/\.ts$/, '')}.js`])) as Record<ClientEntry, string>;
+  let dev: BuildContext[] | undefined;
+  const devFiles = Object.fromEntries(Object.entries(ALL_ENTRIES).map(([k, src]) => [k, `${src.split('/').pop()!.replace(/\.ts$/, '')}.js`])) as Record<ClientEntry, string>;
 
   return {
     name: 'dampbook:client-scripts',
@@ -148,7 +158,12 @@ export function clientScripts(): AstroIntegration {
         root = fileURLToPath(config.root);
         base = config.base;
         if (command === 'build') {
-          built = build(options(root, true)).then((result) => ({ files: entryFiles(root, result.metafile!), preloads: preloadFiles(root, result.metafile as Meta), calculators: calculatorFiles(root, result.metafile as Meta), outputs: result.outputFiles! }));
+          built = Promise.all([build(options(root, true)), build(options(root, true, true))]).then(([result, classic]) => ({
+            files: entryFiles(root, result.metafile!, classic.metafile!),
+            preloads: preloadFiles(root, result.metafile as Meta),
+            calculators: calculatorFiles(root, result.metafile as Meta),
+            outputs: [...result.outputFiles!, ...classic.outputFiles!],
+          }));
           built.catch(() => undefined); // the failure surfaces where the build awaits it
         }
         const plugin: Plugin = {
@@ -165,8 +180,8 @@ export function clientScripts(): AstroIntegration {
             server.middlewares.use(async (req, res, next) => {
               const path = (req.url ?? '').split('?')[0]!;
               if (!path.startsWith(prefix)) { next(); return; }
-              dev ??= await context(options(root, false));
-              const out = (await dev.rebuild()).outputFiles ?? [];
+              dev ??= await Promise.all([context(options(root, false)), context(options(root, false, true))]);
+              const out = (await Promise.all(dev.map((c) => c.rebuild()))).flatMap((r) => r.outputFiles ?? []);
               const file = out.find((f) => f.path.endsWith(`/${path.slice(prefix.length)}`));
               if (!file) { res.statusCode = 404; res.end('not found'); return; }
               res.setHeader('Content-Type', 'text/javascript; charset=utf-8');
@@ -185,7 +200,7 @@ export function clientScripts(): AstroIntegration {
           writeFileSync(target, f.contents);
         }
       },
-      'astro:server:done': async () => { await dev?.dispose(); dev = undefined; },
+      'astro:server:done': async () => { await Promise.all((dev ?? []).map((c) => c.dispose())); dev = undefined; },
     },
   };
 }

@@ -22,3 +22,11 @@ export function readStudies(content = process.env.DAMPBOOK_CONTENT ?? './content
     return { id: f.replace(/\.json$/, ''), study: p.study };
   });
 }
+
+let stepCalculators: Record<string, string[]> | undefined;
+
+/** Each built-in study's step calculators, by study id (read once per build: every calculator page carries it as a loading hint). */
+export function builtInStepCalculators(): Record<string, string[]> {
+  stepCalculators ??= Object.fromEntries(readStudies().map((f) => [f.id, [...new Set(f.study.steps.map((s) => s.calculator))]]));
+  return stepCalculators;
+}

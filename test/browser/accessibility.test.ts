@@ -6,7 +6,7 @@
 import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { serveStatic, type Served } from '../../src/server/staticServer.ts';
-import { launch, watchedPage } from '../helpers/browser.ts';
+import { launch, watchedPage, calculatorsReady } from '../helpers/browser.ts';
 import { calculatorPages } from '../helpers/calcPages.ts';
 import { ROOT_BUILD } from '../helpers/site.ts';
 
@@ -20,7 +20,7 @@ const pages = calculatorPages(ROOT_BUILD, '/');
 async function open(path: string): Promise<Page> {
   const w = await watchedPage(browser, server.origin);
   await w.page.goto(`${server.origin}${path}`);
-  await w.page.waitForFunction(() => [...document.querySelectorAll('db-calculator')].every((c) => c.hasAttribute('data-ready')));
+  await calculatorsReady(w.page);
   return w.page;
 }
 

@@ -9,7 +9,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { watchedPage } from '../helpers/browser.ts';
+import { watchedPage, calculatorsReady } from '../helpers/browser.ts';
 import { serveBuiltSite } from '../helpers/servedSite.ts';
 
 const site = serveBuiltSite();
@@ -132,8 +132,8 @@ describe('hand-off links keep the unit system', () => {
     const uaSI = Number(href.searchParams.get('UA')); // the value travels in SI (W/K)
     const shown = Number(await out(page, 'UA')); // Btu/(h·°F), 4 significant digits
     expect(Math.abs(uaSI / W_PER_K_PER_BTU_H_F - shown) / shown).toBeLessThan(5e-4);
-    await link.click();
-    await page.waitForSelector('db-calculator[data-ready]');
+    await Promise.all([page.waitForURL(/\/thermal\/warm-up\//), link.click()]);
+    await calculatorsReady(page);
     expect(await page.locator('input[name="units"][value="US"]').isChecked()).toBe(true);
     expect(await page.inputValue('select[name="UA.unit"]')).toBe('Btu/hF');
     expect(Math.abs(Number(await page.inputValue('input[name="UA"]')) * W_PER_K_PER_BTU_H_F - uaSI) / uaSI).toBeLessThan(1e-9);

@@ -6,7 +6,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { serveStatic, type Served } from '../../src/server/staticServer.ts';
-import { launch, watchedPage } from '../helpers/browser.ts';
+import { launch, watchedPage, calculatorsReady } from '../helpers/browser.ts';
 import { calculatorPages } from '../helpers/calcPages.ts';
 import { ROOT_BUILD } from '../helpers/site.ts';
 
@@ -33,7 +33,7 @@ describe('garbage in any calculator field', () => {
       const w = await watchedPage(browser, server.origin);
       const { page } = w;
       await page.goto(`${server.origin}${path}`);
-      await page.waitForFunction(() => [...document.querySelectorAll('db-calculator')].every((c) => c.hasAttribute('data-ready')));
+      await calculatorsReady(page);
       const before = new Map<string, string>();
       for (const id of calcs) before.set(id, await outputs(page, id));
       for (const id of new Set(calcs)) {

@@ -147,4 +147,30 @@ describe('a study open in the handbook pages', () => {
     expect(w.pageErrors).toEqual([]);
     await page.context().close();
   });
+
+  it("asks for every step calculator's chunks while the page is read, before any module runs (named and kept study)", async () => {
+    const w = await watchedPage(site.browser, site.server.origin);
+    const page = await visit(w, `${PAGE_URL['road-power']}?study=${STUDY}`, 'road-power');
+    // [rule] the build's list of each built-in study's calculators is the study files' own
+    const steps = await page.evaluate(() => JSON.parse(document.getElementById('db-study-steps')!.textContent!) as Record<string, string[]>);
+    for (const f of readStudies()) expect(steps[f.id], f.id).toEqual([...new Set(f.study.steps.map((s) => s.calculator))]);
+    const asked = () => page.evaluate((ids) => {
+      const map = JSON.parse(document.getElementById('db-calculator-chunks')!.textContent!) as Record<string, string[]>;
+      const hinted = new Set([...document.head.querySelectorAll<HTMLLinkElement>('link[rel="modulepreload"]')].map((l) => new URL(l.href).pathname));
+      const early = performance.getEntriesByName('db-study-early')[0]?.startTime ?? -1;
+      const started = new Map(performance.getEntriesByType('resource').map((e) => [new URL(e.name).pathname, e.startTime]));
+      const chunks = [...new Set(ids.flatMap((id) => map[id] ?? []))];
+      return { chunks: chunks.length, missing: chunks.filter((c) => !hinted.has(c)), late: chunks.filter((c) => !((started.get(c) ?? Infinity) < early)) };
+    }, steps[STUDY]!);
+    const named = await asked();
+    expect(named.chunks).toBeGreaterThan(0);
+    expect(named.missing).toEqual([]);
+    // the classic hint runs where the parser meets it, before the study-early module's tag
+    expect(named.late).toEqual([]);
+    // the next step's page, the study kept in this browser: hinted from the kept text
+    await visit(w, PAGE_URL['warm-up']!, 'warm-up');
+    expect((await asked()).missing).toEqual([]);
+    expect(w.consoleErrors).toEqual([]);
+    await page.context().close();
+  });
 });

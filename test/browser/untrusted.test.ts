@@ -7,7 +7,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { getCalculator } from '../../src/calculators/registry.ts';
 import { serveStatic, type Served } from '../../src/server/staticServer.ts';
-import { launch, watchedPage, type Watched } from '../helpers/browser.ts';
+import { launch, watchedPage, type Watched, calculatorsReady } from '../helpers/browser.ts';
 import { calculatorPages } from '../helpers/calcPages.ts';
 import { fileFor } from '../helpers/crawl.ts';
 import { ROOT_BUILD } from '../helpers/site.ts';
@@ -40,7 +40,7 @@ function clean(w: Watched): void {
 }
 
 async function ready(page: Page): Promise<void> {
-  await page.waitForFunction(() => [...document.querySelectorAll('db-calculator')].every((c) => c.hasAttribute('data-ready')));
+  await calculatorsReady(page);
 }
 
 const pages = calculatorPages(ROOT_BUILD, '/');
@@ -215,7 +215,7 @@ describe('text filled from the page address (fromUrl)', () => {
     const href = await link.getAttribute('href');
     expect(new URL(href!, server.origin).searchParams.get('power')).toBe('profile');
     const P = (await page.locator('tr[data-out="P"] .value').textContent())!;
-    await link.click();
+    await Promise.all([page.waitForURL(/\/thermal\/warm-up\//), link.click()]);
     await ready(page);
     expect(await page.locator('.field[data-key="power"] select').inputValue()).toBe('profile');
     await expect.poll(() => page.locator('tr[data-out="Pmean"] .value').textContent()).toBe(P);

@@ -29,3 +29,12 @@ export async function watchedPage(browser: Browser, origin: string, viewport = {
   page.on('dialog', (d) => { w.dialogs.push(d.message()); void d.dismiss(); });
   return w;
 }
+
+/**
+ * Waits until the page is parsed and every calculator on it shows its first result. The parse
+ * matters after a click: the next page can be caught half-read (a classic script holds up the
+ * parser), with no calculator element yet, and "every calculator ready" is then trivially true.
+ */
+export async function calculatorsReady(page: Page): Promise<void> {
+  await page.waitForFunction(() => document.readyState !== 'loading' && [...document.querySelectorAll('db-calculator')].every((c) => c.hasAttribute('data-ready')));
+}

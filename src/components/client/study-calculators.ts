@@ -7,7 +7,7 @@ import { loadCalculator } from '../../calculators/loaders.ts';
 import type { CalculatorDefinition } from '../../calculators/types.ts';
 import type { CalculatorLookup } from '../../studies/lookup.ts';
 import type { Study } from '../../studies/schema.ts';
-import { announceChunks } from './study-fetch.ts';
+import { announceChunks } from './chunk-hints.ts';
 
 export class LoadedCalculators {
   private readonly defs = new Map<string, CalculatorDefinition>();

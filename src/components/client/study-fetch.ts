@@ -6,6 +6,7 @@
  */
 import { loadCalculator } from '../../calculators/loaders.ts';
 import { STUDY_STORE } from '../../studies/storeKey.ts';
+import { announceChunks, stepCalculators } from './chunk-hints.ts';
 
 /** True when this browser keeps an open study (not yet validated). */
 export function storedStudy(): boolean {
@@ -25,52 +26,10 @@ export function fetchNamedStudy(): Promise<{ id: string; text: string | undefine
   return started;
 }
 
-/** Build-time map of each calculator's chunks (src/build/client-scripts.ts); empty in dev. */
-function chunkMap(): Record<string, unknown> {
-  try {
-    const v: unknown = JSON.parse(document.getElementById('db-calculator-chunks')?.textContent ?? '{}');
-    return v && typeof v === 'object' ? (v as Record<string, unknown>) : {};
-  } catch {
-    return {};
-  }
-}
-
-const announced = new Set<string>();
-
-/**
- * Asks the browser for every chunk of these calculators at once. Only a hint: the imports load
- * them anyway, but a chunk found level by level costs a round trip per level.
- */
-export function announceChunks(ids: Iterable<string>): void {
-  const map = chunkMap();
-  for (const id of ids) {
-    const urls = Object.hasOwn(map, id) ? map[id] : undefined;
-    for (const href of Array.isArray(urls) ? urls : []) {
-      if (typeof href !== 'string' || announced.has(href) || !href.startsWith('/')) continue;
-      announced.add(href);
-      const link = document.createElement('link');
-      link.rel = 'modulepreload';
-      link.href = href;
-      document.head.append(link);
-    }
-  }
-}
-
 /** Starts loading these calculators now (their chunks announced at once); the study code finds them loaded. */
 function warm(ids: readonly string[]): void {
   announceChunks(ids);
   for (const id of new Set(ids)) void loadCalculator(id).catch(() => undefined);
-}
-
-/** The step calculators a study text names, read without validating it (a loading hint only). */
-function stepCalculators(text: string | null | undefined): string[] {
-  try {
-    const v: unknown = JSON.parse(text ?? '');
-    const steps: unknown = v && typeof v === 'object' ? (v as { steps?: unknown }).steps : undefined;
-    return Array.isArray(steps) ? steps.map((s: unknown) => (s && typeof s === 'object' ? (s as { calculator?: unknown }).calculator : undefined)).filter((c): c is string => typeof c === 'string') : [];
-  } catch {
-    return [];
-  }
 }
 
 /** Whether a study opens on this page, decided once (the first script and the calculator element both ask). */

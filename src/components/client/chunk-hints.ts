@@ -1,0 +1,55 @@
+/**
+ * Loading hints for a study's step calculators, shared by the classic script that runs while the
+ * page is read (study-hint.ts) and the study code (study-fetch.ts). Depends on nothing, so the
+ * classic script stays a few hundred bytes.
+ */
+
+/** A JSON object from a data block of the page (`<script type="application/json" id=…>`); {} when absent or damaged. */
+export function pageData(id: string): Record<string, unknown> {
+  try {
+    const v: unknown = JSON.parse(document.getElementById(id)?.textContent ?? '{}');
+    return v && typeof v === 'object' ? (v as Record<string, unknown>) : {};
+  } catch {
+    return {};
+  }
+}
+
+/** The step calculators a study text names, read without validating it (a loading hint only). */
+export function stepCalculators(text: string | null | undefined): string[] {
+  try {
+    const v: unknown = JSON.parse(text ?? '');
+    const steps: unknown = v && typeof v === 'object' ? (v as { steps?: unknown }).steps : undefined;
+    return Array.isArray(steps) ? steps.map((s: unknown) => (s && typeof s === 'object' ? (s as { calculator?: unknown }).calculator : undefined)).filter((c): c is string => typeof c === 'string') : [];
+  } catch {
+    return [];
+  }
+}
+
+const announced = new Set<string>();
+
+/**
+ * Adds a `<link rel=modulepreload>` to the head once per address, at low priority: these chunks
+ * are needed only once the page is parsed, and on an HTTP/1.1 server (six connections) two dozen
+ * of them at normal priority held up the page's own scripts by 0.2 s.
+ */
+function preloadModule(href: string): void {
+  if (announced.has(href) || document.querySelector(`link[rel="modulepreload"][href="${CSS.escape(href)}"]`)) return;
+  announced.add(href);
+  const link = document.createElement('link');
+  link.rel = 'modulepreload';
+  link.href = href;
+  document.head.append(link);
+}
+
+/**
+ * Asks the browser for every chunk of these calculators at once, from the build's map of each
+ * calculator's chunks (src/build/client-scripts.ts; empty in dev). Only a hint: the imports load
+ * them anyway, but a chunk found level by level costs a round trip per level.
+ */
+export function announceChunks(ids: Iterable<string>): void {
+  const map = pageData('db-calculator-chunks');
+  for (const id of ids) {
+    const urls = Object.hasOwn(map, id) ? map[id] : undefined;
+    for (const href of Array.isArray(urls) ? urls : []) if (typeof href === 'string' && href.startsWith('/')) preloadModule(href);
+  }
+}
