@@ -72,7 +72,8 @@ export function renderStudyBar(bar: HTMLElement, s: BarState): void {
     const ran = new Map((s.run?.steps ?? []).map((r) => [r.id, r]));
     const list = el('ol', { className: 'study-steplist' });
     for (const step of st.steps) {
-      const url = s.pageUrls[step.page];
+      // own keys only: a step page named like an Object member ("constructor") has no address
+      const url = Object.hasOwn(s.pageUrls, step.page) && typeof s.pageUrls[step.page] === 'string' ? s.pageUrls[step.page] : undefined;
       const name = step.title ?? ran.get(step.id)?.title ?? step.calculator;
       const li = el('li');
       li.dataset.step = step.id;

@@ -15,6 +15,7 @@ import type { CalculatorElement } from './calculator-element.ts';
 import { closeOpenStudy, readOpenStudy, saveOpenStudy } from './study-store.ts';
 import { renderStudyBar } from './study-bar.ts';
 import { fetchNamedStudy } from './study-fetch.ts';
+import { pageData } from './chunk-hints.ts';
 import { LoadedCalculators } from './study-calculators.ts';
 
 // `npm run bench` reads these marks: when the study code ran, read the study, loaded its calculators
@@ -236,15 +237,8 @@ class StudySession {
   }
 }
 
-function pageUrls(): Readonly<Record<string, string>> {
-  const el = document.getElementById('db-page-urls');
-  try {
-    const v: unknown = JSON.parse(el?.textContent ?? '{}');
-    return v && typeof v === 'object' ? (v as Record<string, string>) : {};
-  } catch {
-    return {};
-  }
-}
+/** Page id → address (a build-time data block; its values are checked where they are used). */
+const pageUrls = (): Readonly<Record<string, string>> => pageData('db-page-urls') as Record<string, string>;
 
 let session: Promise<StudySession> | undefined;
 
