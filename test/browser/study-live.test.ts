@@ -169,7 +169,9 @@ describe('a study open in the handbook pages', () => {
     expect(named.late).toEqual([]);
     // the next step's page, the study kept in this browser: hinted from the kept text
     await visit(w, PAGE_URL['warm-up']!, 'warm-up');
-    expect((await asked()).missing).toEqual([]);
+    const kept = await asked();
+    expect(kept.missing).toEqual([]);
+    expect(kept.late).toEqual([]);
     expect(w.consoleErrors).toEqual([]);
     await page.context().close();
   });

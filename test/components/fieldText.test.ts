@@ -10,7 +10,7 @@ import { calculators } from '../../src/calculators/registry.ts';
 import { evaluate } from '../../src/calculators/evaluate.ts';
 import { hasQuantityToken, q } from '../../src/calculators/quantityText.ts';
 import { DECIMAL_COMMA, parseTyped, readField, splitTyped, textSum } from '../../src/components/render/fieldState.ts';
-import { quantityText } from '../../src/components/render/format.ts';
+import { quantityText, scriptJson } from '../../src/components/render/format.ts';
 
 describe('typed numbers', () => {
   it('takes a decimal point and refuses a decimal comma with the rule', () => {
@@ -51,5 +51,16 @@ describe('quantities in sentences', () => {
         expect(hasQuantityToken(quantityText(spec.summary, sys)), `${c.id}/${spec.id}`).toBe(false);
       }
     }
+  });
+});
+
+describe('JSON data blocks', () => {
+  // HTML Living Standard, "Restrictions for contents of script elements": the text may not contain
+  // "</script"; JSON (RFC 8259 §7) reads the escape \u003c back as "<"
+  it('never closes its script block early and reads back to the same value', () => {
+    const v = { title: 'a </script><script>alert(1)</script> b', list: ['<!--', 1.5] };
+    const text = scriptJson(v);
+    expect(text).not.toMatch(/</);
+    expect(JSON.parse(text)).toEqual(v);
   });
 });

@@ -1,7 +1,7 @@
 /**
- * Loading hints for a study's step calculators, shared by the classic script that runs while the
- * page is read (study-hint.ts) and the study code (study-fetch.ts). Depends on nothing, so the
- * classic script stays a few hundred bytes.
+ * The page's JSON data blocks and the loading hints for a study's step calculators, shared by the
+ * classic script that runs while the page is read (study-hint.ts) and the study code
+ * (study-fetch.ts, study-link.ts). Depends on nothing, so the classic script stays small.
  */
 
 /** A JSON object from a data block of the page (`<script type="application/json" id=…>`); {} when absent or damaged. */
@@ -25,16 +25,13 @@ export function stepCalculators(text: string | null | undefined): string[] {
   }
 }
 
-const announced = new Set<string>();
-
 /**
- * Adds a `<link rel=modulepreload>` to the head once per address, at low priority: these chunks
- * are needed only once the page is parsed, and on an HTTP/1.1 server (six connections) two dozen
- * of them at normal priority held up the page's own scripts by 0.2 s.
+ * Adds a `<link rel=modulepreload>` to the head once per address. The head is the record of what
+ * was asked for: the classic script and the modules are separate bundles with no shared state.
+ * (Normal priority on purpose: at low priority the early study session waited up to 0.26 s.)
  */
 function preloadModule(href: string): void {
-  if (announced.has(href) || document.querySelector(`link[rel="modulepreload"][href="${CSS.escape(href)}"]`)) return;
-  announced.add(href);
+  if (document.querySelector(`link[rel="modulepreload"][href="${CSS.escape(href)}"]`)) return;
   const link = document.createElement('link');
   link.rel = 'modulepreload';
   link.href = href;

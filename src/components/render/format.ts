@@ -44,6 +44,14 @@ export function escapeHtml(s: string): string {
   return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 }
 
+/**
+ * A value as JSON for a page's data block (`<script type="application/json">`): `<` is escaped so
+ * no text inside can close the block early; JSON.parse reads `\u003c` back as `<`.
+ */
+export function scriptJson(value: unknown): string {
+  return JSON.stringify(value).replace(/</g, '\\u003c');
+}
+
 /** A calculator's sentence (chart summary) with its quantities in the reader's unit system. */
 export function quantityText(text: string, system: UnitSystem): string {
   return renderQuantities(text, (v, kind, digits) => {
