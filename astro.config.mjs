@@ -6,6 +6,7 @@ import remarkMath from 'remark-math';
 import rehypeKatex from 'rehype-katex';
 import { clientScripts } from './src/build/client-scripts.ts';
 import { serverModules } from './src/build/server-prebundle.ts';
+import { searchIndex } from './src/build/search-index.ts';
 
 const base = process.env.DAMPBOOK_BASE ?? '/';
 
@@ -37,7 +38,8 @@ export default defineConfig({
   // optimize: without it, math-heavy sites exhaust the heap (hundreds of KaTeX trees per page)
   // clientScripts: browser code is bundled by esbuild in one pass (src/build/client-scripts.ts)
   // serverModules: the pages' own TypeScript too, for the server pass (src/build/server-prebundle.ts)
-  integrations: [mdx({ optimize: true }), clientScripts(), serverModules()],
+  // searchIndex: the offline search index, fed each page as it is rendered (src/build/search-index.ts)
+  integrations: [mdx({ optimize: true }), clientScripts(), serverModules(), searchIndex()],
   devToolbar: { enabled: false },
   vite: {
     // never inline scripts or assets: the Content-Security-Policy allows only same-origin files.

@@ -1,10 +1,12 @@
 /**
  * Build scaling: `npm run bench:build -- --pages N` generates N math-heavy pages (each ~1,500
  * words, 10 display and 20 inline equations, one sdof calculator), builds them with Dampbook
- * (astro build + search index, as `npm run build` does) and the same pages without calculators
+ * (`npm run build`: astro build, search index included) and the same pages without calculators
  * on a plain Astro + MDX + KaTeX project in the same run, and prints as its LAST line
  * {"pages", "dampbookSeconds", "baselineSeconds", "ratio", "peakRssMB", "searchIndexSeconds"}.
- * Peak memory is getrusage maxrss of each build process (exact, no sampling). `--repeat R`
+ * Peak memory is getrusage maxrss of each build process (exact, no sampling; Pagefind's service
+ * is a child process of the build and not counted). `searchIndexSeconds` is the part of the
+ * build the index takes after the last page is rendered (it is fed while pages render). `--repeat R`
  * (default 3) interleaves R builds of each and reports medians (times) and maxima (memory).
  */
 import { spawn } from 'node:child_process';
@@ -21,7 +23,7 @@ function arg(name: string, fallback: string): string {
   return eq ? eq.split('=')[1]! : i >= 0 ? process.argv[i + 1] ?? fallback : fallback;
 }
 
-interface ChildRun { seconds: number; cpuSeconds: number; maxRssKB: number; wallSeconds: number }
+interface ChildRun { seconds: number; cpuSeconds: number; maxRssKB: number; wallSeconds: number; searchIndexSeconds?: number }
 
 /** Runs a node script, returns the JSON it prints last, plus wall time. */
 function runNode(script: string, args: string[], env: NodeJS.ProcessEnv, cwd = ROOT): Promise<ChildRun> {
@@ -36,7 +38,7 @@ function runNode(script: string, args: string[], env: NodeJS.ProcessEnv, cwd = R
       const wallSeconds = (performance.now() - t0) / 1000;
       const last = out.trim().split('\n').pop() ?? '';
       if (code !== 0) { fail(new Error(`${script} exited ${code}:\n${err.slice(-4000)}`)); return; }
-      try { ok({ ...(JSON.parse(last) as { seconds: number; cpuSeconds: number; maxRssKB: number }), wallSeconds }); } catch { fail(new Error(`${script}: no result line\n${out.slice(-2000)}\n${err.slice(-2000)}`)); }
+      try { ok({ ...(JSON.parse(last) as Omit<ChildRun, 'wallSeconds'>), wallSeconds }); } catch { fail(new Error(`${script}: no result line\n${out.slice(-2000)}\n${err.slice(-2000)}`)); }
     });
   });
 }
@@ -84,27 +86,25 @@ async function main(): Promise<void> {
     const env = cleanEnv({ DAMPBOOK_CONTENT: join(tmp, 'content'), DAMPBOOK_OUT: out, DAMPBOOK_CACHE: cache });
     process.stderr.write(`bench:build: ${n} pages in ${tmp} (load average ${loadavg().map((x) => x.toFixed(1)).join(' ')})\n`);
 
-    // Interleaved repeats (Dampbook, index, baseline; again …): a shared or throttled machine
+    // Interleaved repeats (Dampbook, baseline; again …): a shared or throttled machine
     // drifts by ±15 % between single builds; medians of interleaved runs compare like with like.
-    const runs: { astro: ChildRun; index: ChildRun; base: ChildRun }[] = [];
+    const runs: { astro: ChildRun; base: ChildRun }[] = [];
     for (let r = 0; r < repeat; r++) {
       rmSync(out, { recursive: true, force: true });
       rmSync(join(plain, 'dist'), { recursive: true, force: true });
       rmSync(cache, { recursive: true, force: true });
       rmSync(join(plain, '.astro-cache'), { recursive: true, force: true });
       const astro = await runNode(join(ROOT, 'bench/lib/astro-build-child.mjs'), [ROOT], env);
-      const index = await runNode(join(ROOT, 'bench/lib/index-child.mjs'), [], env);
       const base = await runNode(join(ROOT, 'bench/lib/astro-build-child.mjs'), [plain], cleanEnv({}), plain);
-      process.stderr.write(`  run ${r + 1}/${repeat}: dampbook astro build ${astro.wallSeconds.toFixed(1)} s (CPU ${astro.cpuSeconds.toFixed(1)} s, peak ${(astro.maxRssKB / 1024).toFixed(0)} MB) + search index ${index.wallSeconds.toFixed(1)} s; baseline ${base.wallSeconds.toFixed(1)} s (CPU ${base.cpuSeconds.toFixed(1)} s, peak ${(base.maxRssKB / 1024).toFixed(0)} MB)\n`);
-      runs.push({ astro, index, base });
+      process.stderr.write(`  run ${r + 1}/${repeat}: dampbook build ${astro.wallSeconds.toFixed(1)} s (CPU ${astro.cpuSeconds.toFixed(1)} s, peak ${(astro.maxRssKB / 1024).toFixed(0)} MB; search index ${(astro.searchIndexSeconds ?? 0).toFixed(2)} s after the last page); baseline ${base.wallSeconds.toFixed(1)} s (CPU ${base.cpuSeconds.toFixed(1)} s, peak ${(base.maxRssKB / 1024).toFixed(0)} MB)\n`);
+      runs.push({ astro, base });
     }
     const med = (f: (r: typeof runs[number]) => number) => median(runs.map(f));
     const astro = { wallSeconds: med((r) => r.astro.wallSeconds), cpuSeconds: med((r) => r.astro.cpuSeconds), maxRssKB: Math.max(...runs.map((r) => r.astro.maxRssKB)) };
-    const index = { wallSeconds: med((r) => r.index.wallSeconds), maxRssKB: Math.max(...runs.map((r) => r.index.maxRssKB)) };
     const base = { wallSeconds: med((r) => r.base.wallSeconds), cpuSeconds: med((r) => r.base.cpuSeconds), maxRssKB: Math.max(...runs.map((r) => r.base.maxRssKB)) };
-    const ratios = runs.map((r) => (r.astro.wallSeconds + r.index.wallSeconds) / r.base.wallSeconds);
+    const ratios = runs.map((r) => r.astro.wallSeconds / r.base.wallSeconds);
 
-    const dampbookSeconds = med((r) => r.astro.wallSeconds + r.index.wallSeconds);
+    const dampbookSeconds = astro.wallSeconds;
     const result = {
       pages: n,
       dampbookSeconds: Number(dampbookSeconds.toFixed(2)),
@@ -112,8 +112,8 @@ async function main(): Promise<void> {
       ratio: Number((dampbookSeconds / base.wallSeconds).toFixed(3)),
       repeats: repeat,
       ratioPerRun: ratios.map((x) => Number(x.toFixed(3))),
-      peakRssMB: Math.round(Math.max(astro.maxRssKB, index.maxRssKB) / 1024),
-      searchIndexSeconds: Number(index.wallSeconds.toFixed(2)),
+      peakRssMB: Math.round(astro.maxRssKB / 1024),
+      searchIndexSeconds: Number(med((r) => r.astro.searchIndexSeconds ?? 0).toFixed(2)),
       dampbookAstroSeconds: Number(astro.wallSeconds.toFixed(2)),
       baselinePeakRssMB: Math.round(base.maxRssKB / 1024),
       // CPU time (user + system) compares the two builds fairly when other work shares the machine

@@ -109,11 +109,17 @@ export async function bundleServerModules(root: string): Promise<ServerBundle> {
   return { files, dir };
 }
 
-/** Points the server build's imports of bundled modules at their bundled files (waits for the bundle). */
+/**
+ * Points the server build's imports of bundled modules at their bundled files (waits for the bundle).
+ * `apply: 'build'`: the content sync loads `content.config.ts` in a Vite *server* before the build
+ * starts; there the dozen modules it imports go through Vite as in dev, instead of waiting ~0.3 s
+ * for the bundle that the build itself only needs a second later.
+ */
 export function serverBundlePlugin(bundle: Promise<ServerBundle>): VitePlugin {
   return {
     name: 'dampbook:server-bundle',
     enforce: 'pre',
+    apply: 'build',
     async buildStart() { await bundle; },
     async resolveId(source, importer, options) {
       if (!options.ssr || !importer || !source.startsWith('.')) return undefined;

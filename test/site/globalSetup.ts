@@ -1,6 +1,6 @@
 /**
  * Builds the demo handbook twice for the site and browser tests: at the root and under a
- * sub-path, exactly as `npm run build` does (astro build + search index).
+ * sub-path, exactly as `npm run build` does (astro build, which writes the search index too).
  */
 import { execFileSync } from 'node:child_process';
 import { existsSync, mkdirSync, rmSync } from 'node:fs';
@@ -11,7 +11,6 @@ function build(out: string, base: string): void {
   const env: NodeJS.ProcessEnv = { ...process.env, DAMPBOOK_OUT: out, DAMPBOOK_BASE: base, NODE_ENV: 'production' };
   for (const k of ['BASE_URL', 'MODE', 'DEV', 'PROD', 'SSR', 'VITEST', 'TEST', 'VITEST_MODE', 'VITEST_POOL_ID', 'VITEST_WORKER_ID']) delete env[k];
   execFileSync('npx', ['astro', 'build', '--silent'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
-  execFileSync('node', ['scripts/index-search.mjs'], { env, stdio: ['ignore', 'ignore', 'inherit'] });
 }
 
 export default function setup(): void {

@@ -17,7 +17,7 @@ function childEnv(extra: Record<string, string>): NodeJS.ProcessEnv {
 /**
  * `dampbook build [--content dir] [--out dir] [--base /path/]`: builds the handbook of a content
  * folder (topic folders of pages, studies/, calculators/, handbook.config.json) with this tool,
- * then its search index — the folder may sit anywhere (a team's own repository). The config and
+ * search index included — the folder may sit anywhere (a team's own repository). The config and
  * the team calculators were checked before the build starts (main.ts loads them), so a bad file
  * is a one-line message, not a minute of build output. Each folder gets its own content cache.
  *
@@ -37,25 +37,18 @@ export function build(args: ParsedArgs, out: (s: string) => void, err: (s: strin
   const base = checkBase(str('base') ?? '/');
   const cache = join(TOOL_ROOT, 'node_modules', '.astro-content', createHash('sha256').update(content).digest('hex').slice(0, 12));
   const staging = join(TOOL_ROOT, 'node_modules', '.dampbook-build', `${process.pid}`);
-  const steps: [string, string[], string][] = [
-    ['site', [join(TOOL_ROOT, 'node_modules', 'astro', 'astro.js'), 'build', '--silent'], staging],
-    ['search index', [join(TOOL_ROOT, 'scripts', 'index-search.mjs')], site],
-  ];
-  for (const [what, argv, dest] of steps) {
-    if (what === 'search index') {
-      rmSync(site, { recursive: true, force: true });
-      cpSync(staging, site, { recursive: true });
-      rmSync(staging, { recursive: true, force: true });
-    }
-    const env = childEnv({ DAMPBOOK_CONTENT: content, DAMPBOOK_OUT: dest, DAMPBOOK_BASE: base, DAMPBOOK_CACHE: cache });
-    const r = spawnSync(process.execPath, argv, { cwd: TOOL_ROOT, env, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
-    if (r.status !== 0) {
-      for (const l of `${r.stdout ?? ''}\n${r.stderr ?? ''}`.split('\n').filter((l) => l.trim()).slice(-30)) err(l);
-      rmSync(staging, { recursive: true, force: true });
-      err(`dampbook: build of ${content} failed at the ${what} step (exit ${r.status ?? r.signal}); the lines above say why`);
-      return 1;
-    }
+  const env = childEnv({ DAMPBOOK_CONTENT: content, DAMPBOOK_OUT: staging, DAMPBOOK_BASE: base, DAMPBOOK_CACHE: cache });
+  // one step: the search index is written by the build itself (src/build/search-index.ts)
+  const r = spawnSync(process.execPath, [join(TOOL_ROOT, 'node_modules', 'astro', 'astro.js'), 'build', '--silent'], { cwd: TOOL_ROOT, env, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+  if (r.status !== 0) {
+    for (const l of `${r.stdout ?? ''}\n${r.stderr ?? ''}`.split('\n').filter((l) => l.trim()).slice(-30)) err(l);
+    rmSync(staging, { recursive: true, force: true });
+    err(`dampbook: build of ${content} failed (exit ${r.status ?? r.signal}); the lines above say why`);
+    return 1;
   }
+  rmSync(site, { recursive: true, force: true });
+  cpSync(staging, site, { recursive: true });
+  rmSync(staging, { recursive: true, force: true });
   out(`built ${content} into ${site} (base ${base})`);
   return 0;
 }
