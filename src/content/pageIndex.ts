@@ -10,5 +10,5 @@ import { getCollection, type CollectionEntry } from 'astro:content';
 let cached: Promise<CollectionEntry<'pages'>[]> | undefined;
 
 export function handbookPages(): Promise<CollectionEntry<'pages'>[]> {
-  return (cached ??= getCollection('pages').then((all) => all.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))));
+  return (cached ??= getCollection('pages').then((all: CollectionEntry<'pages'>[]) => all.sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))));
 }

@@ -3,7 +3,7 @@ export { ALPHA_RANGE, DAMPER_LAW_KINDS, type DamperLaw, type DamperLawKind } fro
 export { validateLaw } from './validateLaw.ts';
 export { damperForce, lawBreakpoints } from './damperForce.ts';
 export { lambdaAlpha } from './lambdaAlpha.ts';
-export { energyPerCycle, energyPerCycleQuadrature } from './energyPerCycle.ts';
+export { bilinearEnergyPerCycle, energyPerCycle, energyPerCycleQuadrature } from './energyPerCycle.ts';
 export { harmonicDuty, equivalentDampingRatio, type HarmonicDuty } from './harmonicDuty.ts';
 export { gaussianMomentFactor, gaussianMeanPower } from './gaussianDuty.ts';
 export { maxwellStiffness, seriesHarmonic, type MaxwellStiffness, type SeriesHarmonic } from './seriesStiffness.ts';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  energyPerCycle, energyPerCycleQuadrature, equivalentDampingRatio, gaussianMeanPower, gaussianMomentFactor, harmonicDuty, lambdaAlpha,
+  bilinearEnergyPerCycle, energyPerCycle, energyPerCycleQuadrature, equivalentDampingRatio, gaussianMeanPower, gaussianMomentFactor, harmonicDuty, lambdaAlpha,
   type DamperLaw,
 } from '../../../src/core/dampers/index.ts';
 import { InputRangeError } from '../../../src/core/errors.ts';
@@ -53,6 +53,29 @@ const lawArb: fc.Arbitrary<DamperLaw> = fc.oneof(
   }),
   fc.record({ kind: fc.constant('hysteretic' as const), eta: fc.double({ min: 0.01, max: 1, noNaN: true }), k: fc.double({ min: 1e3, max: 1e7, noNaN: true }) }),
 );
+
+describe('bilinear energy per cycle in closed form', () => {
+  const bil = (c1: number, c2: number, c1c: number, c2c: number, vknee: number) => ({ kind: 'bilinear' as const, rebound: { c1, c2 }, compression: { c1: c1c, c2: c2c }, vknee });
+  it('reduces to π c ω X² with equal slopes, and to π c₂ ω X² as the knee goes to 0 (Chopra, Dynamics of Structures 5th ed., eq. 3.8.1; published)', () => {
+    expectClose({ label: 'E equal slopes', computed: bilinearEnergyPerCycle(bil(1500, 1500, 1500, 1500, 0.05), 0.025, 3 * Math.PI), expected: Math.PI * 1500 * 3 * Math.PI * 0.025 ** 2, tol: 1e-14 });
+    expectClose({ label: 'E knee → 0', computed: bilinearEnergyPerCycle(bil(9000, 800, 9000, 800, 1e-12), 0.025, 3 * Math.PI), expected: Math.PI * 800 * 3 * Math.PI * 0.025 ** 2, tol: 1e-9, why: 'the knee leaves c₁v_k·4X ≈ 1e-12 relative' });
+  });
+  it('equals the quadrature of the law to 1e-12 across knees below, near and above the peak velocity (closed form vs numerics; fixed seed)', () => {
+    const slope = fc.double({ min: 0, max: 1e5, noNaN: true });
+    fc.assert(fc.property(slope, slope, slope, slope, fc.double({ min: 1e-3, max: 10, noNaN: true }), fc.double({ min: 1e-4, max: 1, noNaN: true }), fc.double({ min: 0.1, max: 500, noNaN: true }),
+      (c1, c2, c1c, c2c, vknee, X, w) => {
+        fc.pre(c1 + c2 + c1c + c2c > 1);
+        const law = bil(c1, c2, c1c, c2c, vknee);
+        const a = bilinearEnergyPerCycle(law, X, w);
+        const b = energyPerCycleQuadrature(law, X, w);
+        return Math.abs(a - b) <= 1e-12 * Math.abs(b);
+      }), { seed: 7, numRuns: 300 });
+    // a knee a hair below the peak velocity (θ_k → 0): no cancellation that shows
+    const law = bil(3600, 1080, 1200, 360, 0.1);
+    const X = 0.1 / (4 * Math.PI) * (1 + 1e-9);
+    expectClose({ label: 'E knee ≈ peak', computed: bilinearEnergyPerCycle(law, X, 4 * Math.PI), expected: energyPerCycleQuadrature(law, X, 4 * Math.PI), tol: 1e-12 });
+  });
+});
 
 describe('energyPerCycle invariants', () => {
   it('closed form and quadrature agree to 1e-8 for every law (closed form vs numerics)', () => {
