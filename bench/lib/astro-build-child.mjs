@@ -9,5 +9,6 @@ const t0 = performance.now();
 const cpu = () => { const u = process.resourceUsage(); return (u.userCPUTime + u.systemCPUTime) / 1e6; };
 await build({ root, logLevel: 'error' });
 const seconds = (performance.now() - t0) / 1000;
+// the stats slot of src/build/search-feed-key.ts (SEARCH_STATS; this plain .mjs cannot import the .ts)
 const search = globalThis[Symbol.for('dampbook:search-stats')];
 process.stdout.write(`\n${JSON.stringify({ seconds, cpuSeconds: cpu(), maxRssKB: process.resourceUsage().maxRSS, searchIndexSeconds: search?.seconds ?? 0 })}\n`);

@@ -10,9 +10,9 @@
  *
  * The cached objects are shared between pages: callers read them and never change them.
  */
-import { defaults, evaluate } from '../../calculators/evaluate.ts';
-import { withOperatingPoint } from '../../calculators/chartMarks.ts';
-import type { CalculatorDefinition, ChartSpec, Result, Values } from '../../calculators/types.ts';
+import { defaults } from '../../calculators/evaluate.ts';
+import { computeForPage, type PageResult } from '../../calculators/pageCompute.ts';
+import type { CalculatorDefinition, ChartSpec } from '../../calculators/types.ts';
 import type { UnitSystem } from '../../core/units/index.ts';
 import { svgChart } from './svgChart.ts';
 
@@ -23,22 +23,27 @@ export interface DefaultChart {
 }
 
 export interface DefaultRender {
-  result: Result & { values: Values };
+  result: PageResult;
   charts: readonly DefaultChart[];
 }
 
-const cache = new Map<string, { def: CalculatorDefinition; render: DefaultRender }>();
+// keyed by the definition object: a test that registers a stand-in under a real id gets its own drawing
+const cache = new WeakMap<CalculatorDefinition, Map<UnitSystem, DefaultRender>>();
 
-/** The calculator's default case with every chart drawn in `system`, computed on first use. */
+/**
+ * The calculator's default case with every chart drawn in `system`, computed on first use, by the
+ * same function the live page uses (computeForPage: result, charts, operating point). The defaults
+ * of a built-in calculator always compute and draw; when they do not, the build stops naming it.
+ */
 export function defaultRender(calc: CalculatorDefinition, system: UnitSystem): DefaultRender {
-  // keyed by the definition object too: two definitions may not share an id, but a test that
-  // registers a stand-in under a real id must not read the real one's drawing
-  const key = `${calc.id}\u0000${system}`;
-  const hit = cache.get(key);
-  if (hit && hit.def === calc) return hit.render;
-  const result = evaluate(calc, defaults(calc));
-  const specs = withOperatingPoint(calc, calc.charts?.(result.values, result) ?? [], result.values);
-  const render: DefaultRender = { result, charts: specs.map((spec) => ({ spec, svg: svgChart(spec, system) })) };
-  cache.set(key, { def: calc, render });
+  let bySystem = cache.get(calc);
+  if (!bySystem) cache.set(calc, (bySystem = new Map()));
+  const hit = bySystem.get(system);
+  if (hit) return hit;
+  const page = computeForPage(calc, defaults(calc), true);
+  if (!page.ok) throw new Error(`calculator ${calc.id}: its default inputs do not compute: ${page.message}`);
+  if (page.chartError !== undefined) throw new Error(`calculator ${calc.id}: its charts at the default inputs cannot be drawn: ${page.chartError}`);
+  const render: DefaultRender = { result: page.result, charts: (page.charts ?? []).map((spec) => ({ spec, svg: svgChart(spec, system) })) };
+  bySystem.set(system, render);
   return render;
 }

@@ -43,16 +43,15 @@ export function energyPerCycle(law: DamperLaw, X: number, omega: number): number
  * angles |θ| < θ_k = arccos(v_k/V); integrating |F| = c₂V cos θ + (c₁ − c₂)v_k there and c₁V cos θ
  * elsewhere against X cos θ dθ gives, per side,
  *
- * $$E_{side} = XV\left[rac{\pi}{2}c_1 + (c_2 - c_1)\left(	heta_k - rac{v_k}{V}\sin	heta_k
-ight)
-ight],\qquad
- *   E_{side} = rac{\pi}{2}c_1 V X\ \ (V \le v_k)$$
+ * $$E_{side} = XV\left[\frac{\pi}{2}c_1 + (c_2 - c_1)\left(\theta_k - \frac{v_k}{V}\sin\theta_k\right)\right],\qquad
+ *   E_{side} = \frac{\pi}{2}c_1 V X\ \ (V \le v_k)$$
  *
  * With c₁ = c₂ = c both sides sum to π c ω X² (Chopra eq. 3.8.1); with v_k → 0 to π c₂ ω X².
  * Written as c₁B + c₂A with A = θ_k − ½ sin 2θ_k (the phase share above the knee) and
  * B = π/2 − A = arcsin(v_k/V) + (v_k/V) sin θ_k, each computed without cancellation (A by its
  * series when θ_k is small), so a knee just below the peak velocity, or far below it with one slope
  * zero, keeps full relative accuracy.
+ *
  * @param law the bilinear law
  * @param X displacement amplitude, m (validated by energyPerCycle)
  * @param omega circular frequency, rad/s
