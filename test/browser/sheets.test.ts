@@ -169,6 +169,23 @@ describe('dampbook sheet prints the data it was given', () => {
   });
 });
 
+describe('inputs on the printed sheet', () => {
+  it('print every input value whole, in US units too (values converted from SI defaults carry 10 digits)', async () => {
+    // common practice, no source: a calculation sheet must show the number it computed with;
+    // found by hand: at a fixed 7em, "0.7874015748 in" printed as "0.787401574"
+    const { page } = await watchedPage(browser, server.origin);
+    await page.goto(`${server.url}thermal/steady-temperature/?units=US&P=38.00016893`);
+    await page.waitForSelector('db-calculator[data-ready]');
+    await page.emulateMedia({ media: 'print' });
+    const clipped = await page.evaluate(() => [...document.querySelectorAll<HTMLInputElement>('db-calculator .field:not([hidden]) input[type="text"]')]
+      .filter((i) => i.getClientRects().length > 0 && i.scrollWidth > i.clientWidth + 1)
+      .map((i) => `${i.name} = ${i.value} (${i.scrollWidth} > ${i.clientWidth} px)`));
+    expect(clipped).toEqual([]);
+    // and the long values are there to clip: P in hp has 10 significant digits
+    expect(await page.locator('db-calculator input[name="P"]').inputValue()).toMatch(/^0\.0509590\d{4}$/);
+  });
+});
+
 describe('vetted page on screen', () => {
   it('shows status, revision, people and a passing Verification table', async () => {
     const { page } = await watchedPage(browser, server.origin);
