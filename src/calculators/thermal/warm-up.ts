@@ -1,6 +1,6 @@
 import { ComputationError } from '../../core/errors.ts';
 import {
-  BIOT_LUMPED_MAX, biotNumber, bodyCooling, bodyWarmUp, coolDownTime, material, onOffDuty, parsePowerProfile, profileWarmUp,
+  BIOT_LUMPED_MAX, biotNumber, bodyHeatLoss, bodyWarmUp, coolDownTime, material, onOffDuty, parsePowerProfile, profileWarmUp,
   steadyTemperature, timeToLimit, type PowerProfile, type ProfileEnd,
 } from '../../core/thermal/index.ts';
 import { choice, defineCalculator, num, text, type ChartSpec, type Values } from '../types.ts';
@@ -54,7 +54,7 @@ function modelBody(values: Values) {
 /** Body-model run: C dT/dt = P(t) − Q(T) with h(T) from the correlations, piecewise between switching times. */
 function bodyRun(values: Values, m: Setup, tEnd: number, stopAt?: number) {
   const body = modelBody(values);
-  return bodyWarmUp((T) => bodyCooling(body, T).Q, m.C, body.Tamb, m.profile, m.end, tEnd, stopAt);
+  return bodyWarmUp(bodyHeatLoss(body), m.C, body.Tamb, m.profile, m.end, tEnd, stopAt);
 }
 
 /** Length of the two-node run: the time of interest, two periods, and five time constants to settle. */
@@ -147,7 +147,10 @@ export const warmUpCalculator = defineCalculator({
       if (UAtyped < 0.5 * ss.UA || UAtyped > 2 * ss.UA) {
         warnings.push(`The typed UA = ${UAtyped.toPrecision(3)} W/K is ${UAtyped < ss.UA ? 'far below' : 'far above'} the body model's ${ss.UA.toPrecision(3)} W/K at its equilibrium: the constant-UA results (T_ss = ${duty.Tmean.toPrecision(4)} K) do not describe this body; check UA.`);
       }
-      if (!profile && num(values, 'duty') >= 1) outputs.tLimitBody = timeToLimit((T) => num(values, 'P') - bodyCooling(body, T).Q, C, Tamb, Tlimit);
+      if (!profile && num(values, 'duty') >= 1) {
+        const Q = bodyHeatLoss(body);
+        outputs.tLimitBody = timeToLimit((T) => num(values, 'P') - Q(T), C, Tamb, Tlimit);
+      }
       else {
         const tEnd = Math.max(10 * C / ss.UA, 3 * m.period);
         try {

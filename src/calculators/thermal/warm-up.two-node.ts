@@ -4,7 +4,7 @@
  * node holds the total heat capacity less the oil's.
  */
 import { InputRangeError } from '../../core/errors.ts';
-import { bodyCooling, twoNodeLinear, twoNodeWarmUp, type Body, type PowerProfile, type ProfileEnd } from '../../core/thermal/index.ts';
+import { bodyHeatLoss, twoNodeLinear, twoNodeWarmUp, type Body, type PowerProfile, type ProfileEnd } from '../../core/thermal/index.ts';
 import { num, type Values } from '../types.ts';
 
 export interface TwoNodeSetup {
@@ -42,7 +42,7 @@ export function warmUpTwoNode(values: Values, m: TwoNodeSetup, body: Body | unde
     const s = t.map((x) => r.at(x));
     return { oilAtT: at.oil, bodyAtT: at.body, tLimitOil: r.tCross(Tlimit), oilPeak: r.oilPeak, closure: audit(r), t, oil: s.map((x) => x.oil), body: s.map((x) => x.body) };
   }
-  const Q = (T: number) => bodyCooling(body, T).Q;
+  const Q = bodyHeatLoss(body);
   const run = (stop: number, stopAt?: number) => twoNodeWarmUp(Q, nodes, m.profile, m.end, stop, { stopAt });
   const r = run(end);
   const atT = tq > 0 ? run(tq) : { oil: [m.Tamb], body: [m.Tamb] };
@@ -50,7 +50,8 @@ export function warmUpTwoNode(values: Values, m: TwoNodeSetup, body: Body | unde
   const keep = r.t.map((x, i) => (x <= tChart ? i : -1)).filter((i) => i >= 0);
   return {
     oilAtT: atT.oil.at(-1)!, bodyAtT: atT.body.at(-1)!,
-    tLimitOil: cross < 0 ? undefined : run(r.t[cross]!, Tlimit).tCross, // the event, located to round-off
+    // the event, located to round-off; an oil that starts at the limit is there at t = 0
+    tLimitOil: cross < 0 ? undefined : cross === 0 ? 0 : run(r.t[cross]!, Tlimit).tCross,
     oilPeak: r.oilPeak, closure: audit(r),
     t: keep.map((i) => r.t[i]!), oil: keep.map((i) => r.oil[i]!), body: keep.map((i) => r.body[i]!),
   };

@@ -10,6 +10,17 @@ function rmsScaled(v: Float64Array, y: Float64Array, rtol: number, atol: Float64
 }
 
 /**
+ * The step over which an explicit Euler step changes y by about 1 % in the scaled norm,
+ * 0.01‖y₀‖/‖f₀‖ (Infinity when f₀ = 0): the first guess of `initialStep`, and the cap on a step
+ * carried over from an earlier run, so a run that starts where the right-hand side has just
+ * jumped (a new power segment) does not try a step far past where the old one was working.
+ */
+export function eulerStepBound(y0: Float64Array, f0: Float64Array, rtol: number, atol: Float64Array): number {
+  const d1 = rmsScaled(f0, y0, rtol, atol);
+  return d1 > 0 ? (0.01 * rmsScaled(y0, y0, rtol, atol)) / d1 : Infinity;
+}
+
+/**
  * Starting step size from two evaluations: one explicit Euler step of size h₀ = 0.01‖y₀‖/‖f₀‖
  * estimates the second derivative, and the step is chosen so that the local error of a method
  * of order p would be about 0.01 in the scaled norm.

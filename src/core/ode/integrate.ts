@@ -2,7 +2,7 @@ import { ComputationError, InputRangeError, POSITIVE, requireInRange } from '../
 import { denseCoefficients, evalDense } from './denseOutput.ts';
 import { DORMAND_PRINCE_54 } from './dormandPrince.ts';
 import { errorNorm } from './errorNorm.ts';
-import { initialStep } from './initialStep.ts';
+import { eulerStepBound, initialStep } from './initialStep.ts';
 import { rkStep, stepWork } from './rkStep.ts';
 import type { OdeStats, OdeSystem } from './system.ts';
 import type { EmbeddedTableau } from './tableau.ts';
@@ -24,6 +24,11 @@ export interface AdaptiveOptions {
   readonly atol: number | ArrayLike<number>;
   readonly hMax?: number;
   readonly maxSteps?: number;
+  /**
+   * First step to try, s (> 0). A run continued from an earlier one (the next power segment) passes
+   * that run's `hNext`: the step that was working, instead of two evaluations that guess one.
+   */
+  readonly h0?: number | undefined;
   readonly tableau?: EmbeddedTableau;
   /**
    * Terminal event: integration stops at the first point where g(t, y) turns negative (g ≥ 0 at
@@ -32,6 +37,11 @@ export interface AdaptiveOptions {
    */
   readonly event?: ((t: number, y: Float64Array) => number) | undefined;
   readonly onStep?: (step: AcceptedStep) => void;
+  /**
+   * Checked after every accepted step (after `onStep`): true ends the run there, at that step's end
+   * (`stoppedEarly`). For a caller that can finish the interval another way (a settled state).
+   */
+  readonly stopAfter?: ((t: number, y: Float64Array) => boolean) | undefined;
 }
 
 export interface AdaptiveSolution {
@@ -39,7 +49,11 @@ export interface AdaptiveSolution {
   readonly t: number;
   readonly y: Float64Array;
   readonly stoppedByEvent: boolean;
+  /** `stopAfter` ended the run before tEnd. */
+  readonly stoppedEarly?: boolean;
   readonly stats: OdeStats;
+  /** The step size the controller proposed next, s: `h0` for a run that continues this one. */
+  readonly hNext: number;
 }
 
 /**
@@ -76,8 +90,11 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
   let t = t0;
   sys.f(t, y, w.k[0]!);
   stats.evaluations++;
-  let h = initialStep(sys, t, y, w.k[0]!, tab.order, opts.rtol, atol, hMax);
-  stats.evaluations++;
+  let h: number;
+  if (opts.h0 !== undefined) h = Math.min(requireInRange('h0', opts.h0, POSITIVE, 's'), hMax, eulerStepBound(y, w.k[0]!, opts.rtol, atol));
+  else { h = initialStep(sys, t, y, w.k[0]!, tab.order, opts.rtol, atol, hMax); stats.evaluations++; }
+  // what the controller wanted before a last step was cut to end exactly at tEnd
+  let hWanted = h;
   const expo = 1 / (tab.embeddedOrder + 1);
   let rejectedLast = false;
   let hStep = 0;
@@ -98,7 +115,9 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
 
   while (t < tEnd) {
     if (stats.accepted + stats.rejected >= maxSteps) throw new ComputationError(`ODE: more than ${maxSteps} steps before t = ${tEnd} s (stopped at t = ${t.toPrecision(6)} s)`);
-    const last = t + h >= tEnd;
+    // stretch a step by up to 1 % to land on tEnd rather than leave a sliver below the round-off of t
+    const last = t + 1.01 * h >= tEnd;
+    hWanted = h;
     if (last) h = tEnd - t;
     if (!(h > Math.abs(t) * 1e-14 + 1e-300)) throw new ComputationError(`ODE: step size underflow at t = ${t.toPrecision(6)} s`);
     stats.evaluations += rkStep(tab, sys, t, y, h, w);
@@ -134,16 +153,18 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
         t0: tPrev, t1: tEv, y0: yPrev, y1: yAt,
         interpolate: (theta, out) => interp(theta * thEv, out),
       });
-      return { t: tEv, y: yAt, stoppedByEvent: true, stats };
+      return { t: tEv, y: yAt, stoppedByEvent: true, stats, hNext: hStep };
     }
     opts.onStep?.(step);
+    if (opts.stopAfter && t < tEnd && opts.stopAfter(t, y)) return { t, y, stoppedByEvent: false, stoppedEarly: true, stats, hNext: hStep };
     if (tab.fsal) w.k[0]!.set(w.k[s - 1]!);
     else { sys.f(t, y, w.k[0]!); stats.evaluations++; }
     const grow = rejectedLast ? 1 : 10;
     h = Math.min(hMax, h * Math.min(grow, Math.max(0.2, 0.9 * Math.pow(Math.max(e, 1e-10), -expo))));
     rejectedLast = false;
+    if (t >= tEnd) h = Math.max(h, Math.min(hWanted, hMax)); // a cut last step says nothing about the step size
   }
-  return { t, y, stoppedByEvent: false, stats };
+  return { t, y, stoppedByEvent: false, stats, hNext: h };
 }
 
 /** Bisection on θ for the first sign change of g from ≥ 0 to < 0 inside the last step; returns θ. */

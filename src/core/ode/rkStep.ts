@@ -15,16 +15,22 @@ export interface StepWork {
   readonly e: Float64Array;
 }
 
+/** The tableau packed once per tableau (read only): a run of many short segments packs it once, not per segment. */
+const packed = new WeakMap<EmbeddedTableau, Pick<StepWork, 'aFlat' | 'b' | 'e'>>();
+
 export function stepWork(tableau: EmbeddedTableau, dim: number): StepWork {
-  return {
-    k: tableau.c.map(() => new Float64Array(dim)),
-    yStage: new Float64Array(dim),
-    yNew: new Float64Array(dim),
-    err: new Float64Array(dim),
-    aFlat: Float64Array.from(tableau.a.flat()),
-    b: Float64Array.from(tableau.b),
-    e: Float64Array.from(tableau.b.map((bi, i) => bi - tableau.bHat[i]!)),
-  };
+  let p = packed.get(tableau);
+  if (!p) {
+    p = {
+      aFlat: Float64Array.from(tableau.a.flat()),
+      b: Float64Array.from(tableau.b),
+      e: Float64Array.from(tableau.b.map((bi, i) => bi - tableau.bHat[i]!)),
+    };
+    packed.set(tableau, p);
+  }
+  const k: Float64Array[] = [];
+  for (let i = 0; i < tableau.c.length; i++) k.push(new Float64Array(dim));
+  return { k, yStage: new Float64Array(dim), yNew: new Float64Array(dim), err: new Float64Array(dim), ...p };
 }
 
 /**

@@ -21,15 +21,15 @@ export function airProperties(T: number): AirRow {
   const lo = AIR_TABLE[i] as AirRow;
   const hi = AIR_TABLE[i + 1] as AirRow;
   const w = (T - lo.T) / (hi.T - lo.T);
-  const mix = (a: number, b: number) => a + (b - a) * w;
+  // written out, not through a closure: the body-model ODEs call this millions of times
   return {
     T,
-    rho: mix(lo.rho, hi.rho),
-    cp: mix(lo.cp, hi.cp),
-    mu: mix(lo.mu, hi.mu),
-    nu: mix(lo.nu, hi.nu),
-    k: mix(lo.k, hi.k),
-    alpha: mix(lo.alpha, hi.alpha),
-    Pr: mix(lo.Pr, hi.Pr),
+    rho: lo.rho + (hi.rho - lo.rho) * w,
+    cp: lo.cp + (hi.cp - lo.cp) * w,
+    mu: lo.mu + (hi.mu - lo.mu) * w,
+    nu: lo.nu + (hi.nu - lo.nu) * w,
+    k: lo.k + (hi.k - lo.k) * w,
+    alpha: lo.alpha + (hi.alpha - lo.alpha) * w,
+    Pr: lo.Pr + (hi.Pr - lo.Pr) * w,
   };
 }

@@ -69,52 +69,87 @@ export const BODY_T_RANGE = AIR_TABLE_RANGE;
  * @source incropera2007 eqs. 9.34, 9.26, 9.33, 7.54, 9.64, 1.9 (from memory)
  */
 export function bodyCooling(body: Body, Ts: number): BodyCooling {
+  const b = checkBody(body);
+  requireInRange('Ts', Ts, BODY_T_RANGE, 'K');
+  const warnings: string[] = [];
+  return { ...coolingAt(b, Ts, warnings), warnings };
+}
+
+/**
+ * Q(T_s) of `bodyCooling` as a function for an ODE or a root finder: the body is checked once, and
+ * each call computes the same heat flow bit for bit without building the coefficients record or
+ * its warnings (a warm-up run calls it up to millions of times).
+ *
+ * @example bodyHeatLoss({D:0.05,L:0.35,orientation:'horizontal',ends:false,eps:0.9,Tamb:298.15,V:0})(353.15) // ≈ 41.0 W, = bodyCooling(…, 353.15).Q
+ * @throws InputRangeError for a bad body (at once) or T_s outside [200, 700] K (at the call)
+ */
+export function bodyHeatLoss(body: Body): (Ts: number) => number {
+  const b = checkBody(body);
+  return (Ts) => {
+    requireInRange('Ts', Ts, BODY_T_RANGE, 'K');
+    return coolingAt(b, Ts, undefined).Q;
+  };
+}
+
+/** The body with its ranges checked and defaults filled. */
+interface CheckedBody {
+  readonly D: number; readonly L: number; readonly V: number; readonly Tamb: number; readonly Tsur: number;
+  readonly Gmount: number; readonly Qsun: number; readonly eps: number; readonly orientation: Orientation; readonly ends: boolean;
+}
+
+function checkBody(body: Body): CheckedBody {
   const D = requireInRange('D', body.D, { ...POSITIVE, max: 10 }, 'm');
   const L = requireInRange('L', body.L, { ...POSITIVE, max: 10 }, 'm');
   const V = requireInRange('V', body.V, { min: 0, max: 100 }, 'm/s');
-  requireInRange('Ts', Ts, BODY_T_RANGE, 'K');
   const Tamb = requireInRange('Tamb', body.Tamb, BODY_T_RANGE, 'K');
   const Tsur = requireInRange('Tsur', body.Tsur ?? Tamb, BODY_T_RANGE, 'K');
   const Gmount = requireInRange('Gmount', body.Gmount ?? 0, { min: 0, max: 1e5 }, 'W/K');
   const Qsun = requireInRange('Qsun', body.Qsun ?? 0, { min: 0, max: 1e6 }, 'W');
-  const warnings: string[] = [];
+  return { D, L, V, Tamb, Tsur, Gmount, Qsun, eps: body.eps, orientation: body.orientation, ends: body.ends };
+}
+
+/** The correlations at one surface temperature; validity warnings go to `warnings` when given. */
+function coolingAt(b: CheckedBody, Ts: number, warnings: string[] | undefined): Omit<BodyCooling, 'warnings'> {
+  const { D, L, V, Tamb, Tsur, Gmount, Qsun } = b;
   const Tfilm = 0.5 * (Ts + Tamb);
   const air = airProperties(Tfilm);
   const dT = Math.abs(Ts - Tamb);
 
   let hNatural: number;
   let Ra: number;
-  if (body.orientation === 'horizontal') {
+  if (b.orientation === 'horizontal') {
     Ra = rayleighNumber(air, dT, D).Ra;
     hNatural = (churchillChuCylinder(Ra, air.Pr) * air.k) / D;
-    if (Ra > CHURCHILL_CHU_CYLINDER_RA_MAX) warnings.push(`Ra_D = ${Ra.toExponential(2)} is above 10¹², the range of the horizontal-cylinder correlation.`);
+    if (warnings && Ra > CHURCHILL_CHU_CYLINDER_RA_MAX) warnings.push(`Ra_D = ${Ra.toExponential(2)} is above 10¹², the range of the horizontal-cylinder correlation.`);
   } else {
     const g = rayleighNumber(air, dT, L);
     Ra = g.Ra;
     hNatural = (verticalPlateNusselt(Ra, air.Pr) * air.k) / L;
-    const s = verticalCylinderSlenderness(D, L, g.Gr);
-    if (dT > 0 && !s.ok) {
-      warnings.push(`Vertical body too slender for the vertical-plate correlation: D = ${fmtMm(D)} < 35·L/Gr_L^¼ = ${fmtMm(s.Dmin)}. ` +
-        'A slender cylinder sheds more heat than a plate, so h_N is underestimated (conservative for temperature).');
+    if (warnings && dT > 0) {
+      const s = verticalCylinderSlenderness(D, L, g.Gr);
+      if (!s.ok) {
+        warnings.push(`Vertical body too slender for the vertical-plate correlation: D = ${fmtMm(D)} < 35·L/Gr_L^¼ = ${fmtMm(s.Dmin)}. ` +
+          'A slender cylinder sheds more heat than a plate, so h_N is underestimated (conservative for temperature).');
+      }
     }
   }
 
   const Re = (V * D) / air.nu;
   const hForced = V > 0 ? (churchillBernstein(Re, air.Pr) * air.k) / D : 0;
-  if (V > 0 && Re * air.Pr < CHURCHILL_BERNSTEIN_REPR_MIN) warnings.push(`Re·Pr = ${(Re * air.Pr).toPrecision(2)} is below 0.2, the range of the cross-flow correlation (free convection dominates here).`);
-  if (Re > 1e7) warnings.push(`Re_D = ${Re.toExponential(2)} is beyond the data behind the cross-flow correlation (about 10⁷).`);
+  if (warnings && V > 0 && Re * air.Pr < CHURCHILL_BERNSTEIN_REPR_MIN) warnings.push(`Re·Pr = ${(Re * air.Pr).toPrecision(2)} is below 0.2, the range of the cross-flow correlation (free convection dominates here).`);
+  if (warnings && Re > 1e7) warnings.push(`Re_D = ${Re.toExponential(2)} is beyond the data behind the cross-flow correlation (about 10⁷).`);
   const hConv = V > 0 ? mixedConvection(hForced, hNatural) : hNatural;
-  const hRad = radiationCoefficient(body.eps, Ts, Tsur);
+  const hRad = radiationCoefficient(b.eps, Ts, Tsur);
 
   const lateral = Math.PI * D * L;
-  const area = body.ends ? lateral + 2 * (Math.PI / 4) * D * D : lateral;
+  const area = b.ends ? lateral + 2 * (Math.PI / 4) * D * D : lateral;
   const Qconv = hConv * area * (Ts - Tamb);
   const Qrad = hRad * area * (Ts - Tsur);
   const Qmount = Gmount * (Ts - Tamb);
   // written so that with no mounts and no sun Q and UA are bit-for-bit the one-path values
   const Q = Gmount === 0 && Qsun === 0 ? Qconv + Qrad : Qconv + Qrad + Qmount - Qsun;
   const UA = (hConv + hRad) * area + Gmount;
-  return { area, Tfilm, hNatural, hForced, hConv, hRad, Qconv, Qrad, Qmount, Qsun, Q, UA, Ra, Re, Pr: air.Pr, warnings };
+  return { area, Tfilm, hNatural, hForced, hConv, hRad, Qconv, Qrad, Qmount, Qsun, Q, UA, Ra, Re, Pr: air.Pr };
 }
 
 function fmtMm(x: number): string {

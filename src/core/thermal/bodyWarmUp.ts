@@ -21,6 +21,14 @@ export interface BodyWarmUpRun {
  * time (an on/off edge at d·t_p, a profile block edge) is a step edge and the power is never sampled
  * across a jump. The energy put in is integrated as a second state.
  *
+ * A segment ends early once the temperature has settled: within a segment the equation is scalar
+ * and autonomous, so T(t) is monotone and cannot cross an equilibrium T* (P_i = Q(T*)). When
+ * P_i − Q changes sign between T and T + δ in the direction T moves (δ = the integrator's
+ * tolerance on T, atol + rtol·|T|; Q continuous, so T* lies in that interval), T stays between T
+ * and T* for the rest of the segment, and T + δ/2 holds it to within δ/2. Without this, a body
+ * with a small heat capacity (τ = C/UA ≪ segment) costs an explicit method ~τ⁻¹ steps per second
+ * at its stability limit: 100 000 steps for nothing.
+ *
  * $$C\frac{dT}{dt} = P(t) - Q(T),\qquad P(t) = P_i\ \text{on}\ [t_i, t_{i+1}),\quad \frac{dE}{dt} = P(t)$$
  *
  * @param Q heat loss at body temperature T, W (continuous)
@@ -58,12 +66,46 @@ export function bodyWarmUp(Q: (T: number) => number, Cth: number, T0: number, p:
       d[1] = power;
     },
   };
+  const RTOL = 1e-9;
+  const ATOL_T = 1e-7;
+  let stepsInSegment = 0;
+  let settledAt = NaN; // the temperature a settled segment holds to its end
+  /** After some steps in a segment (every 8th from the 32nd): has T settled? (see above) */
+  const settled = (_t: number, s: Float64Array): boolean => {
+    if (++stepsInSegment < 32 || stepsInSegment % 8 !== 0) return false;
+    const T = s[0]!;
+    const f = power - Q(T);
+    const d = (f > 0 ? 1 : -1) * (ATOL_T + RTOL * Math.abs(T));
+    // a limit inside the interval would be crossed at an unknown time: integrate on
+    if (stopAt !== undefined && (stopAt - T) * (stopAt - (T + d)) <= 0) return false;
+    if (f !== 0 && (power - Q(T + d)) * f > 0) return false;
+    settledAt = f === 0 ? T : T + 0.5 * d;
+    return true;
+  };
   const opts = {
-    rtol: 1e-9,
-    atol: [1e-7, 1e-6 * p.P.reduce((a, b) => Math.max(a, b), 1) * tp],
+    rtol: RTOL,
+    atol: [ATOL_T, 1e-6 * p.P.reduce((a, b) => Math.max(a, b), 1) * tp],
     maxSteps: 100000,
     event: stopAt === undefined ? undefined : (_t: number, s: Float64Array) => stopAt - s[0]!,
     onStep: (st: { t1: number; y1: Float64Array }) => { t.push(st.t1); y.push(st.y1[0]!); },
+    stopAfter: settled,
+  };
+  let hNext: number | undefined;
+  /** Integrates one segment at the current power to t1; true when it stopped at the limit. */
+  const segment = (t1: number): boolean => {
+    stepsInSegment = 0;
+    const r = integrateAdaptive(sys, tc, state, t1, { ...opts, h0: hNext });
+    hNext = process.env.NOH0 ? undefined : r.hNext;
+    state.set(r.y);
+    tc = r.t;
+    if (r.stoppedByEvent) return true;
+    if (r.stoppedEarly) { // settled: T holds, the energy grows at the segment's power
+      state[0] = settledAt;
+      state[1] = state[1]! + power * (t1 - tc);
+      tc = t1;
+      t.push(t1); y.push(settledAt);
+    }
+    return false;
   };
   if (stopAt !== undefined && T0 >= stopAt) return { t, y, tCross: 0, energyIn: 0 };
   for (let k = 0; k < periods && tc < tEnd; k++) {
@@ -71,17 +113,12 @@ export function bodyWarmUp(Q: (T: number) => number, Cth: number, T0: number, p:
       const t1 = Math.min(tEnd, k * tp + p.t[i + 1]!);
       if (!(t1 - tc > 1e-12 * Math.max(1, t1))) { tc = Math.max(tc, t1); continue; } // a sliver left by rounding
       power = p.P[i]!;
-      const r = integrateAdaptive(sys, tc, state, t1, opts);
-      state.set(r.y);
-      tc = r.t;
-      if (r.stoppedByEvent) return { t, y, tCross: r.t, energyIn: state[1]! };
+      if (segment(t1)) return { t, y, tCross: tc, energyIn: state[1]! };
     }
   }
   if (tEnd - tc > 1e-12 * tEnd) { // 'off': no power after the profile
     power = 0;
-    const r = integrateAdaptive(sys, tc, state, tEnd, opts);
-    state.set(r.y);
-    if (r.stoppedByEvent) return { t, y, tCross: r.t, energyIn: state[1]! };
+    if (segment(tEnd)) return { t, y, tCross: tc, energyIn: state[1]! };
   }
   return { t, y, tCross: undefined, energyIn: state[1]! };
 }

@@ -1,6 +1,6 @@
 import { ComputationError, NON_NEGATIVE, POSITIVE, requireInRange } from '../errors.ts';
 import { bracketRoots } from '../numeric/bracketRoots.ts';
-import { BODY_T_RANGE, bodyCooling, type Body } from './bodyCooling.ts';
+import { BODY_T_RANGE, bodyCooling, bodyHeatLoss, type Body } from './bodyCooling.ts';
 import { requireBalanced } from './checkedRoot.ts';
 import { fadeCoefficient, type FadeModel } from './fadeCoefficient.ts';
 import { timeToLimit } from './warmUpWithLoss.ts';
@@ -72,7 +72,7 @@ export function fadeEquilibrium(body: Body, model: FadeModel, duty: FadeDuty, Tl
     requireInRange('omega', duty.omega, NON_NEGATIVE, 'rad/s');
   } else requireInRange('P', duty.P, NON_NEGATIVE, 'W');
   if (oil) requireInRange('Gob', oil.Gob, POSITIVE, 'W/K');
-  const Q = (T: number) => bodyCooling(body, T).Q;
+  const Q = bodyHeatLoss(body);
   const To = (T: number) => oilAtBody(Q(T), T, oil);
   // one node: To(T) = T, so P(T) and f(T) are the one-node expressions
   const P = (T: number) => dutyPower(duty, fadeCoefficient(model, To(T)));

@@ -8,7 +8,7 @@ export { churchillChuCylinder, CHURCHILL_CHU_CYLINDER_RA_MAX } from './churchill
 export { verticalPlateNusselt, verticalCylinderSlenderness } from './verticalPlate.ts';
 export { churchillBernstein, CHURCHILL_BERNSTEIN_REPR_MIN } from './churchillBernstein.ts';
 export { mixedConvection } from './mixedConvection.ts';
-export { bodyCooling, BODY_T_RANGE, type Body, type BodyCooling, type Orientation } from './bodyCooling.ts';
+export { bodyCooling, bodyHeatLoss, BODY_T_RANGE, type Body, type BodyCooling, type Orientation } from './bodyCooling.ts';
 export { steadyTemperature } from './steadyTemperature.ts';
 export { lumpedWarmUp, type LumpedBody } from './lumpedWarmUp.ts';
 export { onOffDuty } from './onOffDuty.ts';

@@ -1,5 +1,5 @@
 import { ComputationError, NON_NEGATIVE, requireInRange } from '../errors.ts';
-import { BODY_T_RANGE, bodyCooling, type Body, type BodyCooling } from './bodyCooling.ts';
+import { BODY_T_RANGE, bodyCooling, bodyHeatLoss, type Body, type BodyCooling } from './bodyCooling.ts';
 import { checkedRoot } from './checkedRoot.ts';
 import { ZERO_CELSIUS } from '../constants.ts';
 
@@ -25,7 +25,8 @@ export function steadyTemperature(body: Body, P: number): BodyCooling & { readon
   requireInRange('P', P, NON_NEGATIVE, 'W');
   const lo = Math.min(body.Tamb, body.Tsur ?? body.Tamb);
   const hi = BODY_T_RANGE.max;
-  const f = (T: number) => bodyCooling(body, T).Q - P;
+  const Q = bodyHeatLoss(body);
+  const f = (T: number) => Q(T) - P;
   const fHi = f(hi);
   if (fHi < 0) {
     throw new ComputationError(`the body cannot shed ${P.toPrecision(4)} W below ${hi} K (${(hi - ZERO_CELSIUS).toFixed(0)} °C): at that temperature it sheds only ${(fHi + P).toPrecision(4)} W`);

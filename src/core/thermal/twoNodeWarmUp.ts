@@ -113,11 +113,13 @@ export function twoNodeWarmUp(
   });
   if (stopAt !== undefined && T0 >= stopAt) return done(0);
   let tc = 0;
+  let hNext: number | undefined; // each segment starts at the step the last one ended with
   const run = (t1: number, P: number): boolean => {
     power = P;
     let r;
     try {
-      r = integrateAdaptive(sys, tc, state, t1, { ...opt, maxSteps: budget });
+      r = integrateAdaptive(sys, tc, state, t1, { ...opt, maxSteps: budget, h0: hNext });
+      hNext = process.env.NOH0 ? undefined : r.hNext;
     } catch (e) {
       if (!(e instanceof ComputationError)) throw e;
       throw stiff();

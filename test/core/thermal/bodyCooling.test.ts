@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { bodyCooling, powerFor, steadyTemperature, type Body } from './bodyFixtures.ts';
+import { bodyHeatLoss } from '../../../src/core/thermal/index.ts';
 import { ComputationError, InputRangeError } from '../../../src/core/errors.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
@@ -72,6 +73,15 @@ describe('steady temperature and rating', () => {
   it('steady temperature falls with area (longer or thicker body)', () => {
     fc.assert(fc.property(body, power, (b, P) => !safe(b, P) ||
       (steadyTemperature({ ...b, L: b.L * 1.3 }, P).Ts < steadyTemperature(b, P).Ts && steadyTemperature({ ...b, D: b.D * 1.3 }, P).Ts < steadyTemperature(b, P).Ts)), { seed: 1, numRuns: 60 });
+  });
+  it('bodyHeatLoss, the ODEs\' fast path, gives bodyCooling\'s Q bit for bit, mounts and sun included (property)', () => {
+    const withPaths = fc.record({ Gmount: fc.double({ min: 0, max: 5, noNaN: true }), Qsun: fc.double({ min: 0, max: 50, noNaN: true }) });
+    fc.assert(fc.property(body, withPaths, fc.double({ min: 200, max: 700, noNaN: true }), (b, paths, T) => {
+      const full = { ...b, ...paths };
+      return bodyHeatLoss(full)(T) === bodyCooling(full, T).Q && bodyHeatLoss(b)(T) === bodyCooling(b, T).Q;
+    }), { seed: 4, numRuns: 300 });
+    expect(() => bodyHeatLoss(TW)(199)).toThrow(InputRangeError);
+    expect(() => bodyHeatLoss({ ...TW, D: 0 })).toThrow(InputRangeError);
   });
   it('the rating rises with the allowed temperature', () => {
     fc.assert(fc.property(body, fc.double({ min: 330, max: 600, noNaN: true }), (b, T) => powerFor(b, T + 5) > powerFor(b, T)), { seed: 1, numRuns: 80 });
