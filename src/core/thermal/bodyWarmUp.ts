@@ -95,7 +95,7 @@ export function bodyWarmUp(Q: (T: number) => number, Cth: number, T0: number, p:
   const segment = (t1: number): boolean => {
     stepsInSegment = 0;
     const r = integrateAdaptive(sys, tc, state, t1, { ...opts, h0: hNext });
-    hNext = process.env.NOH0 ? undefined : r.hNext;
+    hNext = r.hNext;
     state.set(r.y);
     tc = r.t;
     if (r.stoppedByEvent) return true;

@@ -119,7 +119,7 @@ export function twoNodeWarmUp(
     let r;
     try {
       r = integrateAdaptive(sys, tc, state, t1, { ...opt, maxSteps: budget, h0: hNext });
-      hNext = process.env.NOH0 ? undefined : r.hNext;
+      hNext = r.hNext;
     } catch (e) {
       if (!(e instanceof ComputationError)) throw e;
       throw stiff();
