@@ -105,12 +105,9 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
     if (!denseReady) { denseCoefficients(tab, yPrev, y, w.k, hStep, dense); denseReady = true; }
     evalDense(dense, theta, out);
   };
-  const step: AcceptedStep = {
-    get t0() { return t - hStep; },
-    get t1() { return t; },
-    y0: yPrev,
-    get y1() { return y; },
-    interpolate: interp,
+  // one object for every accepted step, its times set before it is handed out (no getters on the hot path)
+  const step: { t0: number; t1: number; readonly y0: Float64Array; readonly y1: Float64Array; readonly interpolate: AcceptedStep['interpolate'] } = {
+    t0: t, t1: t, y0: yPrev, y1: y, interpolate: interp,
   };
 
   while (t < tEnd) {
@@ -155,6 +152,7 @@ export function integrateAdaptive(sys: OdeSystem, t0: number, y0: ArrayLike<numb
       });
       return { t: tEv, y: yAt, stoppedByEvent: true, stats, hNext: hStep };
     }
+    step.t0 = tPrev; step.t1 = t;
     opts.onStep?.(step);
     if (opts.stopAfter && t < tEnd && opts.stopAfter(t, y)) return { t, y, stoppedByEvent: false, stoppedEarly: true, stats, hNext: hStep };
     if (tab.fsal) w.k[0]!.set(w.k[s - 1]!);

@@ -6,12 +6,17 @@ const NEAR = 1e-3;
 const PROBE = 1e-3;
 const SECOND = 1 / 64;
 
-/** Vertex (θ, value) of the parabola through (a, ga), (a + d, gb), (a + 2d, gc); the middle point when it does not open downwards. */
-function vertex(a: number, d: number, ga: number, gb: number, gc: number): [number, number] {
+/** Vertex of the last `vertex` call: θ and value (module scratch: the search runs per step and allocates nothing). */
+let vTheta = 0;
+let vValue = 0;
+
+/** Vertex (θ, value) of the parabola through (a, ga), (a + d, gb), (a + 2d, gc), left in vTheta, vValue; the middle point when it does not open downwards. */
+function vertex(a: number, d: number, ga: number, gb: number, gc: number): void {
   const curv = ga - 2 * gb + gc;
-  if (!(curv < 0)) return [a + d, gb];
+  if (!(curv < 0)) { vTheta = a + d; vValue = gb; return; }
   const u = Math.max(-1, Math.min(1, (ga - gc) / (2 * curv))); // offset from the middle, in d
-  return [a + d + u * d, gb - 0.25 * (ga - gc) * u];
+  vTheta = a + d + u * d;
+  vValue = gb - 0.25 * (ga - gc) * u;
 }
 
 /** Number of watched quantities at most (|ż|, |F_d|, stored energy, |W|). */
@@ -44,7 +49,6 @@ export function stepPeaks(s: AcceptedStep, g: (t: number, y: ArrayLike<number>, 
   const n = running.length;
   const h = s.t1 - s.t0;
   for (let i = 0; i < 5; i++) g(s.t0 + 0.25 * i * h, states[i]!, vals, i * n);
-  const one = (th: number, q: number): number => { s.interpolate(th, tmp); g(s.t0 + th * h, tmp, probe, 0); return probe[q]!; };
   for (let q = 0; q < n; q++) {
     let j = 0;
     for (let i = 1; i < 5; i++) if (vals[i * n + q]! > vals[j * n + q]!) j = i;
@@ -54,15 +58,22 @@ export function stepPeaks(s: AcceptedStep, g: (t: number, y: ArrayLike<number>, 
     if (!(h > 0) || Math.max(best, run) === 0) continue;
     if (j === 4 || j === 0) {
       if (best < (1 - NEAR) * run) continue;
-      if (!(one(j === 4 ? 1 - PROBE : PROBE, q) > best)) continue; // rising through the end: the neighbour step's peak
+      if (!(at(s, g, tmp, j === 4 ? 1 - PROBE : PROBE, q) > best)) continue; // rising through the end: the neighbour step's peak
       j = j === 4 ? 3 : 1;
     }
-    const [th1, est] = vertex((j - 1) / 4, 0.25, vals[(j - 1) * n + q]!, best, vals[(j + 1) * n + q]!);
-    if (Math.max(est, best) < (1 - NEAR) * running[q]!) continue;
-    const lo = Math.max(0, th1 - SECOND), hi = Math.min(1, th1 + SECOND);
+    vertex((j - 1) / 4, 0.25, vals[(j - 1) * n + q]!, best, vals[(j + 1) * n + q]!);
+    if (Math.max(vValue, best) < (1 - NEAR) * running[q]!) continue;
+    const lo = Math.max(0, vTheta - SECOND), hi = Math.min(1, vTheta + SECOND);
     const d = (hi - lo) / 2;
-    const ga = one(lo, q), gb = one(lo + d, q), gc = one(hi, q);
-    const [th2] = vertex(lo, d, ga, gb, gc);
-    running[q] = Math.max(running[q]!, ga, gb, gc, one(th2, q));
+    const ga = at(s, g, tmp, lo, q), gb = at(s, g, tmp, lo + d, q), gc = at(s, g, tmp, hi, q);
+    vertex(lo, d, ga, gb, gc);
+    running[q] = Math.max(running[q]!, ga, gb, gc, at(s, g, tmp, vTheta, q));
   }
+}
+
+/** Quantity q at θ of the step, on the dense output. */
+function at(s: AcceptedStep, g: (t: number, y: ArrayLike<number>, out: Float64Array, at: number) => void, tmp: Float64Array, th: number, q: number): number {
+  s.interpolate(th, tmp);
+  g(s.t0 + th * (s.t1 - s.t0), tmp, probe, 0);
+  return probe[q]!;
 }
