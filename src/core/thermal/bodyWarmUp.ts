@@ -1,4 +1,4 @@
-import { ComputationError, POSITIVE, requireInRange } from '../errors.ts';
+import { ComputationError, InputRangeError, POSITIVE, requireInRange } from '../errors.ts';
 import { integrateAdaptive } from '../ode/integrate.ts';
 import { checkProfile, type PowerProfile, type ProfileEnd } from './powerProfile.ts';
 
@@ -78,7 +78,11 @@ export function bodyWarmUp(Q: (T: number) => number, Cth: number, T0: number, p:
     const d = (f > 0 ? 1 : -1) * (ATOL_T + RTOL * Math.abs(T));
     // a limit inside the interval would be crossed at an unknown time: integrate on
     if (stopAt !== undefined && (stopAt - T) * (stopAt - (T + d)) <= 0) return false;
-    if (f !== 0 && (power - Q(T + d)) * f > 0) return false;
+    if (f !== 0) {
+      let ahead: number;
+      try { ahead = power - Q(T + d); } catch (e) { if (e instanceof InputRangeError) return false; throw e; } // T + δ past Q's range: integrate on
+      if (ahead * f > 0) return false;
+    }
     settledAt = f === 0 ? T : T + 0.5 * d;
     return true;
   };
