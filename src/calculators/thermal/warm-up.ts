@@ -149,9 +149,9 @@ export const warmUpCalculator = defineCalculator({
       }
       if (!profile && num(values, 'duty') >= 1) {
         const Q = bodyHeatLoss(body);
-        outputs.tLimitBody = timeToLimit((T) => num(values, 'P') - Q(T), C, Tamb, Tlimit);
-      }
-      else {
+        const P = num(values, 'P');
+        outputs.tLimitBody = timeToLimit((T) => P - Q(T), C, Tamb, Tlimit);
+      } else {
         const tEnd = Math.max(10 * C / ss.UA, 3 * m.period);
         try {
           outputs.tLimitBody = bodyRun(values, m, tEnd, Tlimit).tCross;
