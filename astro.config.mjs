@@ -7,6 +7,7 @@ import rehypeKatex from 'rehype-katex';
 import { clientScripts } from './src/build/client-scripts.ts';
 import { serverModules } from './src/build/server-prebundle.ts';
 import { searchIndex } from './src/build/search-index.ts';
+import { handbookPages } from './src/build/handbook-pages.ts';
 
 const base = process.env.DAMPBOOK_BASE ?? '/';
 
@@ -33,13 +34,14 @@ export default defineConfig({
   // DAMPBOOK_CACHE: a separate content cache, so a test build of other content leaves this one alone
   cacheDir: process.env.DAMPBOOK_CACHE ?? './node_modules/.astro',
   trailingSlash: 'always',
-  build: { format: 'directory' },
+  build: { format: 'directory', concurrency: 4 },
   markdown: { remarkPlugins: [remarkMath], rehypePlugins: [[rehypeKatex, { output: 'htmlAndMathml', strict: 'warn' }], focusableDisplays] },
   // optimize: without it, math-heavy sites exhaust the heap (hundreds of KaTeX trees per page)
   // clientScripts: browser code is bundled by esbuild in one pass (src/build/client-scripts.ts)
   // serverModules: the pages' own TypeScript too, for the server pass (src/build/server-prebundle.ts)
   // searchIndex: the offline search index, fed each page as it is rendered (src/build/search-index.ts)
-  integrations: [mdx({ optimize: true }), clientScripts(), serverModules(), searchIndex()],
+  // handbookPages: the content folder's pages as one module (src/build/handbook-pages.ts)
+  integrations: [mdx({ optimize: true }), handbookPages(), clientScripts(), serverModules(), searchIndex()],
   devToolbar: { enabled: false },
   vite: {
     // never inline scripts or assets: the Content-Security-Policy allows only same-origin files.

@@ -8,7 +8,7 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
-          include: ['test/core/**/*.test.ts', 'test/components/**/*.test.ts', 'test/calculators/**/*.test.ts', 'test/cli/**/*.test.ts', 'test/content/**/*.test.ts', 'test/records/**/*.test.ts', 'test/sheets/**/*.test.ts', 'test/architecture/**/*.test.ts', 'test/studies/**/*.test.ts'],
+          include: ['test/core/**/*.test.ts', 'test/components/**/*.test.ts', 'test/calculators/**/*.test.ts', 'test/cli/**/*.test.ts', 'test/content/**/*.test.ts', 'test/records/**/*.test.ts', 'test/sheets/**/*.test.ts', 'test/architecture/**/*.test.ts', 'test/studies/**/*.test.ts', 'test/build/**/*.test.ts'],
           testTimeout: 30_000,
         },
       },

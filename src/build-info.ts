@@ -1,14 +1,14 @@
 /**
  * Identity of this build, printed in every page footer and sheet: the package version (the core
  * version a result is traceable to) and a hash of the handbook's content and core sources.
- * The content hashed is the folder actually built (`DAMPBOOK_CONTENT`, as src/content.config.ts
+ * The content hashed is the folder actually built (`DAMPBOOK_CONTENT`, as src/build/handbook-pages.ts
  * reads it; default ./content). Server-only (reads files at build time).
  */
 import { createHash } from 'node:crypto';
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, sep } from 'node:path';
 
-/** The content folder a build reads (the same rule as src/content.config.ts). */
+/** The content folder a build reads (the same rule as src/build/handbook-pages.ts and src/site.config.ts). */
 export function contentDir(): string {
   return process.env.DAMPBOOK_CONTENT ?? './content';
 }

@@ -16,3 +16,17 @@ declare module 'virtual:dampbook/client' {
   /** Calculator id → every chunk URL of its definition (empty in dev). */
   export const calculatorPreloads: Readonly<Record<string, readonly string[]>>;
 }
+
+// Every page file of the content folder as its MDX module (src/build/handbook-pages.ts).
+declare module 'virtual:dampbook/pages' {
+  const files: readonly {
+    readonly id: string;
+    readonly filePath: string;
+    readonly module: {
+      default: import('astro/runtime/server/index.js').AstroComponentFactory;
+      frontmatter?: unknown;
+      getHeadings?: () => import('astro').MarkdownHeading[];
+    };
+  }[];
+  export default files;
+}

@@ -5,6 +5,7 @@
  */
 import { defineMiddleware } from 'astro:middleware';
 import { SEARCH_FEED, type SearchFeed } from './search-feed-key.ts';
+import { withoutKatex } from './searchText.ts';
 
 /** The output file of a page address (base already removed; always ends in '/'). */
 export function outputPath(route: string, pathname: string): string {
@@ -19,6 +20,6 @@ export const onRequest = defineMiddleware(async (context, next) => {
   const html = await response.text();
   const base = import.meta.env.BASE_URL;
   const path = context.url.pathname.startsWith(base) ? `/${context.url.pathname.slice(base.length)}` : context.url.pathname;
-  feed(outputPath(context.routePattern, path.endsWith('/') ? path : `${path}/`), html);
+  feed(outputPath(context.routePattern, path.endsWith('/') ? path : `${path}/`), withoutKatex(html));
   return new Response(html, { status: response.status, statusText: response.statusText, headers: response.headers });
 });

@@ -24,7 +24,7 @@ export const SEARCH_EXCLUDE = ['.katex', '.calc-inputs', '.chart-canvas'];
 const STOCK_UI = /^pagefind-((component-|modular-)?ui|highlight)\./;
 
 export function searchIndex(): AstroIntegration {
-  let index: pagefind.PagefindIndex | undefined;
+  let starting: Promise<pagefind.PagefindIndex> | undefined;
   const pending: Promise<pagefind.NewFileResponse>[] = [];
   const fed = new Set<string>();
   const slot = globalThis as { [SEARCH_FEED]?: SearchFeed; [SEARCH_STATS]?: SearchStats };
@@ -35,23 +35,30 @@ export function searchIndex(): AstroIntegration {
         // outermost ('pre'), so it sees the HTML exactly as written
         if (command === 'build') addMiddleware({ entrypoint: new URL('src/build/search-feed.ts', config.root), order: 'pre' });
       },
-      'astro:build:start': async () => {
-        const created = await pagefind.createIndex({ excludeSelectors: SEARCH_EXCLUDE });
-        if (!created.index) throw new Error(`search index: ${created.errors.join('; ')}`);
-        index = created.index;
-        const ready = index;
+      'astro:build:start': () => {
+        // not awaited: the service starts (a process of its own) while Vite bundles the pages;
+        // the first page fed, long after, waits for it if it must
+        starting = pagefind.createIndex({ excludeSelectors: SEARCH_EXCLUDE }).then((created) => {
+          if (!created.index) throw new Error(`search index: ${created.errors.join('; ')}`);
+          return created.index;
+        });
+        starting.catch(() => undefined); // the failure surfaces where the build awaits it
+        const ready = starting;
         slot[SEARCH_FEED] = (sourcePath, content) => {
           // a page rendered twice (it cannot be, but a second copy would be a second result)
           if (fed.has(sourcePath)) return;
           fed.add(sourcePath);
-          pending.push(ready.addHTMLFile({ sourcePath, content }));
+          const added = ready.then((index) => index.addHTMLFile({ sourcePath, content }));
+          added.catch(() => undefined); // awaited, with its failure, in astro:build:done
+          pending.push(added);
         };
       },
       'astro:build:done': async ({ dir, logger }) => {
         delete slot[SEARCH_FEED];
-        if (!index) return;
+        if (!starting) return;
         const t0 = performance.now();
         try {
+          const index = await starting;
           const added = await Promise.all(pending);
           const errors = added.flatMap((r) => r.errors);
           if (errors.length) throw new Error(`search index: ${errors.join('; ')}`);

@@ -1,13 +1,13 @@
 /**
  * Reads handbook pages for the CLI: every `content/**\/*.mdx` (files starting with _ are not
- * pages, as in src/content.config.ts), its YAML frontmatter validated with the same schema the
+ * pages, src/content/pageFiles.ts), its YAML frontmatter validated with the same schema the
  * site build uses. YAML 1.2 core rules, as Astro's js-yaml parser applies them (`n`, `y`, `on` stay strings; dates are coerced by the schema).
  */
-import { lstatSync, readdirSync, realpathSync, statSync } from 'node:fs';
-import { join, relative, sep } from 'node:path';
+import { relative, sep } from 'node:path';
 import { parseDocument } from 'yaml';
 import { topicTitles } from '../content/handbookConfig.ts';
 import { readHandbookConfig } from '../content/readHandbookConfig.ts';
+import { findPageFiles, pageIdOf, unreadableReason } from '../content/pageFiles.ts';
 import { pageSchema, pageSchemaFor, type PageMeta } from '../content/schema.ts';
 import { FileReadError, readBoundedFile } from './readFile.ts';
 
@@ -21,40 +21,6 @@ export interface PageFile {
   readonly errors: readonly string[];
 }
 
-/** A folder entry that cannot be read (dangling link, link loop, no permission): reported, not fatal. */
-interface Entry { readonly file: string; readonly reason?: string }
-
-function why(e: unknown): string {
-  const code = (e as { code?: string }).code;
-  if (code === 'ENOENT') return 'dangling symbolic link (its target does not exist)';
-  if (code === 'ELOOP') return 'symbolic link loop';
-  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
-  return `cannot be read (${code ?? 'unknown error'})`;
-}
-
-/**
- * Every page file under `dir`. A folder reached twice (a link back to a parent) is walked once;
- * an entry that cannot be read is listed with its reason and the walk goes on.
- */
-function walk(dir: string, out: Entry[], seen: Set<string>): void {
-  let real: string;
-  try { real = realpathSync(dir); } catch (e) { out.push({ file: dir, reason: why(e) }); return; }
-  if (seen.has(real)) return;
-  seen.add(real);
-  let names: string[];
-  try { names = readdirSync(dir).sort(); } catch (e) { out.push({ file: dir, reason: why(e) }); return; }
-  for (const name of names) {
-    const p = join(dir, name);
-    let isDir: boolean;
-    try { isDir = statSync(p).isDirectory(); } catch (e) {
-      if (name.endsWith('.mdx') || lstatSync(p).isSymbolicLink()) out.push({ file: p, reason: why(e) });
-      continue;
-    }
-    if (isDir) walk(p, out, seen);
-    else if (name.endsWith('.mdx') && !name.startsWith('_')) out.push({ file: p });
-  }
-}
-
 /** Largest page file read (a page is text; a bigger file is reported, not read). */
 const MAX_PAGE_BYTES = 16 * 1024 * 1024;
 
@@ -63,9 +29,9 @@ const FRONTMATTER = /^---\r?\n([\s\S]*?)\r?\n---(?:\r?\n|$)/;
 type PageSchema = ReturnType<typeof pageSchemaFor>;
 
 export function readPage(file: string, contentDir: string, schema: PageSchema = pageSchema): PageFile {
-  const entry = relative(contentDir, file).split(sep).join('/').replace(/\.mdx$/, '').toLowerCase();
+  const entry = pageIdOf(file, contentDir);
   let text: string;
-  try { text = readBoundedFile(file, MAX_PAGE_BYTES).text; } catch (e) { return { file, entry, errors: [e instanceof FileReadError ? e.message : why(e)] }; }
+  try { text = readBoundedFile(file, MAX_PAGE_BYTES).text; } catch (e) { return { file, entry, errors: [e instanceof FileReadError ? e.message : unreadableReason(e)] }; }
   return { file, entry, ...parsePage(text, schema) };
 }
 
@@ -96,7 +62,5 @@ export function parsePage(text: string, schema: PageSchema = pageSchema): { meta
 /** Every page of a handbook folder, checked against the topics of its handbook.config.json. */
 export function readPages(contentDir: string): PageFile[] {
   const schema = pageSchemaFor(topicTitles(readHandbookConfig(contentDir)));
-  const entries: Entry[] = [];
-  walk(contentDir, entries, new Set());
-  return entries.map((e) => (e.reason === undefined ? readPage(e.file, contentDir, schema) : { file: e.file, entry: relative(contentDir, e.file).split(sep).join('/'), errors: [e.reason] }));
+  return findPageFiles(contentDir).map((e) => (e.reason === undefined ? readPage(e.file, contentDir, schema) : { file: e.file, entry: relative(contentDir, e.file).split(sep).join('/'), errors: [e.reason] }));
 }

@@ -1,6 +1,6 @@
 /**
  * The page metadata schema: one zod schema is the source of the frontmatter's types, defaults
- * and validation, used by the Astro content collection and by `dampbook check`.
+ * and validation, used by the site build (src/content/pageIndex.ts) and by `dampbook check`.
  */
 import { z } from 'zod';
 import { caseSchema, PROVENANCE, sourceRefSchema } from '../calculators/caseSchema.ts';
