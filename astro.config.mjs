@@ -18,10 +18,15 @@ const base = process.env.DAMPBOOK_BASE ?? '/';
 function focusableDisplays() {
   const walk = (node) => {
     const cls = node.properties?.className;
-    if (node.type === 'element' && Array.isArray(cls) && cls.includes('katex-display')) {
-      node.properties.tabIndex = 0;
-      node.properties.role = 'group';
-      node.properties.ariaLabel = 'equation';
+    if (node.type === 'element' && Array.isArray(cls)) {
+      if (cls.includes('katex-display')) {
+        node.properties.tabIndex = 0;
+        node.properties.role = 'group';
+        node.properties.ariaLabel = 'equation';
+        return;
+      }
+      // KaTeX's own tree (thousands of nodes on a math-heavy page) holds no display of its own
+      if (cls.includes('katex')) return;
     }
     for (const child of node.children ?? []) walk(child);
   };
